@@ -1,0 +1,104 @@
+import cookieParser from 'cookie-parser';
+import express, { type Express, type NextFunction, type Request, type Response } from 'express';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { pinoHttp } from 'pino-http';
+import swaggerUi from 'swagger-ui-express';
+import type { DataSource } from 'typeorm';
+import { config } from './config.js';
+import { ForbiddenError, UnauthorizedError } from './errors.js';
+import { readSessionUserId } from './http/auth.js';
+import { errorHandler, notFoundHandler } from './http/errorHandler.js';
+import { buildOpenApi } from './http/openapi.js';
+import type { RouteDef } from './http/route.js';
+import { validate } from './http/validation.js';
+import { logger } from './logger.js';
+import { allRoutes } from './routes/index.js';
+import { activeUser, toSessionUser } from './services/users.js';
+import { can } from '../shared/permissions.js';
+import type { SessionUser } from '../shared/types/api.js';
+
+export interface AppOptions {
+  ds: DataSource;
+  routes?: RouteDef[];
+  serveClient?: boolean;
+}
+
+/** Run an async step; errors go to the error middleware, success continues only when `proceed` is set. */
+const wrap =
+  (fn: (req: Request, res: Response) => Promise<void>, proceed = false) =>
+  (req: Request, res: Response, next: NextFunction): void => {
+    fn(req, res).then(() => (proceed ? next() : undefined), next);
+  };
+
+function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
+  const authn = wrap(async (req, res) => {
+    let user: SessionUser | null = null;
+    if (r.access !== 'public') {
+      const id = readSessionUserId(req);
+      const u = id ? await activeUser(ds, id) : null;
+      if (!u) throw new UnauthorizedError();
+      user = toSessionUser(u);
+      if (r.access !== 'signed-in' && !can(user.role, r.access))
+        throw new ForbiddenError(`Your role (${user.role}) may not ${r.access.replace('.', ' ')}`);
+    }
+    res.locals.user = user;
+  }, true);
+  const run = wrap(async (req, res) => {
+    const params = r.params ? validate(r.params, { ...req.params }, 'params') : req.params;
+    const query = r.query ? validate(r.query, { ...(req.query as object) }, 'query') : {};
+    const body = r.body ? validate(r.body, req.body ?? {}, 'body') : req.body;
+    const out = await r.handler({ user: res.locals.user as SessionUser, body, query, params, req, res, ds });
+    if (res.headersSent) return;
+    if (out === undefined) res.status(204).end();
+    else res.status(res.statusCode !== 200 ? res.statusCode : (r.status ?? 200)).json(out);
+  });
+  const chain = [authn, ...(r.before ?? []), run];
+  router[r.method](r.path, ...chain);
+}
+
+/** Express app factory; the listener lives in main.ts so tests can drive the app with supertest. */
+export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOptions): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', false);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+    }),
+  );
+  app.use(pinoHttp({ logger, autoLogging: !config.isTest }));
+  app.use(cookieParser());
+  app.use('/api', express.json({ limit: config.bodyLimit }));
+
+  const api = express.Router();
+  for (const r of routes) mountRoute(api, ds, r);
+  const openapi = buildOpenApi(routes, '1');
+  api.get('/openapi.json', (_req, res) => {
+    res.json(openapi);
+  });
+  api.use('/docs', swaggerUi.serve, swaggerUi.setup(openapi, { customSiteTitle: 'Frothline API' }));
+  app.use('/api', api);
+  app.use('/api', notFoundHandler);
+
+  const dist = config.clientDist;
+  if (serveClient && existsSync(path.join(dist, 'index.html'))) {
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.get('/*splat', (_req, res) => {
+      res.sendFile(path.join(dist, 'index.html'));
+    });
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,22 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { config } from '../config.js';
+import { entities } from './entities/index.js';
+import { migrations } from './migrations/index.js';
+
+/** The one data source: used by the server, the seed and the migration CLI. Never synchronize. */
+export function makeDataSource(url = config.databaseUrl): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url,
+    entities,
+    migrations,
+    synchronize: false,
+    migrationsRun: false,
+    logging: false,
+    extra: { max: 20 },
+  });
+}
+
+export const AppDataSource = makeDataSource();
+export default AppDataSource;

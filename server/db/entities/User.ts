@@ -1,0 +1,17 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
+import type { Role } from '../../../shared/permissions.js';
+import type { UnitSystem } from '../../../shared/types/api.js';
+
+@Entity({ name: 'users' })
+export class User {
+  @PrimaryGeneratedColumn('uuid') id: string;
+  @Column({ type: 'text', unique: true }) email: string;
+  @Column({ type: 'text' }) name: string;
+  @Column({ type: 'text' }) role: Role;
+  @Column({ type: 'text', name: 'password_hash' }) passwordHash: string;
+  @Column({ type: 'boolean', default: true }) active: boolean;
+  @Column({ type: 'text', name: 'unit_system', default: 'SI' }) unitSystem: UnitSystem;
+  @CreateDateColumn({ type: 'timestamptz', name: 'created_at' }) createdAt: Date;
+  @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' }) updatedAt: Date;
+  @VersionColumn({ type: 'integer' }) version: number;
+}

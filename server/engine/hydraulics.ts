@@ -1,0 +1,194 @@
+/**
+ * Load-dependent hydraulics of one tray: composes the correlations (SI in, SI out) into the numbers
+ * every check needs. Warnings go to `out` (pass null to skip them, e.g. inside solvers).
+ */
+import type { EngineWarning, TrayDetails, TrayLoad } from '../../shared/types/rating.js';
+import type { PreparedSection } from './prepare.js';
+import {
+  fairFloodCapacityLygerosMagoulas, fairSurfaceTensionCorrection, floodVelocitySoudersBrown,
+  highPressureSystemFactorKister, kisterHaasFloodCapacity, transitionClearLiquidHeightKisterHaas,
+} from './flooding.js';
+import { FAIR_ENTRAINMENT_DATA_SPAN, entrainedLiquidRate, fairEntrainmentOwnFit } from './entrainment.js';
+import {
+  clearLiquidHeightBennett, dryTrayHeadK, dryTrayHeadKleinValve, dryTrayHeadOrifice, headToPascal,
+  kleinClosedBalanceVelocity, residualHeadBennett,
+} from './pressureDrop.js';
+import { eduljeeK2OwnFit, weepPointHoleVelocityEduljee, weepPointHoleVelocityFair } from './weeping.js';
+import { crestOverWeirFrancis, weirLoadingVolumetric } from './weir.js';
+import { apronHeadLoss, downcomerBackupClear, downcomerInletVelocity, downcomerResidenceTimeApparent, downcomerSealKister } from './downcomer.js';
+import { REPORT_CAP, S_PER_H, finiteOrCap, safeNumber } from './units.js';
+import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
+
+export interface Hydraulics {
+  details: TrayDetails;
+  percentFlood: number;
+  floodMethod: string;
+  weepRatio: number;
+  weepMethod: string;
+  dryMethod: string;
+}
+
+const FAIR = fairFloodCapacityLygerosMagoulas.meta;
+const KH = kisterHaasFloodCapacity.meta;
+const ENT = fairEntrainmentOwnFit.meta;
+const K2 = eduljeeK2OwnFit.meta;
+const [ENT_LO, ENT_HI] = FAIR_ENTRAINMENT_DATA_SPAN;
+
+function allFinite(d: TrayDetails): boolean {
+  let sum = 0; // a non-finite entry makes the sum non-finite (so does overflow: then the loop below is a no-op)
+  for (const k in d) sum += d[k]!;
+  return Number.isFinite(sum);
+}
+
+export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWarning[] | null): Hydraulics {
+  const tray = load.tray;
+  const rhoV = load.vapourDensity_kg_m3;
+  const rhoL = load.liquidDensity_kg_m3;
+  const sigma = load.surfaceTension_mN_m;
+  const V = load.vapourMassFlow_kg_h / S_PER_H;
+  const L = load.liquidMassFlow_kg_h / S_PER_H;
+  const qV = V / rhoV;
+  const qL = L / rhoL;
+  const uN = qV / p.netArea;
+  const uA = qV / p.activeArea;
+  const uH = qV / p.holeArea;
+  const flv = V > 0 ? ((L / (V * p.passes)) * Math.sqrt(rhoV / rhoL)) : 0;
+
+  // Jet flood: Fair (always, it also feeds the entrainment chart) and Kister & Haas.
+  const flvChart = flv < 0.01 ? 0.01 : flv > 1 ? 1 : flv;
+  if (out && V > 0) checkRange(out, FAIR, 'flowParameter', flv, tray, `capacity factor evaluated at the chart edge ${flvChart}`);
+  const cFair =
+    fairFloodCapacityLygerosMagoulas(flvChart, p.traySpacing_mm) * p.holeAreaCorrection * fairSurfaceTensionCorrection(sigma) * p.systemFactor;
+  const uFloodFair = floodVelocitySoudersBrown(cFair, rhoL, rhoV);
+  const pctFair = uN > 0 ? (100 * uN) / uFloodFair : 0;
+  const weirLoad = weirLoadingVolumetric(qL, p.weirLength);
+  const qKH = weirLoad < 3 ? 3 : weirLoad;
+  const hct = transitionClearLiquidHeightKisterHaas(p.holeDiameter_mm, p.holeAreaRatio, qKH, rhoL);
+  const cKH = kisterHaasFloodCapacity(p.holeDiameter_mm, sigma, rhoL, rhoV, p.traySpacing_mm, hct) * p.systemFactor;
+  const uFloodKH = floodVelocitySoudersBrown(cKH, rhoL, rhoV);
+  const pctKH = uN > 0 ? (100 * uN) / uFloodKH : 0;
+  const useKH = p.jetMethod === 'kister-haas';
+  if (out && useKH) {
+    checkRange(out, KH, 'weirLoad_m3_h_m', weirLoad, tray, weirLoad < 3 ? 'evaluated at 3 m³/(h·m) (conservative)' : 'value extrapolated');
+    checkRange(out, KH, 'vapourDensity_kg_m3', rhoV, tray);
+    checkRange(out, KH, 'liquidDensity_kg_m3', rhoL, tray);
+    checkRange(out, KH, 'surfaceTension_mN_m', sigma, tray);
+    if (load.pressure_kPa !== undefined) checkRange(out, KH, 'pressure_kPa', load.pressure_kPa, tray);
+    if (load.liquidViscosity_mPa_s !== undefined) checkRange(out, KH, 'liquidViscosity_mPa_s', load.liquidViscosity_mPa_s, tray);
+  }
+  const pctFlood = useKH ? pctKH : pctFair;
+
+  // Entrainment (Fair chart, own fit) on Fair's percent flood.
+  const flvEnt = flv < ENT_LO ? ENT_LO : flv > ENT_HI ? ENT_HI : flv;
+  if (out && V > 0) {
+    checkRange(out, ENT, 'flowParameter', flv, tray, `evaluated at ${flvEnt}${flv > ENT_HI ? ' (overstates entrainment)' : ''}`);
+    checkRange(out, ENT, 'percentFlood', pctFair, tray, pctFair < 30 ? 'psi taken proportional to percent flood below the lowest chart curve' : 'fit extrapolated');
+  }
+  const psi = fairEntrainmentOwnFit(flvEnt, pctFair / 100);
+  const entrained = entrainedLiquidRate(psi, load.liquidMassFlow_kg_h);
+
+  // Pressure drop.
+  let hd: number;
+  let dryMethod: string;
+  let balanceHead = 0;
+  if (p.trayType === 'sieve') {
+    hd = dryTrayHeadOrifice(uH, p.orificeCoefficient, rhoV, rhoL);
+    dryMethod = dryTrayHeadOrifice.meta.id;
+  } else if (p.trayType === 'fixed-valve') {
+    hd = dryTrayHeadK(uH, p.dryK, rhoV, rhoL);
+    dryMethod = dryTrayHeadK.meta.id;
+  } else {
+    balanceHead = p.balanceNumerator / rhoL;
+    hd = dryTrayHeadKleinValve(uH, rhoV, rhoL, p.closedK, p.dryK, balanceHead);
+    dryMethod = dryTrayHeadKleinValve.meta.id;
+  }
+  const hL = clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, p.weirLength);
+  const hSigma = residualHeadBennett(sigma, rhoL, p.holeDiameter_mm);
+  const hT = hd + hL + hSigma;
+
+  // Weir.
+  const crest = crestOverWeirFrancis(qL, p.weirLength);
+
+  // Weeping.
+  let uWeep: number;
+  let weepMethod: string;
+  let uEdu = 0;
+  let uFairWeep = 0;
+  if (p.trayType === 'moving-valve') {
+    const v = p.valves;
+    uWeep = kleinClosedBalanceVelocity(v.legFactor, v.valveThickness_mm, v.materialDensity_kg_m3, p.closedK, rhoV);
+    weepMethod = kleinClosedBalanceVelocity.meta.id;
+  } else {
+    uFairWeep = weepPointHoleVelocityFair({
+      dryK: p.dryK, holeAreaRatio: p.holeAreaRatio, vapourDensity: rhoV, liquidDensity: rhoL,
+      weirHeight_mm: p.weirHeight_mm, liquid_m3_s: qL, weirLength_m: p.weirLength, residualHead_mm: hSigma,
+    });
+    uWeep = uFairWeep;
+    weepMethod = weepPointHoleVelocityFair.meta.id;
+    if (p.trayType === 'sieve') {
+      const head = p.weirHeight_mm + crest;
+      if (out) checkRange(out, K2, 'headAboveDeck_mm', head, tray);
+      uEdu = weepPointHoleVelocityEduljee(eduljeeK2OwnFit(head), p.holeDiameter_mm, rhoV);
+      if (uEdu > uWeep) {
+        uWeep = uEdu;
+        weepMethod = weepPointHoleVelocityEduljee.meta.id;
+      }
+    }
+  }
+  const weepRatio = uWeep > 0 ? uH / uWeep : REPORT_CAP;
+
+  // Downcomer.
+  const hda = apronHeadLoss(qL, p.apronArea);
+  const clear = downcomerBackupClear(hT, p.weirHeight_mm, crest, hda);
+  const aerated = clear / p.limits.aerationFactor;
+  const residence = qL > 0 ? downcomerResidenceTimeApparent(p.downcomerTopArea, p.downcomerBottomArea, p.traySpacing_mm, qL) : REPORT_CAP;
+
+  if (out) {
+    if (L === 0) out.push(warning(WARNING_CODES.dryTray, 'zero liquid: dry tray (no crest over the weir, no downcomer seal from liquid flow).', tray));
+    else if (crest < p.limits.liquidLoad)
+      out.push(warning(WARNING_CODES.lowCrest,
+        `crest over the weir ${formatNumber(crest)} mm is below ${p.limits.liquidLoad} mm: risk of drying out and liquid maldistribution; consider a picket-fence (notched) weir.`, tray));
+    if (V === 0) out.push(warning(WARNING_CODES.noVapour, 'zero vapour: the tray dumps its liquid through the deck (weeping).', tray));
+    if (pctFlood >= 100) out.push(warning(WARNING_CODES.beyondFlood, `percent of jet flood ${formatNumber(pctFlood)} % is beyond flood; correlations are extrapolated.`, tray));
+    if (p.systemFactor === 1 && rhoV > 28.8)
+      out.push(warning(WARNING_CODES.highPressureDerating,
+        `vapour density ${formatNumber(rhoV)} kg/m³ > 28.8: Kister (1992) Table 6.7 suggests a system factor of ${formatNumber(highPressureSystemFactorKister(rhoV))}.`, tray));
+  }
+
+  const details: TrayDetails = {
+    flowParameter: finiteOrCap(flv),
+    capacityFactor_m_s: uN * Math.sqrt(rhoV / (rhoL - rhoV)),
+    fFactor_Pa05: uN * Math.sqrt(rhoV),
+    netAreaVelocity_m_s: uN,
+    floodVelocity_m_s: useKH ? uFloodKH : uFloodFair,
+    floodCapacityFactor_m_s: useKH ? cKH : cFair,
+    percentFloodFair: pctFair,
+    percentFloodKisterHaas: pctKH,
+    bubblingAreaVelocity_m_s: uA,
+    holeVelocity_m_s: uH,
+    weepPointHoleVelocity_m_s: uWeep,
+    weepPointEduljee_m_s: uEdu,
+    weepPointFair_m_s: uFairWeep,
+    turndownRatio: weepRatio,
+    orificeCoefficient: p.orificeCoefficient,
+    dryPressureDrop_mm: hd,
+    clearLiquidHeight_mm: hL,
+    residualHead_mm: hSigma,
+    totalHead_mm: hT,
+    crestOverWeir_mm: crest,
+    weirLoading_m3_h_m: weirLoad,
+    downcomerInletVelocity_m_s: downcomerInletVelocity(qL, p.downcomerTopArea),
+    downcomerHeadLoss_mm: hda,
+    downcomerClearBackup_mm: clear,
+    downcomerAeratedBackup_mm: aerated,
+    downcomerBackupPercent: (100 * aerated) / (p.traySpacing_mm + p.weirHeight_mm),
+    downcomerSeal_mm: downcomerSealKister(clear, p.clearance_mm),
+    downcomerResidenceTime_s: residence,
+    entrainmentFraction: psi,
+    entrainedLiquid_kg_h: entrained,
+    totalPressureDrop_Pa: headToPascal(hT, rhoL),
+  };
+  // Safety net: every reported number finite (extreme but schema-valid inputs can overflow a power law).
+  if (!allFinite(details)) for (const k in details) details[k] = safeNumber(details[k]!);
+  return { details, percentFlood: pctFlood, floodMethod: useKH ? KH.id : FAIR.id, weepRatio, weepMethod, dryMethod };
+}

@@ -1,0 +1,147 @@
+/**
+ * Per-section preparation: everything that depends only on the geometry and the method options is
+ * computed once per section (areas, orifice coefficients, limits, geometry warnings), so that rating a
+ * tray only does the load-dependent work.
+ */
+import type { EngineWarning, FoamingClass, JetFloodMethod, MethodOptions, SectionGeometry, TrayType, ValveData } from '../../shared/types/rating.js';
+import { fairFloodCapacityLygerosMagoulas, fairHoleAreaCorrection, kisterHaasFloodCapacity } from './flooding.js';
+import { kleinClosedValveK, kleinOpenValveK, orificeCoefficientHughmarkOConnell } from './pressureDrop.js';
+import { weepPointHoleVelocityEduljee } from './weeping.js';
+import { resolveLimits, type ResolvedLimits } from './limits.js';
+import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
+
+export interface PreparedSection {
+  readonly section: SectionGeometry;
+  readonly trayType: TrayType;
+  readonly passes: number;
+  readonly jetMethod: JetFloodMethod;
+  readonly traySpacing_mm: number;
+  readonly weirHeight_mm: number;
+  readonly clearance_mm: number;
+  readonly holeDiameter_mm: number;
+  readonly netArea: number;
+  readonly activeArea: number;
+  readonly holeArea: number;
+  readonly holeAreaRatio: number;
+  readonly downcomerTopArea: number;
+  readonly downcomerBottomArea: number;
+  readonly apronArea: number;
+  readonly weirLength: number;
+  readonly systemFactor: number;
+  readonly foaming: FoamingClass;
+  readonly holeAreaCorrection: number;
+  /** sieve: fitted or given C_v; valves: equivalent sqrt(50.8/K_open) */
+  readonly orificeCoefficient: number;
+  /** dry-head coefficient K = h_d/(u_h² ρV/ρL) [s²·mm/m²] for sieve and fixed valves (open K for moving valves) */
+  readonly dryK: number;
+  readonly closedK: number;
+  /** R_vw t_v ρ_M (moving valves; divide by ρL for the balance head in mm) */
+  readonly balanceNumerator: number;
+  /** moving-valve data (a zero placeholder for other tray types) */
+  readonly valves: ValveData;
+  readonly limits: ResolvedLimits;
+  readonly nearPercent: number;
+  readonly sectionWarnings: readonly EngineWarning[];
+}
+
+const NO_VALVES: ValveData = Object.freeze({
+  count: 0, orificeDiameter_mm: 0, valveThickness_mm: 0, materialDensity_kg_m3: 0, legFactor: 1, orificeShape: 'flat',
+});
+
+export function prepareSection(section: SectionGeometry, methods: MethodOptions | undefined): PreparedSection {
+  const w: EngineWarning[] = [];
+  const foaming = section.foaming ?? 'moderate';
+  const systemFactor = section.systemFactor ?? 1;
+  const jetMethod = methods?.jetFlood ?? 'fair';
+  const limits = resolveLimits(foaming, methods);
+  const ts = section.traySpacing_mm;
+  const colArea = (Math.PI / 4) * section.columnDiameter_m * section.columnDiameter_m;
+  const holeAreaRatio = section.holeArea_m2 / section.activeArea_m2;
+  const tOverD = section.deckThickness_mm / section.holeDiameter_mm;
+
+  const fair = fairFloodCapacityLygerosMagoulas.meta;
+  checkRange(w, fair, 'traySpacing_mm', ts, undefined);
+  checkRange(w, fair, 'holeAreaRatio', holeAreaRatio, undefined, 'hole-area correction extrapolated below 0.06');
+  checkRange(w, fair, 'weirHeightOverTraySpacing', section.weirHeight_mm / ts, undefined, 'Fair assumes weir height < 15 % of tray spacing');
+  if (section.trayType === 'sieve') checkRange(w, fair, 'holeDiameter_mm', section.holeDiameter_mm, undefined, 'no hole-size correction applied');
+  if (jetMethod === 'kister-haas') {
+    const kh = kisterHaasFloodCapacity.meta;
+    checkRange(w, kh, 'traySpacing_mm', ts, undefined);
+    checkRange(w, kh, 'holeDiameter_mm', section.holeDiameter_mm, undefined);
+    checkRange(w, kh, 'fractionalHoleArea', holeAreaRatio, undefined);
+    checkRange(w, kh, 'weirHeight_mm', section.weirHeight_mm, undefined);
+  }
+
+  let orificeCoefficient: number;
+  let dryK: number;
+  let closedK = 0;
+  let balanceNumerator = 0;
+  if (section.trayType === 'sieve') {
+    if (section.orificeCoefficient !== undefined) {
+      orificeCoefficient = section.orificeCoefficient;
+    } else {
+      const hoc = orificeCoefficientHughmarkOConnell.meta;
+      checkRange(w, hoc, 'holeAreaRatio', holeAreaRatio, undefined);
+      checkRange(w, hoc, 'thicknessOverDiameter', tOverD, undefined);
+      orificeCoefficient = orificeCoefficientHughmarkOConnell(holeAreaRatio, tOverD);
+    }
+    dryK = 50.8 / (orificeCoefficient * orificeCoefficient);
+    checkRange(w, weepPointHoleVelocityEduljee.meta, 'holeDiameter_mm', section.holeDiameter_mm, undefined);
+  } else {
+    const shape = section.valves?.orificeShape ?? 'flat';
+    if (shape === 'flat') checkRange(w, kleinOpenValveK.meta, 'deckThickness_mm', section.deckThickness_mm, undefined, 'K held at the nearest table row');
+    dryK = kleinOpenValveK(shape, section.deckThickness_mm);
+    orificeCoefficient = Math.sqrt(50.8 / dryK);
+    if (section.trayType === 'moving-valve') {
+      const v = section.valves;
+      if (!v) throw new Error('section.valves is required for moving-valve trays');
+      closedK = kleinClosedValveK(v.orificeShape);
+      balanceNumerator = v.legFactor * v.valveThickness_mm * v.materialDensity_kg_m3;
+    }
+  }
+  const v = section.valves;
+  if (v && section.trayType !== 'sieve') {
+    const orifices = v.count * (Math.PI / 4) * (v.orificeDiameter_mm / 1000) ** 2;
+    if (Math.abs(orifices / section.holeArea_m2 - 1) > 0.25) {
+      w.push(warning(WARNING_CODES.valveAreaMismatch,
+        `valve count × orifice area (${formatNumber(orifices)} m²) differs from holeArea_m2 (${formatNumber(section.holeArea_m2)} m²) by more than 25 %; holeArea_m2 is used.`));
+    }
+  }
+  if ((foaming === 'high' || foaming === 'very-high') && systemFactor >= 1) {
+    w.push(warning(WARNING_CODES.foamingDerating,
+      `foaming class '${foaming}' with system factor ${systemFactor}: Fair's and Kister & Haas' flood correlations assume low- or non-foaming systems; consider a system factor below 1 (Kister 1992 Table 6.7).`));
+  }
+  if (section.downcomerBottomArea_m2 > section.downcomerTopArea_m2 * 1.001) {
+    w.push(warning(WARNING_CODES.downcomerBottomLarger, 'downcomer bottom area exceeds its top area; check the downcomer geometry.'));
+  }
+  const apron = Math.min((section.downcomerClearance_mm / 1000) * section.outletWeirLength_m, section.downcomerBottomArea_m2);
+  return {
+    section,
+    trayType: section.trayType,
+    passes: section.passes,
+    jetMethod,
+    traySpacing_mm: ts,
+    weirHeight_mm: section.weirHeight_mm,
+    clearance_mm: section.downcomerClearance_mm,
+    holeDiameter_mm: section.holeDiameter_mm,
+    netArea: colArea - section.downcomerTopArea_m2,
+    activeArea: section.activeArea_m2,
+    holeArea: section.holeArea_m2,
+    holeAreaRatio,
+    downcomerTopArea: section.downcomerTopArea_m2,
+    downcomerBottomArea: section.downcomerBottomArea_m2,
+    apronArea: apron,
+    weirLength: section.outletWeirLength_m,
+    systemFactor,
+    foaming,
+    holeAreaCorrection: fairHoleAreaCorrection(holeAreaRatio),
+    orificeCoefficient,
+    dryK,
+    closedK,
+    balanceNumerator,
+    valves: section.valves ?? NO_VALVES,
+    limits,
+    nearPercent: 100 * limits.nearFraction,
+    sectionWarnings: w,
+  };
+}

@@ -1,0 +1,63 @@
+/** Rate every tray of a section and summarise: worst value per check, controlling check, margin, turndown. */
+import { CHECK_NAMES } from '../../shared/types/rating.js';
+import type { CheckName, EngineWarning, RatingRequest, RatingResult, SectionSummary, SectionSummaryEntry, TrayResult } from '../../shared/types/rating.js';
+import { prepareSection } from './prepare.js';
+import { rateTrayPrepared } from './rateTray.js';
+import { ENGINE_VERSION } from './version.js';
+
+export function summarise(trays: readonly TrayResult[]): SectionSummary {
+  const worst: SectionSummaryEntry[] = [];
+  let controllingCheck: CheckName = CHECK_NAMES[0];
+  let controllingTray = trays[0]?.tray ?? 0;
+  let maxPct = -1;
+  for (const name of CHECK_NAMES) {
+    let best: SectionSummaryEntry | undefined;
+    for (const t of trays) {
+      const c = t.checks[name];
+      if (!best || c.percentOfLimit > best.percentOfLimit) {
+        best = { check: name, worstTray: t.tray, worstValue: c.value, percentOfLimit: c.percentOfLimit, status: c.status };
+      }
+    }
+    if (!best) continue;
+    worst.push(best);
+    if (best.percentOfLimit > maxPct) {
+      maxPct = best.percentOfLimit;
+      controllingCheck = name;
+      controllingTray = best.worstTray;
+    }
+  }
+  let turndown = Number.POSITIVE_INFINITY;
+  const traysOver: number[] = [];
+  const traysNear: number[] = [];
+  for (const t of trays) {
+    const r = t.details.turndownRatio ?? 0;
+    if (r < turndown) turndown = r;
+    let over = false;
+    let near = false;
+    for (const name of CHECK_NAMES) {
+      const s = t.checks[name].status;
+      if (s === 'over') over = true;
+      else if (s === 'near') near = true;
+    }
+    if (over) traysOver.push(t.tray);
+    else if (near) traysNear.push(t.tray);
+  }
+  return {
+    worst,
+    controllingCheck,
+    controllingTray,
+    marginToNearestLimit_percent: 100 - Math.max(maxPct, 0),
+    turndown: Number.isFinite(turndown) ? turndown : 0,
+    traysOver,
+    traysNear,
+  };
+}
+
+/** Rate all trays of a (validated) rating request. */
+export function rateSection(req: RatingRequest): RatingResult {
+  const prepared = prepareSection(req.section, req.methods);
+  const trays = new Array<TrayResult>(req.trays.length);
+  for (let i = 0; i < req.trays.length; i++) trays[i] = rateTrayPrepared(prepared, req.trays[i]!);
+  const warnings: EngineWarning[] = prepared.sectionWarnings.slice();
+  return { engineVersion: ENGINE_VERSION, trays, summary: summarise(trays), warnings };
+}

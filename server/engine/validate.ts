@@ -1,0 +1,88 @@
+/**
+ * Validation of a rating request: the JSON Schema (ajv, defaults applied) and then physics checks.
+ * Every error names the field by JSON path and, for tray entries, the tray number in the message.
+ */
+import { Ajv, type ErrorObject } from 'ajv';
+import { ratingRequestSchema } from '../../shared/schemas/ratingRequest.js';
+import type { RatingRequest } from '../../shared/types/rating.js';
+
+export interface FieldError {
+  path: string;
+  message: string;
+}
+export type ValidationResult = { ok: true; value: RatingRequest } | { ok: false; errors: FieldError[] };
+
+const ajv = new Ajv({ useDefaults: true, allErrors: true, strict: true });
+const validateSchema = ajv.compile<RatingRequest>(ratingRequestSchema);
+
+function trayLabel(raw: unknown, index: number): string {
+  const trays = (raw as { trays?: unknown } | null)?.trays;
+  const t = Array.isArray(trays) ? (trays[index] as { tray?: unknown } | undefined)?.tray : undefined;
+  return typeof t === 'number' ? `tray ${t}` : `trays[${index}]`;
+}
+
+function describe(raw: unknown, path: string, message: string): FieldError {
+  const m = /^\/trays\/(\d+)(?:\/|$)/.exec(path);
+  const field = path.split('/').filter(Boolean).pop() ?? '(request)';
+  const where = m ? `${trayLabel(raw, Number(m[1]))}, ${field}` : field;
+  return { path: path || '/', message: `${where}: ${message}` };
+}
+
+function fromAjv(raw: unknown, e: ErrorObject): FieldError {
+  let path = e.instancePath;
+  let message = e.message ?? 'is invalid';
+  const params = e.params as Record<string, unknown>;
+  if (e.keyword === 'required') {
+    path = `${path}/${String(params.missingProperty)}`;
+    message = 'is required';
+  } else if (e.keyword === 'additionalProperties') {
+    path = `${path}/${String(params.additionalProperty)}`;
+    message = 'is not a known field';
+  } else if (e.keyword === 'enum') {
+    message = `must be one of ${(params.allowedValues as unknown[]).map((v) => JSON.stringify(v)).join(', ')}`;
+  }
+  return describe(raw, path, message);
+}
+
+/** Physics consistency of a schema-valid request; each error names the tray (if any) and the field. */
+export function physicsErrors(req: RatingRequest): FieldError[] {
+  const errors: FieldError[] = [];
+  const s = req.section;
+  const add = (path: string, message: string): void => {
+    errors.push(describe(req, path, message));
+  };
+  const columnArea = (Math.PI / 4) * s.columnDiameter_m ** 2;
+  const used = s.activeArea_m2 + s.downcomerTopArea_m2 + s.downcomerBottomArea_m2;
+  if (used > columnArea * 1.005) {
+    add('/section/activeArea_m2',
+      `active area + downcomer top and bottom areas (${used.toPrecision(4)} m²) do not fit in the column cross-section (${columnArea.toPrecision(4)} m² for ${s.columnDiameter_m} m diameter)`);
+  }
+  if (s.holeArea_m2 >= s.activeArea_m2) add('/section/holeArea_m2', `hole area (${s.holeArea_m2} m²) must be smaller than the active area (${s.activeArea_m2} m²)`);
+  if (s.weirHeight_mm >= s.traySpacing_mm) add('/section/weirHeight_mm', `weir height (${s.weirHeight_mm} mm) must be below the tray spacing (${s.traySpacing_mm} mm)`);
+  if (s.downcomerClearance_mm >= s.traySpacing_mm) add('/section/downcomerClearance_mm', `downcomer clearance (${s.downcomerClearance_mm} mm) must be below the tray spacing (${s.traySpacing_mm} mm)`);
+  if (s.outletWeirLength_m > s.passes * s.columnDiameter_m * 1.001) {
+    add('/section/outletWeirLength_m', `outlet weir length (${s.outletWeirLength_m} m) exceeds ${s.passes} pass(es) × column diameter (${s.columnDiameter_m} m)`);
+  }
+  if (s.trayType === 'moving-valve' && !s.valves) add('/section/valves', 'is required for moving-valve trays (count, orifice diameter, valve thickness, material density, leg factor, orifice shape)');
+  const seen = new Map<number, number>();
+  req.trays.forEach((t, i) => {
+    const p = `/trays/${i}`;
+    if (!(t.vapourDensity_kg_m3 < t.liquidDensity_kg_m3)) {
+      add(`${p}/vapourDensity_kg_m3`, `vapour density (${t.vapourDensity_kg_m3} kg/m³) must be below the liquid density (${t.liquidDensity_kg_m3} kg/m³)`);
+    }
+    const first = seen.get(t.tray);
+    if (first !== undefined) add(`${p}/tray`, `tray number ${t.tray} appears twice (also at trays[${first}])`);
+    else seen.set(t.tray, i);
+  });
+  return errors;
+}
+
+/** Validate unknown JSON as a RatingRequest: schema (defaults filled in) then physics. Does not mutate its input. */
+export function validateRatingRequest(json: unknown): ValidationResult {
+  const copy: unknown = json === undefined ? undefined : structuredClone(json);
+  if (!validateSchema(copy)) {
+    return { ok: false, errors: (validateSchema.errors ?? []).map((e) => fromAjv(json, e)) };
+  }
+  const errors = physicsErrors(copy);
+  return errors.length > 0 ? { ok: false, errors } : { ok: true, value: copy };
+}

@@ -1,0 +1,63 @@
+/**
+ * One out-of-range policy for the whole engine: a correlation used outside the range stored in its
+ * metadata still returns its value, and a structured warning is added for the UI. Where the engine
+ * evaluates a chart fit at its edge instead of extrapolating, the warning says so (never silently).
+ */
+import type { EngineWarning } from '../../shared/types/rating.js';
+import type { MethodMeta } from './meta.js';
+
+/** Stable warning codes other than range warnings (`range:<methodId>:<input>`). */
+export const WARNING_CODES = {
+  dryTray: 'dry-tray',
+  lowCrest: 'low-crest',
+  noVapour: 'no-vapour',
+  beyondFlood: 'beyond-flood',
+  downcomerUnsealed: 'downcomer-unsealed',
+  valveAreaMismatch: 'valve-area-mismatch',
+  highPressureDerating: 'system-factor-high-pressure',
+  foamingDerating: 'system-factor-foaming',
+  fairRestriction: 'fair-restriction',
+  downcomerBottomLarger: 'downcomer-bottom-larger',
+  weirLoadingHigh: 'weir-loading-high',
+} as const;
+
+export function formatNumber(x: number): string {
+  if (x === 0) return '0';
+  const a = Math.abs(x);
+  return a >= 1e4 || a < 1e-3 ? x.toExponential(2) : String(Number(x.toPrecision(3)));
+}
+
+/** True when value lies in [min, max] of the method's range for `input` (or no range is stored). */
+export function inRange(meta: MethodMeta, input: string, value: number): boolean {
+  const r = meta.ranges[input];
+  return r === undefined || (value >= r[0] && value <= r[1]);
+}
+
+/**
+ * Push a range warning when `value` is outside the method's stored range for `input`.
+ * `action` says what the engine did about it (e.g. "evaluated at the chart edge 0.01").
+ */
+export function checkRange(
+  out: EngineWarning[],
+  meta: MethodMeta,
+  input: string,
+  value: number,
+  tray: number | undefined,
+  action = 'value extrapolated',
+): boolean {
+  const r = meta.ranges[input];
+  if (r === undefined || (value >= r[0] && value <= r[1])) return true;
+  const w: EngineWarning = {
+    code: `range:${meta.id}:${input}`,
+    message:
+      `${meta.label}: ${input} = ${formatNumber(value)} is outside its range ` +
+      `${formatNumber(r[0])}–${formatNumber(r[1])} (${meta.source.split(';')[0]}); ${action}.`,
+  };
+  if (tray !== undefined) w.tray = tray;
+  out.push(w);
+  return false;
+}
+
+export function warning(code: string, message: string, tray?: number): EngineWarning {
+  return tray === undefined ? { code, message } : { code, message, tray };
+}

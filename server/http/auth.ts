@@ -1,0 +1,45 @@
+import jwt from 'jsonwebtoken';
+import type { Request, Response } from 'express';
+import { config } from '../config.js';
+import type { SessionUser } from '../../shared/types/api.js';
+import type { Role } from '../../shared/permissions.js';
+
+export const SESSION_COOKIE = 'frothline_session';
+
+interface TokenClaims {
+  sub: string;
+  role: Role;
+}
+
+export function issueSession(res: Response, user: { id: string; role: Role }): void {
+  const token = jwt.sign({ role: user.role } satisfies Omit<TokenClaims, 'sub'>, config.jwtSecret, {
+    subject: user.id,
+    expiresIn: config.sessionMinutes * 60,
+    algorithm: 'HS256',
+  });
+  res.cookie(SESSION_COOKIE, token, {
+    httpOnly: true,
+    sameSite: 'strict',
+    secure: false, // served on loopback over http; put TLS in front for any shared deployment
+    maxAge: config.sessionMinutes * 60 * 1000,
+    path: '/',
+  });
+}
+
+export function clearSession(res: Response): void {
+  res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: 'strict', path: '/' });
+}
+
+/** Reads the session cookie; returns the user id or null for a missing, expired or forged token. */
+export function readSessionUserId(req: Request): string | null {
+  const token = (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];
+  if (!token) return null;
+  try {
+    const claims = jwt.verify(token, config.jwtSecret, { algorithms: ['HS256'] }) as jwt.JwtPayload;
+    return typeof claims.sub === 'string' ? claims.sub : null;
+  } catch {
+    return null;
+  }
+}
+
+export type { SessionUser };

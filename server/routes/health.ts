@@ -1,0 +1,23 @@
+import { defineRoutes } from '../http/route.js';
+import type { HealthBody } from '../../shared/types/api.js';
+
+export const healthRoutes = defineRoutes([
+  {
+    method: 'get',
+    path: '/health',
+    access: 'public',
+    summary: 'Service health and database reachability',
+    handler: async ({ ds, res }) => {
+      let database: HealthBody['database'] = 'unreachable';
+      try {
+        await ds.query('SELECT 1');
+        database = 'reachable';
+      } catch {
+        /* reported below */
+      }
+      const body: HealthBody = { status: database === 'reachable' ? 'ok' : 'degraded', database };
+      if (database !== 'reachable') res.status(503);
+      return body;
+    },
+  },
+]);

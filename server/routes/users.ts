@@ -1,0 +1,33 @@
+import { defineRoutes } from '../http/route.js';
+import { createUser, listUsers, updateUser } from '../services/users.js';
+import { createUserBody, updateUserBody } from '../../shared/schemas/auth.js';
+import { uuidParams } from '../../shared/schemas/common.js';
+import type { CreateUserBody, UpdateUserBody } from '../../shared/types/api.js';
+
+export const userRoutes = defineRoutes([
+  {
+    method: 'get',
+    path: '/users',
+    access: 'users.manage',
+    summary: 'List every user',
+    handler: async ({ ds }) => ({ items: await listUsers(ds) }),
+  },
+  {
+    method: 'post',
+    path: '/users',
+    access: 'users.manage',
+    summary: 'Create a user',
+    body: createUserBody,
+    status: 201,
+    handler: async ({ ds, user, body }) => createUser(ds, user.id, body as CreateUserBody),
+  },
+  {
+    method: 'patch',
+    path: '/users/:id',
+    access: 'users.manage',
+    summary: 'Rename, change role, deactivate or reactivate a user (optimistic lock on version)',
+    params: uuidParams,
+    body: updateUserBody,
+    handler: async ({ ds, user, params, body }) => updateUser(ds, user.id, (params as { id: string }).id, body as UpdateUserBody),
+  },
+]);

@@ -1,0 +1,48 @@
+/**
+ * The one permission matrix: who may do what. Client (navigation, guards) and server (every route)
+ * both read it.
+ */
+export const ROLES = ['admin', 'process-engineer', 'internals-specialist', 'inspector', 'viewer'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const PERMISSIONS = [
+  'users.manage',
+  'geometry.edit',
+  'loads.edit',
+  'ratings.run',
+  'reviews.approve',
+  'inspections.record',
+  'read',
+] as const;
+export type Permission = (typeof PERMISSIONS)[number];
+
+export const ROLE_LABELS: Record<Role, string> = {
+  admin: 'Administrator',
+  'process-engineer': 'Process engineer',
+  'internals-specialist': 'Internals specialist',
+  inspector: 'Inspector',
+  viewer: 'Viewer',
+};
+
+export const PERMISSION_LABELS: Record<Permission, string> = {
+  'users.manage': 'Manage users',
+  'geometry.edit': 'Edit column geometry',
+  'loads.edit': 'Edit load cases',
+  'ratings.run': 'Run ratings and studies',
+  'reviews.approve': 'Review and approve',
+  'inspections.record': 'Record inspections',
+  read: 'Read',
+};
+
+export const PERMISSION_MATRIX: Record<Role, readonly Permission[]> = {
+  admin: ['users.manage', 'read'],
+  'process-engineer': ['loads.edit', 'ratings.run', 'read'],
+  'internals-specialist': ['geometry.edit', 'loads.edit', 'ratings.run', 'reviews.approve', 'read'],
+  inspector: ['inspections.record', 'read'],
+  viewer: ['read'],
+};
+
+export function can(role: Role | null | undefined, permission: Permission): boolean {
+  if (!role) return false;
+  return PERMISSION_MATRIX[role].includes(permission);
+}

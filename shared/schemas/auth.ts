@@ -1,0 +1,43 @@
+import { roleSchema } from './common.js';
+
+export const signInBody = {
+  type: 'object',
+  properties: {
+    email: { type: 'string', format: 'email', maxLength: 254 },
+    password: { type: 'string', minLength: 1, maxLength: 200 },
+  },
+  required: ['email', 'password'],
+  additionalProperties: false,
+} as const;
+
+export const createUserBody = {
+  type: 'object',
+  properties: {
+    email: { type: 'string', format: 'email', maxLength: 254 },
+    name: { type: 'string', minLength: 1, maxLength: 120 },
+    role: roleSchema,
+    password: { type: 'string', minLength: 10, maxLength: 200 },
+  },
+  required: ['email', 'name', 'role', 'password'],
+  additionalProperties: false,
+} as const;
+
+export const updateUserBody = {
+  type: 'object',
+  properties: {
+    name: { type: 'string', minLength: 1, maxLength: 120 },
+    role: roleSchema,
+    active: { type: 'boolean' },
+    unitSystem: { type: 'string', enum: ['SI', 'US'] },
+    version: { type: 'integer', minimum: 1 },
+  },
+  required: ['version'],
+  additionalProperties: false,
+} as const;
+
+export const preferencesBody = {
+  type: 'object',
+  properties: { unitSystem: { type: 'string', enum: ['SI', 'US'] } },
+  required: ['unitSystem'],
+  additionalProperties: false,
+} as const;

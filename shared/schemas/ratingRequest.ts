@@ -1,0 +1,98 @@
+/**
+ * JSON Schema (draft-07) of a rating request (shared/types/rating.ts RatingRequest). Used with ajv 8
+ * (`new Ajv({ useDefaults: true, allErrors: true })`) by the engine's validateRatingRequest, the API and
+ * the CLI. Unknown fields are rejected. Bounds are physical plausibility limits that also keep every
+ * engine output finite; physics consistency (densities, areas) is checked after the schema.
+ */
+import { CHECK_NAMES } from '../types/rating.js';
+
+const positive = (maximum: number) => ({ type: 'number', exclusiveMinimum: 0, maximum }) as const;
+const nonNegative = (maximum: number) => ({ type: 'number', minimum: 0, maximum }) as const;
+
+export const valveDataSchema = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['count', 'orificeDiameter_mm', 'valveThickness_mm', 'materialDensity_kg_m3', 'legFactor', 'orificeShape'],
+  properties: {
+    count: { type: 'integer', minimum: 1, maximum: 1000000 },
+    orificeDiameter_mm: { type: 'number', minimum: 5, maximum: 200 },
+    valveThickness_mm: { type: 'number', minimum: 0.2, maximum: 10 },
+    materialDensity_kg_m3: { type: 'number', minimum: 1000, maximum: 25000 },
+    legFactor: { type: 'number', minimum: 1, maximum: 2 },
+    orificeShape: { type: 'string', enum: ['flat', 'venturi'] },
+  },
+} as const;
+
+export const sectionGeometrySchema = {
+  type: 'object',
+  additionalProperties: false,
+  required: [
+    'trayType', 'passes', 'columnDiameter_m', 'traySpacing_mm', 'activeArea_m2', 'downcomerTopArea_m2',
+    'downcomerBottomArea_m2', 'outletWeirLength_m', 'weirHeight_mm', 'downcomerClearance_mm', 'holeArea_m2',
+    'holeDiameter_mm', 'deckThickness_mm',
+  ],
+  properties: {
+    trayType: { type: 'string', enum: ['sieve', 'fixed-valve', 'moving-valve'] },
+    passes: { type: 'integer', enum: [1, 2, 4] },
+    columnDiameter_m: { type: 'number', minimum: 0.1, maximum: 20 },
+    traySpacing_mm: { type: 'number', minimum: 100, maximum: 1200 },
+    activeArea_m2: positive(320),
+    downcomerTopArea_m2: positive(320),
+    downcomerBottomArea_m2: positive(320),
+    outletWeirLength_m: positive(100),
+    weirHeight_mm: nonNegative(300),
+    downcomerClearance_mm: { type: 'number', minimum: 1, maximum: 600 },
+    holeArea_m2: { type: 'number', minimum: 1e-6, maximum: 320 },
+    holeDiameter_mm: { type: 'number', minimum: 1, maximum: 200 },
+    deckThickness_mm: nonNegative(20),
+    systemFactor: { type: 'number', exclusiveMinimum: 0, maximum: 1.5, default: 1 },
+    foaming: { type: 'string', enum: ['low', 'moderate', 'high', 'very-high'], default: 'moderate' },
+    valves: valveDataSchema,
+    orificeCoefficient: { type: 'number', minimum: 0.3, maximum: 1.2 },
+  },
+} as const;
+
+export const trayLoadSchema = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['tray', 'vapourMassFlow_kg_h', 'liquidMassFlow_kg_h', 'vapourDensity_kg_m3', 'liquidDensity_kg_m3', 'surfaceTension_mN_m'],
+  properties: {
+    tray: { type: 'integer', minimum: 0, maximum: 100000 },
+    vapourMassFlow_kg_h: nonNegative(1e8),
+    liquidMassFlow_kg_h: nonNegative(1e8),
+    vapourDensity_kg_m3: { type: 'number', minimum: 0.001, maximum: 1000 },
+    liquidDensity_kg_m3: { type: 'number', minimum: 50, maximum: 3000 },
+    surfaceTension_mN_m: { type: 'number', minimum: 0.1, maximum: 500 },
+    liquidViscosity_mPa_s: nonNegative(10000),
+    temperature_C: { type: 'number', minimum: -273.15, maximum: 1500 },
+    pressure_kPa: positive(100000),
+  },
+} as const;
+
+export const methodOptionsSchema = {
+  type: 'object',
+  additionalProperties: false,
+  properties: {
+    jetFlood: { type: 'string', enum: ['fair', 'kister-haas'], default: 'fair' },
+    limits: {
+      type: 'object',
+      additionalProperties: false,
+      properties: Object.fromEntries(CHECK_NAMES.map((n) => [n, { type: 'number', minimum: 0, maximum: 1e9 }])),
+    },
+    nearFraction: { type: 'number', exclusiveMinimum: 0, maximum: 1, default: 0.9 },
+  },
+  default: {},
+} as const;
+
+export const ratingRequestSchema = {
+  $schema: 'http://json-schema.org/draft-07/schema#',
+  title: 'Tray section rating request',
+  type: 'object',
+  additionalProperties: false,
+  required: ['section', 'trays'],
+  properties: {
+    section: sectionGeometrySchema,
+    trays: { type: 'array', minItems: 1, maxItems: 2000, items: trayLoadSchema },
+    methods: methodOptionsSchema,
+  },
+} as const;

@@ -1,0 +1,172 @@
+/**
+ * Rating request and result payloads, shared by the engine, the API, the CLI and the client.
+ * SI units throughout; the unit is part of each field name.
+ */
+
+export type TrayType = 'sieve' | 'fixed-valve' | 'moving-valve';
+export type FoamingClass = 'low' | 'moderate' | 'high' | 'very-high';
+export type JetFloodMethod = 'fair' | 'kister-haas';
+export type CheckStatus = 'ok' | 'near' | 'over';
+
+export interface ValveData {
+  count: number;
+  orificeDiameter_mm: number;
+  valveThickness_mm: number;
+  materialDensity_kg_m3: number;
+  /** weight with legs / weight without legs (Klein 1982, R_vw) */
+  legFactor: number;
+  orificeShape: 'flat' | 'venturi';
+}
+
+export interface SectionGeometry {
+  trayType: TrayType;
+  passes: 1 | 2 | 4;
+  columnDiameter_m: number;
+  traySpacing_mm: number;
+  activeArea_m2: number;
+  downcomerTopArea_m2: number;
+  downcomerBottomArea_m2: number;
+  outletWeirLength_m: number;
+  weirHeight_mm: number;
+  downcomerClearance_mm: number;
+  holeArea_m2: number;
+  holeDiameter_mm: number;
+  deckThickness_mm: number;
+  systemFactor?: number;
+  foaming?: FoamingClass;
+  valves?: ValveData;
+  /** optional measured or vendor dry-tray orifice coefficient C_v (sieve trays); overrides the Hughmark & O'Connell fit */
+  orificeCoefficient?: number;
+}
+
+export interface TrayLoad {
+  tray: number;
+  vapourMassFlow_kg_h: number;
+  liquidMassFlow_kg_h: number;
+  vapourDensity_kg_m3: number;
+  liquidDensity_kg_m3: number;
+  surfaceTension_mN_m: number;
+  liquidViscosity_mPa_s?: number;
+  temperature_C?: number;
+  pressure_kPa?: number;
+}
+
+export interface MethodOptions {
+  jetFlood?: JetFloodMethod;
+  /** limit overrides, keyed by check name */
+  limits?: Partial<Record<CheckName, number>>;
+  /** fraction of a limit at which status becomes 'near' (default 0.9) */
+  nearFraction?: number;
+}
+
+export interface RatingRequest {
+  section: SectionGeometry;
+  trays: TrayLoad[];
+  methods?: MethodOptions;
+}
+
+export const CHECK_NAMES = [
+  'jetFlood',
+  'entrainment',
+  'weeping',
+  'pressureDrop',
+  'weirLoading',
+  'liquidLoad',
+  'downcomerBackup',
+  'downcomerInletVelocity',
+  'downcomerResidenceTime',
+  'downcomerSeal',
+] as const;
+export type CheckName = (typeof CHECK_NAMES)[number];
+
+export interface CheckResult {
+  value: number;
+  unit: string;
+  limit: number;
+  /** 'max' when the value must stay below the limit, 'min' when above */
+  sense: 'max' | 'min';
+  /** value as percent of limit, oriented so that 100 % is the limit for both senses */
+  percentOfLimit: number;
+  status: CheckStatus;
+  method: string;
+}
+
+export interface EngineWarning {
+  code: string;
+  message: string;
+  tray?: number;
+}
+
+export interface TrayDetails {
+  flowParameter: number;
+  capacityFactor_m_s: number;
+  fFactor_Pa05: number;
+  netAreaVelocity_m_s: number;
+  floodVelocity_m_s: number;
+  holeVelocity_m_s: number;
+  weepPointHoleVelocity_m_s: number;
+  dryPressureDrop_mm: number;
+  clearLiquidHeight_mm: number;
+  residualHead_mm: number;
+  crestOverWeir_mm: number;
+  weirLoading_m3_h_m: number;
+  downcomerInletVelocity_m_s: number;
+  downcomerHeadLoss_mm: number;
+  downcomerClearBackup_mm: number;
+  downcomerAeratedBackup_mm: number;
+  downcomerResidenceTime_s: number;
+  entrainmentFraction: number;
+  entrainedLiquid_kg_h: number;
+  totalPressureDrop_Pa: number;
+  [key: string]: number;
+}
+
+export interface TrayResult {
+  tray: number;
+  checks: Record<CheckName, CheckResult>;
+  details: TrayDetails;
+  controllingCheck: CheckName;
+  warnings: EngineWarning[];
+}
+
+export interface SectionSummaryEntry {
+  check: CheckName;
+  worstTray: number;
+  worstValue: number;
+  percentOfLimit: number;
+  status: CheckStatus;
+}
+
+export interface SectionSummary {
+  worst: SectionSummaryEntry[];
+  controllingCheck: CheckName;
+  controllingTray: number;
+  /** 100 − highest percent of limit over all trays and checks */
+  marginToNearestLimit_percent: number;
+  /** lowest ratio over trays of vapour load to weep-point vapour load */
+  turndown: number;
+  traysOver: number[];
+  traysNear: number[];
+}
+
+export interface RatingResult {
+  engineVersion: string;
+  trays: TrayResult[];
+  summary: SectionSummary;
+  warnings: EngineWarning[];
+}
+
+export interface OperatingWindowCurve {
+  /** e.g. 'flood', 'floodDesign', 'entrainment', 'downcomerBackup', 'downcomerInletVelocity', 'weep', 'minWeirLoading', 'maxWeirLoading' */
+  limit: string;
+  label: string;
+  /** points of liquid mass flow [kg/h] against vapour mass flow [kg/h] */
+  liquid_kg_h: number[];
+  vapour_kg_h: number[];
+}
+
+export interface OperatingWindow {
+  tray: number;
+  curves: OperatingWindowCurve[];
+  operatingPoint: { liquid_kg_h: number; vapour_kg_h: number };
+}

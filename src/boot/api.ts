@@ -1,0 +1,77 @@
+import { Notify } from 'quasar';
+import type { Router } from 'vue-router';
+import type { ApiErrorBody } from '../../shared/types/api';
+
+/** An API failure, carrying the server's `{ error, details }` body. */
+export class ApiError extends Error {
+  constructor(
+    public readonly status: number,
+    public readonly body: ApiErrorBody,
+  ) {
+    super(body.error);
+  }
+}
+
+let router: Router | null = null;
+let onUnauthorized: (() => void) | null = null;
+
+export function installApi(r: Router): void {
+  router = r;
+}
+export function setUnauthorizedHandler(fn: () => void): void {
+  onUnauthorized = fn;
+}
+
+export interface RequestOptions {
+  query?: Record<string, string | number | boolean | undefined>;
+  body?: unknown;
+  /** do not show a notification on failure (the caller shows the error itself) */
+  quiet?: boolean;
+}
+
+function describe(body: ApiErrorBody): string {
+  const d = body.details?.slice(0, 4).map((x) => `${x.path}: ${x.message}`) ?? [];
+  return d.length ? `${body.error} — ${d.join('; ')}` : body.error;
+}
+
+/** The one API client: JSON in and out, errors shown to the user, 401 returns to sign-in. */
+async function request<T>(method: string, url: string, opts: RequestOptions = {}): Promise<T> {
+  const qs = opts.query
+    ? '?' +
+      new URLSearchParams(
+        Object.entries(opts.query)
+          .filter(([, v]) => v !== undefined && v !== '')
+          .map(([k, v]) => [k, String(v)]),
+      ).toString()
+    : '';
+  const isForm = opts.body instanceof FormData;
+  const res = await fetch(`/api${url}${qs}`, {
+    method,
+    credentials: 'same-origin',
+    headers: opts.body !== undefined && !isForm ? { 'Content-Type': 'application/json' } : undefined,
+    body: opts.body === undefined ? undefined : isForm ? (opts.body as FormData) : JSON.stringify(opts.body),
+  });
+  if (res.status === 204) return undefined as T;
+  const data = (await res.json().catch(() => ({ error: `HTTP ${res.status}` }))) as unknown;
+  if (!res.ok) {
+    const body = data as ApiErrorBody;
+    if (res.status === 401 && !url.startsWith('/auth/sign-in')) {
+      onUnauthorized?.();
+      const current = router?.currentRoute.value;
+      if (router && current?.name !== 'sign-in')
+        void router.push({ name: 'sign-in', query: { redirect: current?.fullPath } });
+    } else if (!opts.quiet) {
+      Notify.create({ type: 'negative', message: describe(body), multiLine: true });
+    }
+    throw new ApiError(res.status, body);
+  }
+  return data as T;
+}
+
+export const api = {
+  get: <T>(url: string, opts?: RequestOptions) => request<T>('GET', url, opts),
+  post: <T>(url: string, body?: unknown, opts?: RequestOptions) => request<T>('POST', url, { ...opts, body }),
+  put: <T>(url: string, body?: unknown, opts?: RequestOptions) => request<T>('PUT', url, { ...opts, body }),
+  patch: <T>(url: string, body?: unknown, opts?: RequestOptions) => request<T>('PATCH', url, { ...opts, body }),
+  del: <T>(url: string, opts?: RequestOptions) => request<T>('DELETE', url, opts),
+};

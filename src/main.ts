@@ -1,0 +1,18 @@
+import '@fontsource/noto-sans/400.css';
+import '@fontsource/noto-sans/600.css';
+import '@quasar/extras/material-icons/material-icons.css';
+import 'quasar/src/css/index.sass';
+import './css/app.scss';
+import { createPinia } from 'pinia';
+import { Dialog, Notify, Quasar } from 'quasar';
+import { createApp } from 'vue';
+import App from './App.vue';
+import { installApi } from './boot/api';
+import { router } from './router';
+
+const app = createApp(App);
+app.use(Quasar, { plugins: { Notify, Dialog }, config: { notify: { position: 'top-right', timeout: 5000 } } });
+app.use(createPinia());
+app.use(router);
+installApi(router);
+app.mount('#app');

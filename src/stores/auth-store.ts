@@ -1,0 +1,39 @@
+import { defineStore } from 'pinia';
+import { computed, ref } from 'vue';
+import { api, setUnauthorizedHandler } from '../boot/api';
+import { can, type Permission } from '../../shared/permissions';
+import type { SessionUser, SignInBody, UnitSystem } from '../../shared/types/api';
+
+export const useAuthStore = defineStore('auth', () => {
+  const user = ref<SessionUser | null>(null);
+  const loaded = ref(false);
+  setUnauthorizedHandler(() => {
+    user.value = null;
+  });
+
+  const signedIn = computed(() => user.value !== null);
+  const unitSystem = computed<UnitSystem>(() => user.value?.unitSystem ?? 'SI');
+  const allows = (p: Permission): boolean => can(user.value?.role, p);
+
+  async function load(): Promise<void> {
+    if (loaded.value) return;
+    try {
+      user.value = (await api.get<{ user: SessionUser }>('/auth/me', { quiet: true })).user;
+    } catch {
+      user.value = null;
+    }
+    loaded.value = true;
+  }
+  async function signIn(body: SignInBody): Promise<void> {
+    user.value = (await api.post<{ user: SessionUser }>('/auth/sign-in', body, { quiet: true })).user;
+    loaded.value = true;
+  }
+  async function signOut(): Promise<void> {
+    await api.post('/auth/sign-out');
+    user.value = null;
+  }
+  async function setUnitSystem(u: UnitSystem): Promise<void> {
+    user.value = (await api.put<{ user: SessionUser }>('/auth/preferences', { unitSystem: u })).user;
+  }
+  return { user, loaded, signedIn, unitSystem, allows, load, signIn, signOut, setUnitSystem };
+});

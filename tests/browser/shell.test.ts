@@ -1,0 +1,42 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { FROTHLINE_URL, launch, shot, signInAs, type Browser } from '../helpers/browser.js';
+
+let b: Browser;
+beforeAll(async () => {
+  b = await launch();
+});
+afterAll(() => b?.close());
+
+describe('client shell in Chromium', () => {
+  it('sends a visitor without a session to sign-in, and refuses a wrong password with a message', async () => {
+    await b.page.goto(`${FROTHLINE_URL}/admin/users`);
+    await b.page.waitForURL(/\/sign-in/);
+    await b.page.getByLabel('E-mail').fill('admin@frothline.test');
+    await b.page.getByLabel('Password').fill('not-the-password');
+    await b.page.getByRole('button', { name: 'Sign in' }).click();
+    const alert = b.page.getByRole('alert');
+    await alert.waitFor();
+    expect(await alert.textContent()).toMatch(/not correct/);
+    await shot(b.page, 'shell-sign-in-refused');
+  });
+
+  it('the demo admin signs in, sees the columns home page and the user admin page', async () => {
+    await signInAs(b.page, 'admin');
+    await b.page.getByText('T-701').first().waitFor();
+    await shot(b.page, 'shell-home');
+    await b.page.goto(`${FROTHLINE_URL}/admin/users`);
+    await b.page.getByText('engineer@frothline.test').waitFor();
+    expect(await b.page.getByRole('row').count()).toBeGreaterThan(5);
+    await shot(b.page, 'shell-users');
+  });
+
+  it('a viewer has no Users entry and is turned away from the admin page', async () => {
+    await b.context.clearCookies();
+    await signInAs(b.page, 'viewer');
+    await b.page.getByText('T-701').first().waitFor();
+    await b.page.getByRole('button', { name: 'Toggle navigation' }).click();
+    expect(await b.page.getByRole('link', { name: 'Users' }).count()).toBe(0);
+    await b.page.goto(`${FROTHLINE_URL}/admin/users`);
+    await b.page.waitForURL((u) => u.pathname === '/');
+  });
+});

@@ -1,0 +1,44 @@
+import { describe, expect, it } from 'vitest';
+import { rateSection, rateTray } from '../../../server/engine/index.js';
+import { inventedRequest, seader748Bottom, seaderTray } from './fixtures.js';
+
+const codes = (w: { code: string }[]) => w.map((x) => x.code);
+
+describe('range warnings and multipass', () => {
+  it('warns when the flow parameter is below the flood chart (and evaluates at the chart edge)', () => {
+    const t = rateTray(seaderTray, { ...seader748Bottom, liquidMassFlow_kg_h: 1500 });
+    expect(t.details.flowParameter).toBeLessThan(0.01);
+    const w = t.warnings.find((x) => x.code === 'range:fairFloodCapacityLygerosMagoulas:flowParameter');
+    expect(w?.message).toMatch(/chart edge 0\.01/);
+    expect(w?.tray).toBe(1);
+  });
+
+  it('warns for Kister & Haas outside its Perry Table 14-10 range and for Fair hole area below 0.06', () => {
+    const req = { section: { ...seaderTray, traySpacing_mm: 300, holeArea_m2: 0.05 * seaderTray.activeArea_m2 }, trays: [seader748Bottom], methods: { jetFlood: 'kister-haas' as const } };
+    const r = rateSection(req);
+    expect(codes(r.warnings)).toEqual(expect.arrayContaining([
+      'range:kisterHaasFloodCapacity:traySpacing_mm',
+      'range:fairFloodCapacityLygerosMagoulas:holeAreaRatio',
+    ]));
+    expect(r.trays[0]!.checks.jetFlood.method).toBe('kisterHaasFloodCapacity');
+    expect(codes(r.trays[0]!.warnings)).toContain('range:kisterHaasFloodCapacity:traySpacing_mm');
+  });
+
+  it('uses L/(V·passes) in the flow parameter (Perry 8th Sec. 14) and the total weir length for weir loading', () => {
+    const req = inventedRequest();
+    const two = rateTray(req.section, req.trays[0]!);
+    const one = rateTray({ ...req.section, passes: 1, outletWeirLength_m: 3.1 }, req.trays[0]!);
+    expect(two.details.flowParameter * 2).toBeCloseTo(one.details.flowParameter, 12);
+    const qL = req.trays[0]!.liquidMassFlow_kg_h / req.trays[0]!.liquidDensity_kg_m3;
+    expect(two.details.weirLoading_m3_h_m).toBeCloseTo(qL / 4.6, 9);
+  });
+
+  it('zero vapour is valid: weeping over, no flood, no entrainment, no-vapour warning', () => {
+    const t = rateTray(seaderTray, { ...seader748Bottom, vapourMassFlow_kg_h: 0 });
+    expect(t.checks.weeping.status).toBe('over');
+    expect(t.checks.jetFlood.value).toBe(0);
+    expect(t.details.entrainmentFraction).toBe(0);
+    expect(codes(t.warnings)).toContain('no-vapour');
+    expect(t.controllingCheck).toBe('weeping');
+  });
+});
