@@ -36,7 +36,7 @@ export const config = {
   mailboxDir: path.join(dataDir, 'mailbox'),
   devMailbox: (env.DEV_MAILBOX ?? 'true') === 'true',
   logLevel: env.LOG_LEVEL ?? 'info',
-  clientDist: path.resolve('dist'),
+  clientDist: path.resolve(env.CLIENT_DIST ?? 'dist'),
   dataDir,
   isTest: env.NODE_ENV === 'test',
 };
