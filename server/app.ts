@@ -78,7 +78,16 @@ export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOpt
       },
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: !config.isTest }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: !config.isTest,
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
+    }),
+  );
   app.use(cookieParser());
   app.use('/api', express.json({ limit: config.bodyLimit }));
 

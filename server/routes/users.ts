@@ -1,6 +1,7 @@
 import { defineRoutes } from '../http/route.js';
+import { listSitesWithMembers, setUserSites } from '../services/siteAccess.js';
 import { createUser, listUsers, updateUser } from '../services/users.js';
-import { createUserBody, updateUserBody } from '../../shared/schemas/auth.js';
+import { createUserBody, updateUserBody, userSitesBody } from '../../shared/schemas/auth.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import type { CreateUserBody, UpdateUserBody } from '../../shared/types/api.js';
 
@@ -29,5 +30,23 @@ export const userRoutes = defineRoutes([
     params: uuidParams,
     body: updateUserBody,
     handler: async ({ ds, user, params, body }) => updateUser(ds, user.id, (params as { id: string }).id, body as UpdateUserBody),
+  },
+  {
+    method: 'get',
+    path: '/sites',
+    access: 'users.manage',
+    summary: 'Every site with the users who may see its columns',
+    handler: async ({ ds }) => ({ items: await listSitesWithMembers(ds) }),
+  },
+  {
+    method: 'put',
+    path: '/users/:id/sites',
+    access: 'users.manage',
+    summary: 'Set the sites whose columns a user may see',
+    params: uuidParams,
+    body: userSitesBody,
+    handler: async ({ ds, user, params, body }) => ({
+      siteIds: await setUserSites(ds, user.id, (params as { id: string }).id, (body as { siteIds: string[] }).siteIds),
+    }),
   },
 ]);

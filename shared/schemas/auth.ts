@@ -41,3 +41,10 @@ export const preferencesBody = {
   required: ['unitSystem'],
   additionalProperties: false,
 } as const;
+
+export const userSitesBody = {
+  type: 'object',
+  properties: { siteIds: { type: 'array', items: { type: 'string', format: 'uuid' }, maxItems: 200 } },
+  required: ['siteIds'],
+  additionalProperties: false,
+} as const;

@@ -54,3 +54,11 @@ export interface HealthBody {
   database: 'reachable' | 'unreachable';
   engineVersion?: string;
 }
+
+export interface SiteRecord {
+  id: string;
+  name: string;
+  location: string;
+  /** users granted sight of the site's columns */
+  memberIds: string[];
+}

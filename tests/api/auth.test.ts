@@ -116,3 +116,26 @@ describe('API conventions', () => {
     expect(res.body.paths['/api/users'].post.summary).toBeTruthy();
   });
 });
+
+describe('site access', () => {
+  it('an admin grants a user a site, after which its columns are listed for that user', async () => {
+    const { agent: admin } = await signedIn(ctx, 'admin');
+    const { agent, user } = await signedIn(ctx, 'viewer');
+    const sites = (await admin.get('/api/sites')).body.items as { id: string; name: string }[];
+    expect(sites.length).toBeGreaterThan(0);
+    const before = await agent.get('/api/columns');
+    expect(before.body.total).toBe(0);
+    const put = await admin.put(`/api/users/${user.id}/sites`).send({ siteIds: [sites[0]!.id] });
+    expect(put.status).toBe(200);
+    const after = await agent.get('/api/columns');
+    expect(after.body.total).toBeGreaterThan(0);
+    expect(after.body.items[0].siteName).toBe(sites[0]!.name);
+  });
+  it('refuses an unknown site, naming the field', async () => {
+    const { agent: admin } = await signedIn(ctx, 'admin');
+    const u = await makeUser(ctx.ds, 'viewer');
+    const res = await admin.put(`/api/users/${u.id}/sites`).send({ siteIds: ['00000000-0000-4000-8000-000000000001'] });
+    expect(res.status).toBe(400);
+    expect(res.body.details[0].path).toBe('siteIds');
+  });
+});
