@@ -1,3 +1,4 @@
+import { createSecretKey, type KeyObject } from 'node:crypto';
 import jwt from 'jsonwebtoken';
 import type { Request, Response } from 'express';
 import { config } from '../config.js';
@@ -6,13 +7,20 @@ import type { Role } from '../../shared/permissions.js';
 
 export const SESSION_COOKIE = 'frothline_session';
 
+// A ready key object: jsonwebtoken would otherwise try to parse the text secret as a public key on every call.
+let key: { secret: string; obj: KeyObject } | null = null;
+function secretKey(): KeyObject {
+  if (key?.secret !== config.jwtSecret) key = { secret: config.jwtSecret, obj: createSecretKey(Buffer.from(config.jwtSecret)) };
+  return key.obj;
+}
+
 interface TokenClaims {
   sub: string;
   role: Role;
 }
 
 export function issueSession(res: Response, user: { id: string; role: Role }): void {
-  const token = jwt.sign({ role: user.role } satisfies Omit<TokenClaims, 'sub'>, config.jwtSecret, {
+  const token = jwt.sign({ role: user.role } satisfies Omit<TokenClaims, 'sub'>, secretKey(), {
     subject: user.id,
     expiresIn: config.sessionMinutes * 60,
     algorithm: 'HS256',
@@ -35,7 +43,7 @@ export function readSessionUserId(req: Request): string | null {
   const token = (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];
   if (!token) return null;
   try {
-    const claims = jwt.verify(token, config.jwtSecret, { algorithms: ['HS256'] }) as jwt.JwtPayload;
+    const claims = jwt.verify(token, secretKey(), { algorithms: ['HS256'] }) as jwt.JwtPayload;
     return typeof claims.sub === 'string' ? claims.sub : null;
   } catch {
     return null;

@@ -19,11 +19,11 @@ interface Row {
   total: string;
 }
 
-/** Columns the user may see, searched by tag, service, unit or site, paged. */
+/** Columns the user may see, searched by tag, service, unit or site, filtered by site or unit, paged. */
 export async function listVisibleColumns(
   ds: DataSource,
   user: SessionUser,
-  q: { page: number; pageSize: number; q?: string },
+  q: { page: number; pageSize: number; q?: string; siteId?: string; unitId?: string },
 ): Promise<Page<ColumnSummary>> {
   const f = siteFilterSql(user, 's.id', 1);
   const params: unknown[] = [...f.params];
@@ -32,6 +32,14 @@ export async function listVisibleColumns(
     params.push(`%${q.q.replace(/[%_\\]/g, (m) => `\\${m}`)}%`);
     const i = params.length;
     search = `AND (c.tag ILIKE $${i} OR c.service ILIKE $${i} OR u.name ILIKE $${i} OR s.name ILIKE $${i})`;
+  }
+  if (q.siteId) {
+    params.push(q.siteId);
+    search += ` AND s.id = $${params.length}`;
+  }
+  if (q.unitId) {
+    params.push(q.unitId);
+    search += ` AND u.id = $${params.length}`;
   }
   params.push(q.pageSize, (q.page - 1) * q.pageSize);
   const rows = (await ds.query(

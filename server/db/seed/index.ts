@@ -5,7 +5,10 @@ import { config } from '../../config.js';
 import { makeDataSource } from '../data-source.js';
 import { User } from '../entities/User.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './demoUsers.js';
+import { seedDemoScenario } from './demoScenario.js';
+import { seedInspection } from './inspection.js';
 import { seedPlant } from './plant.js';
+import { seedStudy } from './study.js';
 
 /** Seed the invented demo scenario once: skipped when the demo admin already exists. */
 export async function seedDemo(ds: DataSource): Promise<boolean> {
@@ -15,6 +18,9 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     const users: User[] = [];
     for (const u of DEMO_USERS) users.push(await em.save(User, em.create(User, { ...u, passwordHash: hash })));
     const plant = await seedPlant(em, users);
+    await seedDemoScenario(em, plant.column, users);
+    await seedInspection(em, plant.column.id, users);
+    await seedStudy(em, plant.column.id, users);
     // Later seed steps (sections, load cases, runs, inspections) hang off the demo plant here.
     void plant;
   });

@@ -1,0 +1,44 @@
+import { defineRoutes } from '../http/route.js';
+import { ENGINE_VERSION, METHOD_METADATA } from '../engine/index.js';
+import limitsTable from '../../reference-tables/limits.json' with { type: 'json' };
+import type { MethodsPayload } from '../../shared/types/methods.js';
+
+/** Cautions printed with every rating (field-practice.md §5.2). */
+export const RATING_CAUTIONS = [
+  'Results are screening estimates from published correlations; they are not a vendor rating or a design guarantee.',
+  'Any operating change (rate increase, pump-around duty change) goes through management-of-change review, with a pre-start-up safety review where applicable.',
+  'Confirm the rating with the internals vendor and licensed engineers before acting on it; site permits and local codes govern.',
+];
+
+const payload: MethodsPayload = {
+  engineVersion: ENGINE_VERSION,
+  methods: Object.values(METHOD_METADATA)
+    .map((m) => ({
+      id: m.id,
+      label: m.label,
+      source: m.source,
+      equation: m.equation,
+      provenance: m.provenance,
+      ranges: m.ranges,
+    }))
+    .sort((a, b) => a.label.localeCompare(b.label)),
+  limits: limitsTable.map((r) => ({
+    check: r.check,
+    limit: r.limit,
+    unit: r.unit,
+    sense: r.sense,
+    note: r.note,
+    source: r.source,
+  })),
+  cautions: RATING_CAUTIONS,
+};
+
+export const methodRoutes = defineRoutes([
+  {
+    method: 'get',
+    path: '/methods',
+    access: 'read',
+    summary: 'Rating correlations and default limits with their published sources, and the report cautions',
+    handler: () => payload,
+  },
+]);

@@ -1,0 +1,63 @@
+/** Exports: a load case's per-tray loads and a run's per-tray results, as CSV or XLSX (SI units in the headers). */
+import type { DataSource } from 'typeorm';
+import { LoadCase } from '../db/entities/LoadCase.js';
+import { RatingRun } from '../db/entities/RatingRun.js';
+import { visibleChild, visibleColumn } from './columnsCommon.js';
+import { toFile, type ExportFile, type Table } from './exportsFormat.js';
+import { CHECK_NAMES } from '../../shared/types/rating.js';
+import type { SessionUser } from '../../shared/types/api.js';
+import type { TrayLoad } from '../../shared/types/rating.js';
+
+/** Headers the import recognises, so an exported file can be imported again. */
+export const LOAD_COLUMNS: [string, keyof TrayLoad][] = [
+  ['Tray', 'tray'],
+  ['Vapour mass flow (kg/h)', 'vapourMassFlow_kg_h'],
+  ['Liquid mass flow (kg/h)', 'liquidMassFlow_kg_h'],
+  ['Vapour density (kg/m³)', 'vapourDensity_kg_m3'],
+  ['Liquid density (kg/m³)', 'liquidDensity_kg_m3'],
+  ['Surface tension (mN/m)', 'surfaceTension_mN_m'],
+  ['Liquid viscosity (mPa·s)', 'liquidViscosity_mPa_s'],
+  ['Temperature (°C)', 'temperature_C'],
+  ['Pressure (kPa)', 'pressure_kPa'],
+];
+
+export const CAUTIONS = [
+  'Screening estimates from published correlations; not a design guarantee.',
+  'Operating changes need management-of-change review and confirmation by the internals vendor and licensed engineers; site permits and local codes govern.',
+];
+
+export function loadTable(name: string, loads: TrayLoad[]): Table {
+  return {
+    sheet: name,
+    headers: LOAD_COLUMNS.map(([h]) => h),
+    rows: loads.map((l) => LOAD_COLUMNS.map(([, k]) => l[k] ?? null)),
+  };
+}
+
+export async function exportLoadCase(ds: DataSource, user: SessionUser, id: string, format: 'csv' | 'xlsx'): Promise<ExportFile> {
+  const l = await visibleChild(ds.manager, user, LoadCase, id, 'Load case');
+  const col = await visibleColumn(ds.manager, user, l.columnId);
+  return toFile(loadTable('Loads', l.loads), `${col.tag}-${l.name}-loads`, format);
+}
+
+export async function exportRun(ds: DataSource, user: SessionUser, id: string, format: 'csv' | 'xlsx'): Promise<ExportFile> {
+  const r = await visibleChild(ds.manager, user, RatingRun, id, 'Rating run');
+  const names = new Map(r.snapshot.sections.map((s) => [s.sectionId, s.name]));
+  const first = r.results.trays[0];
+  const headers = ['Tray', 'Section', 'Controlling check'];
+  for (const c of CHECK_NAMES) {
+    const unit = first?.checks[c].unit ?? '';
+    headers.push(`${c} (${unit})`, `${c} limit (${unit})`, `${c} % of limit`, `${c} status`);
+  }
+  const rows = r.results.trays.map((t) => [
+    t.tray,
+    names.get(t.sectionId) ?? '',
+    t.controllingCheck,
+    ...CHECK_NAMES.flatMap((c) => [t.checks[c].value, t.checks[c].limit, t.checks[c].percentOfLimit, t.checks[c].status]),
+  ]);
+  const notes = [
+    `Run "${r.label}", column ${r.snapshot.column.tag} (trays numbered ${r.snapshot.column.numbering}), load case "${r.snapshot.loadCase.name}", status ${r.status}, engine ${r.engineVersion}, created ${r.createdAt.toISOString()}`,
+    ...CAUTIONS,
+  ];
+  return toFile({ sheet: 'Results', headers, rows, notes }, `${r.snapshot.column.tag}-${r.label}-results`, format);
+}

@@ -1,0 +1,50 @@
+/** Punch list of an inspection: numbered items, closed by someone at a time; read-only once signed. */
+import type { DataSource } from 'typeorm';
+import { PunchItemEntity } from '../db/entities/PunchItem.js';
+import { NotFoundError, ValidationError } from '../errors.js';
+import { audit } from './audit.js';
+import { assertVersion } from './columnsCommon.js';
+import { toInspectionRecord } from './inspectionRead.js';
+import { assertDraft, visibleInspection } from './inspections.js';
+import type { SessionUser } from '../../shared/types/api.js';
+import type { CreatePunchBody, InspectionRecord, UpdatePunchBody } from '../../shared/types/inspections.js';
+
+export async function addPunchItem(ds: DataSource, user: SessionUser, id: string, body: CreatePunchBody): Promise<InspectionRecord> {
+  if (!body.finding.trim()) throw new ValidationError('Invalid body', [{ path: 'finding', message: 'must not be empty' }]);
+  if (!body.action.trim()) throw new ValidationError('Invalid body', [{ path: 'action', message: 'must not be empty' }]);
+  return ds.transaction(async (em) => {
+    const insp = await visibleInspection(em, user, id, true);
+    assertDraft(insp);
+    const [m] = (await em.query(`SELECT coalesce(max(item_no), 0)::int AS n FROM punch_items WHERE inspection_id = $1`, [id])) as { n: number }[];
+    const item = await em.save(
+      PunchItemEntity,
+      em.create(PunchItemEntity, {
+        inspectionId: id, itemNo: (m?.n ?? 0) + 1, tray: body.tray ?? null, pass: body.pass ?? null, finding: body.finding.trim(),
+        action: body.action.trim(), priority: body.priority, owner: body.owner ?? '', status: 'open',
+      }),
+    );
+    await audit(em, user.id, 'create', 'punch-item', item.id, body);
+    return toInspectionRecord(em, insp);
+  });
+}
+
+export async function updatePunchItem(ds: DataSource, user: SessionUser, id: string, itemId: string, body: UpdatePunchBody): Promise<InspectionRecord> {
+  return ds.transaction(async (em) => {
+    const insp = await visibleInspection(em, user, id, true);
+    assertDraft(insp);
+    const item = await em.findOneBy(PunchItemEntity, { id: itemId, inspectionId: id });
+    if (!item) throw new NotFoundError('Punch item');
+    assertVersion('punch item', item.version, body.version);
+    const { version: _v, status, ...rest } = body;
+    void _v;
+    Object.assign(item, rest, { updatedAt: new Date() }); // a changed timestamp makes every save a new version
+    if (status && status !== item.status) {
+      item.status = status;
+      item.closedBy = status === 'closed' ? user.id : null;
+      item.closedAt = status === 'closed' ? new Date() : null;
+    }
+    await em.save(PunchItemEntity, item);
+    await audit(em, user.id, status === 'closed' ? 'close' : 'update', 'punch-item', item.id, body);
+    return toInspectionRecord(em, insp);
+  });
+}

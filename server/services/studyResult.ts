@@ -1,0 +1,99 @@
+/**
+ * The stored form of a pump-around study result (issue 5). The engine returns a full rating of every
+ * tray at every sweep point (megabytes for a long sweep); the store keeps, per point, the traffic and per
+ * check only the percent of limit and status, plus the controlling check. The solved duties, trays,
+ * checks and notes are kept exactly as the engine gave them.
+ */
+import { CHECK_NAMES, type CheckName, type TrayLoad } from '../../shared/types/rating.js';
+import type { StudyInput, StudyPoint, StudyResult } from '../../shared/types/pumpAround.js';
+import type { KeyPointKind, MinimumLiquidLine, SlimStudyPoint, SlimStudyResult } from '../../shared/types/studies.js';
+import { prepareSection, rateTrayPrepared, weirLoadingForCrestFrancis, type PreparedSection } from '../engine/index.js';
+import { sectionForTray, shiftTraffic, studyPoint } from '../engine/pumpAround/index.js';
+
+const round2 = (x: number): number => Math.round(x * 100) / 100;
+
+export function slimPoint(p: StudyPoint): SlimStudyPoint {
+  return {
+    duty_kW: p.duty_kW,
+    condenserDutyChange_kW: p.condenserDutyChange_kW,
+    reflux_kg_h: p.reflux_kg_h,
+    heatRecovered_kW: p.heatRecovered_kW,
+    liquidToVapourAboveZone: p.liquidToVapourAboveZone,
+    circulation_kg_h: p.circulation_kg_h,
+    returnTemperatureDrop_K: p.returnTemperatureDrop_K,
+    dryTrays: p.dryTrays,
+    trays: p.trays.map((t) => ({
+      tray: t.tray,
+      region: t.region,
+      vapourMassFlow_kg_h: t.vapourMassFlow_kg_h,
+      liquidMassFlow_kg_h: t.liquidMassFlow_kg_h,
+      dry: t.dry,
+      percent: CHECK_NAMES.map((c) => {
+        const v = t.rating.checks[c]?.percentOfLimit;
+        return v !== undefined && Number.isFinite(v) ? round2(v) : 0;
+      }),
+      status: CHECK_NAMES.map((c) => t.rating.checks[c]?.status ?? 'ok'),
+      controllingCheck: t.rating.controllingCheck,
+    })),
+  };
+}
+
+/** Prepared section per tray, as runStudy rates them. */
+function preparedByTray(input: StudyInput): Map<number, PreparedSection> {
+  const prepared = new Map(input.sections.map((s) => [s, prepareSection(s, input.methods)]));
+  const out = new Map<number, PreparedSection>();
+  for (const t of input.trays) out.set(t.tray, prepared.get(sectionForTray(input.sections, t.tray)!)!);
+  return out;
+}
+
+/** Full study points at chosen duties (base, limiting, recommended), rated as the sweep points are. */
+export function pointsAt(input: StudyInput, duties: number[]): StudyPoint[] {
+  const byTray = preparedByTray(input);
+  const numbering = input.numbering ?? 'top-down';
+  const rate = (load: TrayLoad) => rateTrayPrepared(byTray.get(load.tray)!, load);
+  return duties.map((q) =>
+    studyPoint(
+      shiftTraffic(input.trays, input.pumpAround, q, input.latentHeat_kJ_kg, numbering),
+      input.pumpAround.baseDuty_kW,
+      numbering,
+      rate,
+    ),
+  );
+}
+
+/**
+ * Liquid [kg/h] at which each tray above the zone reaches the minimum crest over its weir (the liquidLoad
+ * limit, Francis weir formula via weirLoadingForCrestFrancis), at base-case liquid density; the same
+ * relation the operating window uses for its minimum weir loading line. Properties are held at base values,
+ * so the line does not move with duty.
+ */
+export function minimumLiquidLines(input: StudyInput, base: StudyPoint): MinimumLiquidLine[] {
+  const byTray = preparedByTray(input);
+  const loads = new Map(input.trays.map((t) => [t.tray, t]));
+  return base.trays
+    .filter((t) => t.region === 'above')
+    .map((t) => {
+      const p = byTray.get(t.tray)!;
+      const rhoL = loads.get(t.tray)!.liquidDensity_kg_m3;
+      const l = weirLoadingForCrestFrancis(p.limits.liquidLoad) * p.weirLength * rhoL;
+      return { tray: t.tray, minimumLiquid_kg_h: Number.isFinite(l) ? l : 0 };
+    });
+}
+
+export function slimStudyResult(input: StudyInput, r: StudyResult): SlimStudyResult {
+  const keys: { kind: KeyPointKind; duty: number }[] = [{ kind: 'base', duty: r.baseDuty_kW }];
+  if (r.limitingDuty_kW !== null) keys.push({ kind: 'limiting', duty: r.limitingDuty_kW });
+  if (r.recommendedDuty_kW !== null) keys.push({ kind: 'recommended', duty: r.recommendedDuty_kW });
+  const full = pointsAt(
+    input,
+    keys.map((k) => k.duty),
+  );
+  const { points, ...rest } = r;
+  return {
+    ...rest,
+    checkNames: [...CHECK_NAMES] as CheckName[],
+    minimumLiquidLines: minimumLiquidLines(input, full[0]!),
+    points: points.map(slimPoint),
+    keyPoints: keys.map((k, i) => ({ kind: k.kind, point: slimPoint(full[i]!) })),
+  };
+}

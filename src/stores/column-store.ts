@@ -1,0 +1,57 @@
+import { defineStore } from 'pinia';
+import { ref } from 'vue';
+import { api } from '../boot/api';
+import type { ColumnDetail, SectionBody, TraySectionRecord, UpdateSectionBody } from '../../shared/types/columns';
+import type { CreateLoadCaseBody, LoadCaseRecord, PutLoadsBody } from '../../shared/types/loads';
+import type { ImportCommitBody, ImportPreview } from '../../shared/types/imports';
+
+/** The open column and the calls that edit what hangs off it (sections, load cases, imports). */
+export const useColumnStore = defineStore('column', () => {
+  const column = ref<ColumnDetail | null>(null);
+  const loading = ref(false);
+
+  async function load(id: string): Promise<ColumnDetail> {
+    loading.value = true;
+    try {
+      column.value = await api.get<ColumnDetail>(`/columns/${id}`);
+      return column.value;
+    } finally {
+      loading.value = false;
+    }
+  }
+  async function ensure(id: string): Promise<ColumnDetail> {
+    return column.value?.id === id ? column.value : load(id);
+  }
+
+  const createSection = (columnId: string, body: SectionBody) =>
+    api.post<TraySectionRecord>(`/columns/${columnId}/sections`, body, { quiet: true });
+  const updateSection = (id: string, body: UpdateSectionBody) =>
+    api.put<TraySectionRecord>(`/sections/${id}`, body, { quiet: true });
+
+  const loadCase = (id: string) => api.get<LoadCaseRecord>(`/load-cases/${id}`);
+  const createLoadCase = (columnId: string, body: CreateLoadCaseBody) =>
+    api.post<LoadCaseRecord>(`/columns/${columnId}/load-cases`, body, { quiet: true });
+  const putLoads = (id: string, body: PutLoadsBody) => api.put<LoadCaseRecord>(`/load-cases/${id}/loads`, body, { quiet: true });
+
+  function previewImport(columnId: string, file: File, sheet?: string): Promise<ImportPreview> {
+    const form = new FormData();
+    form.append('file', file);
+    return api.post<ImportPreview>(`/columns/${columnId}/imports`, form, { quiet: true, query: { sheet } });
+  }
+  const commitImport = (columnId: string, body: ImportCommitBody) =>
+    api.post<LoadCaseRecord>(`/columns/${columnId}/imports/commit`, body, { quiet: true });
+
+  return {
+    column,
+    loading,
+    load,
+    ensure,
+    createSection,
+    updateSection,
+    loadCase,
+    createLoadCase,
+    putLoads,
+    previewImport,
+    commitImport,
+  };
+});

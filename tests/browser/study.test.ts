@@ -1,0 +1,148 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { ColumnSummary } from '../../shared/types/columns.js';
+import type { Page as ApiPage } from '../../shared/types/api.js';
+import type { StudySummary } from '../../shared/types/studies.js';
+import { FROTHLINE_URL, launch, shot, signInAs, type Browser } from '../helpers/browser.js';
+
+let b: Browser;
+let studyId: string;
+let copyUrl: string;
+
+beforeAll(async () => {
+  b = await launch();
+  await signInAs(b.page, 'process-engineer');
+  const cols = (await (await b.page.request.get(`${FROTHLINE_URL}/api/columns?q=T-701`)).json()) as ApiPage<ColumnSummary>;
+  const t701 = cols.items.find((c) => c.tag === 'T-701')!;
+  const studies = (await (await b.page.request.get(`${FROTHLINE_URL}/api/columns/${t701.id}/studies`)).json()) as StudySummary[];
+  // the seeded demo study (oldest), not copies made by earlier runs of this test
+  studyId = studies.filter((s) => s.pumpAroundName === 'Top PA').at(-1)!.id;
+});
+afterAll(() => b?.close());
+
+/** The slider's liquid trace of the traffic chart (Plotly keeps the drawn data on the element). */
+async function sliderLiquid(page: Page): Promise<number[]> {
+  return page.locator('[data-test=traffic-chart]').evaluate((el) => {
+    const data = (el as unknown as { data?: { name: string; x: number[] }[] }).data ?? [];
+    return data.find((d) => d.name.startsWith('Liquid, slider'))?.x ?? [];
+  });
+}
+const selectedDuty = (page: Page) => page.locator('[data-test=selected-duty]').innerText();
+/** Wait until the chart's slider liquid trace differs from `before` (Plotly redraws asynchronously). */
+async function chartChanged(page: Page, before: number[]): Promise<void> {
+  await page.waitForFunction((b) => {
+    const data =
+      (document.querySelector('[data-test=traffic-chart]') as unknown as { data?: { name: string; x: number[] }[] } | null)
+        ?.data ?? [];
+    const x = data.find((d) => d.name.startsWith('Liquid, slider'))?.x ?? [];
+    return x.length > 0 && JSON.stringify(x) !== JSON.stringify(b);
+  }, before);
+}
+
+describe('pump-around study page in Chromium', () => {
+  it('opens the demo study: summary, caution and the three charts', async () => {
+    await b.page.goto(`${FROTHLINE_URL}/studies/${studyId}`);
+    await b.page.getByText('What the sweep found').waitFor();
+    await b.page.waitForFunction(
+      () => ((document.querySelector('[data-test=traffic-chart]') as unknown as { data?: unknown[] })?.data?.length ?? 0) >= 6,
+    );
+    expect(await b.page.locator('[data-test=study-caution]').innerText()).toMatch(/management-of-change/);
+    expect(await b.page.locator('[data-test=dry-out-duty]').innerText()).toMatch(/\d kW/);
+    expect(await b.page.locator('[data-test=recommended-duty]').innerText()).toMatch(/\d kW/);
+    for (const chart of ['min-liquid-chart', 'percent-chart'])
+      await b.page.locator(`[data-test=${chart}] .main-svg`).first().waitFor();
+    await shot(b.page, 'study-page');
+  });
+
+  it('moving the duty slider redraws the tray traffic at once (no server round trip)', async () => {
+    const dutyBefore = await selectedDuty(b.page);
+    const liquidBefore = await sliderLiquid(b.page);
+    expect(liquidBefore.length).toBeGreaterThan(10);
+    let requests = 0;
+    b.page.on('request', (r) => {
+      if (r.url().includes('/api/')) requests++;
+    });
+    const textBefore = await b.page.locator('[data-test=selected-duty]').textContent();
+    const slider = b.page.getByRole('slider', { name: 'Pump-around duty' });
+    await slider.focus();
+    await slider.press('End');
+    await b.page.waitForFunction(
+      (before) => document.querySelector('[data-test=selected-duty]')?.textContent !== before,
+      textBefore,
+    );
+    await chartChanged(b.page, liquidBefore);
+    const dutyAfter = await selectedDuty(b.page);
+    const liquidAfter = await sliderLiquid(b.page);
+    expect(dutyAfter).not.toBe(dutyBefore);
+    expect(liquidAfter).not.toEqual(liquidBefore);
+    // more duty condenses more vapour in the pump-around: less liquid on the top tray
+    expect(liquidAfter[0]!).toBeLessThan(liquidBefore[0]!);
+    expect(requests).toBe(0);
+    await b.page.evaluate(() => window.scrollTo(0, 0)); // a clean full-page shot under the fixed header
+    await shot(b.page, 'study-slider-at-top-duty');
+    const textAtTop = await b.page.locator('[data-test=selected-duty]').textContent();
+    await slider.press('Home');
+    await b.page.waitForFunction(
+      (before) => document.querySelector('[data-test=selected-duty]')?.textContent !== before,
+      textAtTop,
+    );
+    await chartChanged(b.page, liquidAfter);
+    expect((await sliderLiquid(b.page))[0]!).toBeGreaterThan(liquidAfter[0]!);
+  });
+
+  it('a new study from these inputs: a missing λ is named at its field, then the study runs and opens', async () => {
+    await b.page.getByRole('link', { name: 'New study from these inputs' }).click();
+    await b.page.waitForURL(/\/studies\/new/);
+    const lambda = b.page.getByLabel('Latent heat λ (kJ/kg)');
+    await b.page.waitForFunction(
+      () => (document.querySelector('input[aria-label="Latent heat λ (kJ/kg)"]') as HTMLInputElement | null)?.value !== '',
+    );
+    const value = await lambda.inputValue();
+    await lambda.fill('');
+    await b.page.getByRole('button', { name: 'Run and save the study' }).click();
+    // the server's error for latentHeat_kJ_kg is shown at the λ field itself
+    await b.page.locator('.q-field--error').filter({ hasText: 'Latent heat λ' }).getByText('is required').waitFor();
+    expect(await b.page.getByRole('checkbox', { name: /already includes the circulation/ }).getAttribute('aria-checked')).toBe(
+      'true',
+    );
+    await b.page.waitForTimeout(400); // let the field's error message finish its entrance
+    await shot(b.page, 'study-new-error');
+    await lambda.fill(value);
+    await b.page.getByRole('button', { name: 'Run and save the study' }).click();
+    await b.page.waitForURL((u) => /\/studies\/[0-9a-f-]{36}$/.test(u.pathname) && !u.pathname.endsWith(studyId));
+    await b.page.getByText('What the sweep found').waitFor();
+    expect(await b.page.locator('[data-test=study-label]').innerText()).toMatch(/\(copy\)/);
+    copyUrl = b.page.url();
+  });
+
+  it('the author sends the copy for review; a specialist sends it back, then accepts it', async () => {
+    await b.page.getByRole('button', { name: 'Send for review' }).click();
+    await b.page.locator('[data-test=review-submitted]').waitFor();
+    await b.context.clearCookies();
+    await signInAs(b.page, 'internals-specialist');
+    await b.page.goto(copyUrl);
+    await b.page.getByRole('button', { name: 'Send back' }).click();
+    const dialogSendBack = b.page.getByRole('dialog').getByRole('button', { name: 'Send back' });
+    expect(await dialogSendBack.isDisabled()).toBe(true); // a comment is required
+    await b.page.getByRole('dialog').getByLabel('What should change (required)').fill('Use the winter case as the base');
+    await dialogSendBack.click();
+    await b.page.locator('[data-test=review-returned]').waitFor();
+    expect(await b.page.locator('[data-test=study-review-comment]').innerText()).toMatch(/winter case/);
+    await b.context.clearCookies();
+    await signInAs(b.page, 'process-engineer');
+    await b.page.goto(copyUrl);
+    await b.page.getByRole('button', { name: 'Send for review' }).click();
+    await b.page.locator('[data-test=review-submitted]').waitFor();
+    await b.context.clearCookies();
+    await signInAs(b.page, 'internals-specialist');
+    await b.page.goto(copyUrl);
+    await b.page.getByRole('button', { name: 'Accept' }).click();
+    await b.page.getByRole('dialog').getByRole('button', { name: 'Accept' }).click();
+    await b.page.locator('[data-test=review-approved]').waitFor();
+    expect(await b.page.getByRole('button', { name: 'Send back' }).count()).toBe(0);
+    expect(await b.page.locator('[data-test=study-reviews]').innerText()).toMatch(
+      /Sent back by .*\n[\s\S]*winter case[\s\S]*Accepted by/,
+    );
+    await shot(b.page, 'study-accepted');
+  });
+});
