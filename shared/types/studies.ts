@@ -4,7 +4,7 @@
  * The engine's own payloads are in shared/types/pumpAround.ts.
  */
 import type { CheckName, CheckStatus, MethodOptions } from './rating.js';
-import type { DutySweep, StudyInput, StudyLimit } from './pumpAround.js';
+import type { DutySweep, StudyInput, StudyResult } from './pumpAround.js';
 import type { ReviewEntry, ReviewStatus } from './runs.js';
 
 /** Review status, the same life cycle as a rating run (shared/types/runs.ts): approved is read-only. */
@@ -83,23 +83,7 @@ export interface MinimumLiquidLine {
 }
 
 /** The stored result: the engine's duties and notes exactly, the sweep points slimmed. */
-export interface SlimStudyResult {
-  pumpAround: string;
-  baseDuty_kW: number;
-  dryOutDuty_kW: number | null;
-  dryOutTray: number | null;
-  minimumLiquidDuty_kW: number | null;
-  minimumLiquidTray: number | null;
-  minimumLiquidCheck: CheckName | null;
-  zoneOverloadDuty_kW: number | null;
-  zoneOverloadTray: number | null;
-  zoneOverloadCheck: CheckName | null;
-  limitingDuty_kW: number | null;
-  limitingTray: number | null;
-  limitingCheck: StudyLimit | null;
-  recommendedDuty_kW: number | null;
-  margin: number;
-  notes: string[];
+export interface SlimStudyResult extends Omit<StudyResult, 'points'> {
   checkNames: CheckName[];
   minimumLiquidLines: MinimumLiquidLine[];
   /** the sweep points, in sweep order */
