@@ -104,7 +104,7 @@ export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOpt
   const dist = config.clientDist;
   if (serveClient && existsSync(path.join(dist, 'index.html'))) {
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
-    app.get('/*splat', (_req, res) => {
+    app.get('/{*splat}', (_req, res) => {
       res.sendFile(path.join(dist, 'index.html'));
     });
   }

@@ -1,7 +1,17 @@
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
 import { api } from '../boot/api';
-import type { ColumnDetail, SectionBody, TraySectionRecord, UpdateSectionBody } from '../../shared/types/columns';
+import type {
+  ColumnDetail,
+  CreateColumnBody,
+  PumpAroundBody,
+  PumpAroundRecord,
+  SectionBody,
+  TraySectionRecord,
+  UpdateColumnBody,
+  UpdatePumpAroundBody,
+  UpdateSectionBody,
+} from '../../shared/types/columns';
 import type { CreateLoadCaseBody, LoadCaseRecord, PutLoadsBody } from '../../shared/types/loads';
 import type { ImportCommitBody, ImportPreview } from '../../shared/types/imports';
 
@@ -22,6 +32,21 @@ export const useColumnStore = defineStore('column', () => {
   async function ensure(id: string): Promise<ColumnDetail> {
     return column.value?.id === id ? column.value : load(id);
   }
+
+  /** Administrators create columns through the plant set-up route; specialists through /columns (same body). */
+  const createColumn = (body: CreateColumnBody, asAdmin: boolean) =>
+    api.post<ColumnDetail>(asAdmin ? '/admin/columns' : '/columns', body, { quiet: true });
+  async function updateColumn(id: string, body: UpdateColumnBody): Promise<ColumnDetail> {
+    column.value = await api.put<ColumnDetail>(`/columns/${id}`, body, { quiet: true });
+    return column.value;
+  }
+
+  const createPumpAround = (columnId: string, body: PumpAroundBody) =>
+    api.post<PumpAroundRecord>(`/columns/${columnId}/pump-arounds`, body, { quiet: true });
+  const updatePumpAround = (id: string, body: UpdatePumpAroundBody) =>
+    api.put<PumpAroundRecord>(`/pump-arounds/${id}`, body, { quiet: true });
+  const deletePumpAround = (id: string, version: number) =>
+    api.del<void>(`/pump-arounds/${id}`, { query: { version }, quiet: true });
 
   const createSection = (columnId: string, body: SectionBody) =>
     api.post<TraySectionRecord>(`/columns/${columnId}/sections`, body, { quiet: true });
@@ -46,6 +71,11 @@ export const useColumnStore = defineStore('column', () => {
     loading,
     load,
     ensure,
+    createColumn,
+    updateColumn,
+    createPumpAround,
+    updatePumpAround,
+    deletePumpAround,
     createSection,
     updateSection,
     loadCase,

@@ -24,6 +24,10 @@ describe('client shell in Chromium', () => {
     await signInAs(b.page, 'admin');
     await b.page.getByText('T-701').first().waitFor();
     await shot(b.page, 'shell-home');
+    // a reload of the root address (and any deep link) is served the app, not a 404
+    const root = await b.page.goto(`${FROTHLINE_URL}/`);
+    expect(root?.status()).toBe(200);
+    await b.page.getByText('T-701').first().waitFor();
     await b.page.goto(`${FROTHLINE_URL}/admin/users`);
     await b.page.getByText('engineer@frothline.test').waitFor();
     expect(await b.page.getByRole('row').count()).toBeGreaterThan(5);
