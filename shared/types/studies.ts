@@ -4,7 +4,7 @@
  * The engine's own payloads are in shared/types/pumpAround.ts.
  */
 import type { CheckName, CheckStatus, MethodOptions } from './rating.js';
-import type { DutySweep, StudyInput, StudyResult } from './pumpAround.js';
+import type { DutySweep, StudyInput, StudyPoint, StudyResult, StudyTrayPoint } from './pumpAround.js';
 import type { ReviewEntry, ReviewStatus } from './runs.js';
 
 /** Review status, the same life cycle as a rating run (shared/types/runs.ts): approved is read-only. */
@@ -52,27 +52,14 @@ export interface StudyInputsSnapshot {
 }
 
 /** One tray at one duty, slimmed: traffic and, per check (in `checkNames` order), percent of limit and status. */
-export interface SlimTrayPoint {
-  tray: number;
-  region: 'above' | 'zone' | 'below';
-  vapourMassFlow_kg_h: number;
-  liquidMassFlow_kg_h: number;
-  dry: boolean;
+export interface SlimTrayPoint extends Omit<StudyTrayPoint, 'rating'> {
   /** percent of limit per check, rounded to 0.01 %, same order as SlimStudyResult.checkNames */
   percent: number[];
   status: CheckStatus[];
   controllingCheck: CheckName;
 }
 
-export interface SlimStudyPoint {
-  duty_kW: number;
-  condenserDutyChange_kW: number;
-  reflux_kg_h: number;
-  heatRecovered_kW: number;
-  liquidToVapourAboveZone: number;
-  circulation_kg_h: number;
-  returnTemperatureDrop_K: number;
-  dryTrays: number[];
+export interface SlimStudyPoint extends Omit<StudyPoint, 'trays'> {
   trays: SlimTrayPoint[];
 }
 
