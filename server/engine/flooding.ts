@@ -120,7 +120,8 @@ export const floodVelocitySoudersBrown = method(
 
 /**
  * Clear liquid height at the froth-to-spray transition for Kister & Haas, corrected Jeronimo &
- * Sawistowski form (Perry 8th ed. eqs. 14-82 to 14-84, coefficients from memory).
+ * Sawistowski form. Perry 8th ed. names it for eq. (14-81) as eqs. (14-82) to (14-84) (seen); the
+ * coefficients below are from memory (the printed equations have not been seen).
  *
  *   h_ct,H2O = 0.497 A_f^−0.791 d_H^0.833 / (1 + 0.013 Q_L^−0.59 A_f^−1.79)    [mm]
  *   h_ct = h_ct,H2O (996/ρL)^(0.5(1 − n)),  n = 0.00091 d_H/A_f
@@ -153,17 +154,22 @@ export const transitionClearLiquidHeightKisterHaas = method(
 );
 
 /**
- * Kister & Haas (1990) sieve/valve tray flood capacity factor (net area), coefficients from memory.
+ * Kister & Haas (1990) entrainment (jet) flood capacity factor on the net area.
  *
- * Source: Kister, H.Z., Haas, J.R., Chem. Eng. Prog. 86(9), 63 (1990); Kister, Distillation Design
- * (1992) eq. (6.12); Perry 8th ed. Sec. 14. Range: Perry 8th Table 14-10 (seen).
+ * Source: Kister, H.Z., Haas, J.R., Chem. Eng. Prog. 86(9), 63 (1990), as printed in Perry's 8th ed.
+ * Sec. 14, eq. (14-81) (seen: constant 0.0277, exponents 0.125/0.1/0.5, units, "C_SB,flood is based on the
+ * net area", ±15 % on the authors' data base; the copy seen lost its superscripts). English form constant
+ * 0.144 seen in Kister, Distillation Design (1992) §6.5.3 (Eq. 6.12 applied: 0.144 (0.5² × 2.84/27.19)^0.125 …);
+ * the two printed constants agree within 0.2 % with d_H squared, 27 % apart with d_H to the first power
+ * (tests/unit/engine/kisterHaasPublished.test.ts). Perry's text introduces it "for sieve trays".
+ * Range: Perry 8th Table 14-10 (seen; the weir-height row was not legible, 10–50 mm is from memory).
  *
  *   C_SB = 0.0277 (d_H² σ/ρL)^0.125 (ρV/ρL)^0.1 (TS/h_ct)^0.5    [m/s]
  * @param holeDiameter_mm [mm] 3–15; @param surfaceTension_mN_m [mN/m] 5–80
  * @param liquidDensity [kg/m³] 450–1500; @param vapourDensity [kg/m³] 0.5–30
  * @param traySpacing_mm [mm] 400–900; @param transitionHeight_mm h_ct [mm]
- * @returns C_SB,flood [m/s]; apply the system factor separately.
- * The SI constant 0.0277 and the English 0.144 are unit-consistent (reference sheet §2.6, derived).
+ * @returns C_SB,flood [m/s] on the net area; apply the system factor separately.
+ * Example (computed here): d_H 12.7, σ 2.84, ρL 435.5, ρV 57.9, TS 609.6, h_ct 63.5 → 0.0706 m/s.
  */
 export const kisterHaasFloodCapacity = method(
   'kisterHaasFloodCapacity',
@@ -184,9 +190,9 @@ export const kisterHaasFloodCapacity = method(
   },
   {
     label: 'Kister & Haas (1990) jet flood',
-    source: "Kister & Haas, Chem. Eng. Prog. 86(9) 63 (1990) [coefficients from memory]; Kister, Distillation Design (1992) eq. 6.12; range Perry's Chemical Engineers' Handbook 8th ed. Table 14-10",
+    source: "Kister & Haas, Chem. Eng. Prog. 86(9) 63 (1990), as in Perry's Chemical Engineers' Handbook 8th ed. eq. (14-81); Kister, Distillation Design (1992) eq. 6.12; range Perry 8th ed. Table 14-10",
     equation: 'C_SB = 0.0277 (dH^2 sigma/rhoL)^0.125 (rhoV/rhoL)^0.1 (TS/h_ct)^0.5',
-    provenance: 'recalled',
+    provenance: 'seen',
     ranges: {
       pressure_kPa: [20, 1200],
       vapourDensity_kg_m3: [0.5, 30],

@@ -3,15 +3,10 @@
  * method options, the engine version) and the engine results, rated section by section and merged by tray.
  */
 import type { DataSource, EntityManager } from 'typeorm';
-import { In } from 'typeorm';
-import { LoadCase } from '../db/entities/LoadCase.js';
 import { RatingRun } from '../db/entities/RatingRun.js';
-import { TraySection } from '../db/entities/TraySection.js';
 import { ENGINE_VERSION, rateSection, summarise, validateRatingRequest } from '../engine/index.js';
 import { NotFoundError, ValidationError, type ErrorDetail } from '../errors.js';
-import { audit } from './audit.js';
-import { visibleColumn } from './columnsCommon.js';
-import { packResults } from './runsPack.js';
+import { insertRunWithAudit, readRunInputs, type NewRun } from './runsStore.js';
 import { toRunSummary } from './runsRead.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { MethodOptions, TrayLoad } from '../../shared/types/rating.js';
@@ -71,54 +66,19 @@ export function rateSnapshot(snapshot: Omit<RunSnapshot, 'engineVersion'>): { re
   };
 }
 
-type NewRun = Omit<RatingRun, 'id' | 'createdAt' | 'updatedAt' | 'version'>;
-
 /**
- * Plain INSERT with packed results: TypeORM's save() deep-merges and diffs the large results object,
- * which cost more than the rating itself (bench/api.ts).
+ * Create a rating run: one read, rate, one write (run and audit row). Works inside the caller's
+ * transaction too: inspections pass `geometryOverride` (per section id, the as-found geometry) and kind
+ * 'as-found'. Without a label the run is named after the load case and the time.
  */
-async function insertRun(em: EntityManager, r: NewRun): Promise<RatingRun> {
-  const rows = (await em.query(
-    `INSERT INTO rating_runs (column_id, load_case_id, label, kind, status, engine_version, snapshot, results, summary, reviews,
-       review_comment, author_id, reviewer_id)
-     VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13) RETURNING id, created_at, updated_at, version`,
-    [
-      r.columnId,
-      r.loadCaseId,
-      r.label,
-      r.kind,
-      r.status,
-      r.engineVersion,
-      JSON.stringify(r.snapshot),
-      JSON.stringify(packResults(r.results)),
-      JSON.stringify(r.summary),
-      JSON.stringify(r.reviews),
-      r.reviewComment,
-      r.authorId,
-      r.reviewerId,
-    ],
-  )) as { id: string; created_at: Date; updated_at: Date; version: number }[];
-  const row = rows[0]!;
-  return Object.assign(new RatingRun(), r, {
-    id: row.id,
-    createdAt: row.created_at,
-    updatedAt: row.updated_at,
-    version: row.version,
-  });
-}
-
-/**
- * Create a rating run inside the caller's transaction. Inspections call this with `geometryOverride`
- * (per section id, the as-found geometry) and kind 'as-found'.
- */
-export async function createRatingRun(em: EntityManager, user: SessionUser, input: CreateRatingRunInput): Promise<RatingRun> {
-  const col = await visibleColumn(em, user, input.columnId);
-  const lc = await em.findOneBy(LoadCase, { id: input.loadCaseId, columnId: col.id });
+export async function createRatingRun(
+  em: EntityManager,
+  user: SessionUser,
+  input: Omit<CreateRatingRunInput, 'label'> & { label?: string },
+): Promise<RatingRun> {
+  const { column: col, loadCase: lc, sections: all } = await readRunInputs(em, user, input.columnId, input.loadCaseId);
   if (!lc) throw new NotFoundError('Load case');
-  let stored = await em.find(TraySection, {
-    where: input.sectionIds ? { columnId: col.id, id: In(input.sectionIds) } : { columnId: col.id },
-    order: { firstTray: 'ASC' },
-  });
+  let stored = input.sectionIds ? all.filter((s) => input.sectionIds!.includes(s.id)) : all;
   if (input.sectionIds) {
     const missing = input.sectionIds.filter((id) => !stored.some((s) => s.id === id));
     if (missing.length)
@@ -132,7 +92,8 @@ export async function createRatingRun(em: EntityManager, user: SessionUser, inpu
       throw new ValidationError('Unknown sections', [
         { path: `geometryOverride.${id}`, message: `is not a rated section of column ${col.tag}` },
       ]);
-  const loaded = (s: TraySection): TrayLoad[] => lc.loads.filter((l) => l.tray >= s.firstTray && l.tray <= s.lastTray);
+  const loaded = (s: { firstTray: number; lastTray: number }): TrayLoad[] =>
+    lc.loads.filter((l) => l.tray >= s.firstTray && l.tray <= s.lastTray);
   stored = stored.filter((s) => loaded(s).length > 0);
   if (stored.length === 0)
     throw new ValidationError('Nothing to rate', [
@@ -156,7 +117,7 @@ export async function createRatingRun(em: EntityManager, user: SessionUser, inpu
   });
   const loads = lc.loads.filter((l) => stored.some((s) => l.tray >= s.firstTray && l.tray <= s.lastTray));
   const base = {
-    column: { id: col.id, tag: col.tag, numbering: col.numbering, trayCount: col.trayCount },
+    column: col,
     loadCase: { id: lc.id, name: lc.name, basis: lc.basis, version: lc.version },
     sections,
     loads,
@@ -166,10 +127,11 @@ export async function createRatingRun(em: EntityManager, user: SessionUser, inpu
   // uncovered trays are those of the load case outside every rated section
   results.uncoveredTrays = lc.loads.map((l) => l.tray).filter((t) => !loads.some((l) => l.tray === t));
   const snapshot: RunSnapshot = { ...base, methods, engineVersion: ENGINE_VERSION };
-  const run = await insertRun(em, {
+  const label = input.label ?? `${lc.name} — ${new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC`;
+  const run: NewRun = {
     columnId: col.id,
     loadCaseId: lc.id,
-    label: input.label,
+    label,
     kind: input.kind,
     status: 'draft',
     engineVersion: ENGINE_VERSION,
@@ -186,25 +148,23 @@ export async function createRatingRun(em: EntityManager, user: SessionUser, inpu
       traysOver: results.traysOver,
       traysNear: results.traysNear,
     },
+  };
+  const row = await insertRunWithAudit(em, run, {
+    userId: user.id,
+    changes: {
+      label,
+      kind: input.kind,
+      loadCaseId: lc.id,
+      sections: sections.map((s) => s.sectionId),
+      overridden: sections.filter((s) => s.overridden).map((s) => s.sectionId),
+    },
   });
-  await audit(em, user.id, 'create', 'rating-run', run.id, {
-    label: input.label,
-    kind: input.kind,
-    loadCaseId: lc.id,
-    sections: sections.map((s) => s.sectionId),
-    overridden: sections.filter((s) => s.overridden).map((s) => s.sectionId),
-  });
-  return run;
+  return Object.assign(new RatingRun(), run, row, { loadCaseName: lc.name });
 }
 
 /** POST /runs answers the summary (the run page loads the full record with GET /runs/:id). */
 export async function createRunFromBody(ds: DataSource, user: SessionUser, body: CreateRunBody): Promise<RunSummary> {
-  return ds.transaction(async (em) => {
-    const lc = body.label
-      ? []
-      : ((await em.query(`SELECT name FROM load_cases WHERE id = $1`, [body.loadCaseId])) as { name: string }[]);
-    const label = body.label ?? `${lc[0]?.name ?? 'Rating'} — ${new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC`;
-    const run = await createRatingRun(em, user, { ...body, label, kind: 'rating' });
-    return toRunSummary(run, user.name);
-  });
+  // no explicit transaction: one read, then one atomic statement writes the run and its audit row
+  const run = await createRatingRun(ds.manager, user, { ...body, kind: 'rating' });
+  return toRunSummary(run, user.name);
 }

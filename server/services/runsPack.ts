@@ -1,24 +1,32 @@
 /**
- * Lossless compact storage of run results: every per-tray check and detail becomes an array in a fixed
- * key order and repeated strings (units, senses, statuses, method ids, section ids) an index into one
- * string table. A 60-tray result shrinks about threefold, which is what a run insert mostly costs
- * (bench/api.ts). Numbers are kept exactly; unpack(pack(r)) deep-equals r.
+ * Lossless compact storage of run results (rating_runs.results, bytea). Layout of the stored bytes:
+ *   'FRB2' | Brotli( uint32LE header length | header JSON (UTF-8) | float64LE numbers )
+ * The header holds everything but the per-tray numbers: a string table (units, senses, statuses, method
+ * ids, section ids), the detail key order and, per tray, indices into the string table and the warnings.
+ * The numbers (per check value, limit, percent of limit; then every detail, NaN for an absent one) are
+ * written as binary doubles, so they are exact and never go through text. A 60-tray result goes from
+ * ~200 kB of JSON to ~10 kB; the bytes sent to and written by PostgreSQL and the JSON text are what a run
+ * insert mostly costs (bench/api.ts). decodeResults(encodeResults(r)) deep-equals r.
+ * Older rows hold JSON text (plain results, or the 'packed-1' array form), and are read back unchanged.
+ * The run snapshot (geometry, loads, methods) is stored the same way as compressed JSON (encodeJson).
  */
+import { brotliCompressSync, brotliDecompressSync, constants as zc } from 'node:zlib';
 import type { ValueTransformer } from 'typeorm';
 import { CHECK_NAMES, type CheckResult, type TrayDetails } from '../../shared/types/rating.js';
 import type { RunResults, RunTrayResult } from '../../shared/types/runs.js';
 
-const FORMAT = 'packed-1';
-type PackedCheck = [number, number, number, number, number, number, number];
-type PackedTray = [number, number, number, PackedCheck[], (number | null)[], RunTrayResult['warnings']];
-interface Packed extends Omit<RunResults, 'trays'> {
-  format: typeof FORMAT;
+const MAGIC = Buffer.from('FRB2', 'latin1');
+const PER_CHECK = 3;
+
+/** Per tray: tray, section, controlling check, per check [unit, sense, status, method], warnings. */
+type HeaderTray = [number, number, number, number[], RunTrayResult['warnings']];
+interface Header extends Omit<RunResults, 'trays'> {
   strings: string[];
   detailKeys: string[];
-  trays: PackedTray[];
+  trays: HeaderTray[];
 }
 
-export function packResults(r: RunResults): Packed {
+export function encodeResults(r: RunResults): Buffer {
   const strings: string[] = [];
   const index = new Map<string, number>();
   const s = (x: string): number => {
@@ -27,18 +35,86 @@ export function packResults(r: RunResults): Packed {
     return i;
   };
   const detailKeys = [...new Set(r.trays.flatMap((t) => Object.keys(t.details)))];
-  const trays = r.trays.map((t): PackedTray => {
-    const checks = CHECK_NAMES.map((c): PackedCheck => {
+  const stride = CHECK_NAMES.length * PER_CHECK + detailKeys.length;
+  const nums = new Float64Array(stride * r.trays.length);
+  let o = 0;
+  const put = (x: number | undefined): void => void (nums[o++] = x ?? NaN);
+  const trays = r.trays.map((t): HeaderTray => {
+    const idx: number[] = [];
+    for (const c of CHECK_NAMES) {
       const k = t.checks[c];
-      return [k.value, s(k.unit), k.limit, s(k.sense), k.percentOfLimit, s(k.status), s(k.method)];
-    });
-    return [t.tray, s(t.sectionId), s(t.controllingCheck), checks, detailKeys.map((k) => t.details[k] ?? null), t.warnings];
+      put(k.value);
+      put(k.limit);
+      put(k.percentOfLimit);
+      idx.push(s(k.unit), s(k.sense), s(k.status), s(k.method));
+    }
+    for (const k of detailKeys) put(t.details[k]);
+    return [t.tray, s(t.sectionId), s(t.controllingCheck), idx, t.warnings];
   });
-  return { ...r, format: FORMAT, strings, detailKeys, trays };
+  const header: Header = { ...r, strings, detailKeys, trays };
+  const head = Buffer.from(JSON.stringify(header), 'utf8');
+  const len = Buffer.allocUnsafe(4);
+  len.writeUInt32LE(head.length);
+  const raw = Buffer.concat([len, head, littleEndian(Buffer.from(nums.buffer))]);
+  const params = { [zc.BROTLI_PARAM_QUALITY]: 1, [zc.BROTLI_PARAM_SIZE_HINT]: raw.length };
+  return Buffer.concat([MAGIC, brotliCompressSync(raw, { params })]);
 }
 
-export function unpackResults(p: RunResults | Packed): RunResults {
-  if (!('format' in p) || p.format !== FORMAT) return p as RunResults;
+/** Doubles are stored little-endian; swap in place on a big-endian host (the buffer is ours). */
+function littleEndian(b: Buffer): Buffer {
+  return IS_LE ? b : b.swap64();
+}
+const IS_LE = new Uint8Array(new Float64Array([1]).buffer)[7] === 0x3f;
+
+function decodeBinary(raw: Buffer): RunResults {
+  const headLen = raw.readUInt32LE(0);
+  const { strings, detailKeys, trays, ...rest } = JSON.parse(raw.toString('utf8', 4, 4 + headLen)) as Header;
+  const nums = new Float64Array((raw.length - 4 - headLen) / 8); // a copy: aligned, and ours to swap
+  const bytes = Buffer.from(nums.buffer);
+  raw.copy(bytes, 0, 4 + headLen);
+  littleEndian(bytes);
+  let o = 0;
+  const get = (): number => nums[o++]!;
+  const str = (i: number): string => strings[i]!;
+  return {
+    ...rest,
+    trays: trays.map(([tray, section, controlling, idx, warnings]): RunTrayResult => {
+      const checks = {} as RunTrayResult['checks'];
+      CHECK_NAMES.forEach((c, i) => {
+        const [unit, sense, status, method] = idx.slice(4 * i, 4 * i + 4) as [number, number, number, number];
+        const k: CheckResult = {
+          value: get(),
+          unit: str(unit),
+          limit: get(),
+          sense: str(sense) as CheckResult['sense'],
+          percentOfLimit: get(),
+          status: str(status) as CheckResult['status'],
+          method: str(method),
+        };
+        checks[c] = k;
+      });
+      const details = {} as TrayDetails;
+      for (const k of detailKeys) {
+        const x = get();
+        if (!Number.isNaN(x)) details[k] = x;
+      }
+      return { tray, sectionId: str(section), controllingCheck: str(controlling) as RunTrayResult['controllingCheck'], checks, details, warnings };
+    }),
+  };
+}
+
+/** The 'packed-1' JSON array form of earlier rows. */
+type PackedCheck = [number, number, number, number, number, number, number];
+type PackedTray = [number, number, number, PackedCheck[], (number | null)[], RunTrayResult['warnings']];
+interface Packed1 extends Omit<RunResults, 'trays'> {
+  format: 'packed-1';
+  strings: string[];
+  detailKeys: string[];
+  trays: PackedTray[];
+}
+
+function unpackLegacy(p: RunResults | Packed1): RunResults {
+  if (!('format' in p) || p.format !== 'packed-1') return p as RunResults;
   const { format: _f, strings, detailKeys, trays, ...rest } = p;
   const str = (i: number): string => strings[i]!;
   return {
@@ -68,8 +144,37 @@ export function unpackResults(p: RunResults | Packed): RunResults {
   };
 }
 
-/** TypeORM transformer for the rating_runs.results column. */
+/** Results from the stored bytes: the binary form, or JSON text written before it. */
+export function decodeResults(b: Buffer): RunResults {
+  if (b.subarray(0, MAGIC.length).equals(MAGIC)) return decodeBinary(brotliDecompressSync(b.subarray(MAGIC.length)));
+  return unpackLegacy(JSON.parse(b.toString('utf8')) as RunResults | Packed1);
+}
+
+const JSON_MAGIC = Buffer.from('FRJ1', 'latin1');
+
+/** Any JSON value as stored bytes: 'FRJ1' | Brotli(JSON). Used for the run snapshot. */
+export function encodeJson(v: unknown): Buffer {
+  const json = Buffer.from(JSON.stringify(v), 'utf8');
+  const params = { [zc.BROTLI_PARAM_QUALITY]: 1, [zc.BROTLI_PARAM_SIZE_HINT]: json.length };
+  return Buffer.concat([JSON_MAGIC, brotliCompressSync(json, { params })]);
+}
+
+/** The value from encodeJson's bytes, or from plain UTF-8 JSON text (rows stored before compression). */
+export function decodeJson<T>(b: Buffer): T {
+  const text = b.subarray(0, JSON_MAGIC.length).equals(JSON_MAGIC)
+    ? brotliDecompressSync(b.subarray(JSON_MAGIC.length)).toString('utf8')
+    : b.toString('utf8');
+  return JSON.parse(text) as T;
+}
+
+/** TypeORM transformer for the rating_runs.snapshot column (bytea). */
+export const snapshotTransformer: ValueTransformer = {
+  to: (v: unknown) => (v == null ? v : encodeJson(v)),
+  from: (b: Buffer | null) => (b ? decodeJson(b) : b),
+};
+
+/** TypeORM transformer for the rating_runs.results column (bytea). */
 export const resultsTransformer: ValueTransformer = {
-  to: (r: RunResults | null | undefined) => (r ? packResults(r) : r),
-  from: (p: RunResults | Packed | null) => (p ? unpackResults(p) : p),
+  to: (r: RunResults | null | undefined) => (r ? encodeResults(r) : r),
+  from: (b: Buffer | null) => (b ? decodeResults(b) : b),
 };

@@ -57,7 +57,7 @@ interface SummaryRow {
 
 /** Summary columns only (no snapshot or results): the column page and the list show many runs. */
 const SUMMARY_SQL = `SELECT r.id, r.column_id, r.load_case_id, r.label, r.kind, r.status, r.engine_version, r.summary, r.author_id,
-  a.name AS author_name, r.created_at, r.version, r.snapshot->'loadCase'->>'name' AS lc
+  a.name AS author_name, r.created_at, r.version, r.load_case_name AS lc
   FROM rating_runs r LEFT JOIN users a ON a.id = r.author_id`;
 
 const fromRow = (r: SummaryRow): RunSummary => ({

@@ -1,33 +1,73 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_SECTIONS } from '../../server/db/seed/demoColumn.js';
 import { DEMO_LOAD_CASES } from '../../server/db/seed/demoLoads.js';
-import { packResults, unpackResults } from '../../server/services/runsPack.js';
+import { decodeResults, encodeResults } from '../../server/services/runsPack.js';
 import { rateSnapshot } from '../../server/services/runs.js';
+import { CHECK_NAMES } from '../../shared/types/rating.js';
+import type { RunResults } from '../../shared/types/runs.js';
 
-describe('packed storage of run results', () => {
-  it('round-trips every demo case exactly through JSON and is at least twice smaller', () => {
-    for (const lc of DEMO_LOAD_CASES) {
-      const sections = DEMO_SECTIONS.map((s, i) => ({
-        ...s,
-        sectionId: `section-${i}`,
-        provenanceDate: s.provenanceDate ?? null,
-        overridden: false,
-      }));
-      const { results } = rateSnapshot({
-        column: { id: 'c', tag: 'T', numbering: 'top-down', trayCount: 46 },
-        loadCase: { id: 'l', name: lc.name, basis: lc.basis, version: 1 },
-        sections,
-        loads: lc.loads,
-        methods: {},
-      });
-      const stored = JSON.stringify(packResults(results));
-      expect(unpackResults(JSON.parse(stored))).toEqual(results);
-      expect(stored.length * 2).toBeLessThan(JSON.stringify(results).length);
+function demoResults(): RunResults[] {
+  return DEMO_LOAD_CASES.map((lc) => {
+    const sections = DEMO_SECTIONS.map((s, i) => ({
+      ...s,
+      sectionId: `section-${i}`,
+      provenanceDate: s.provenanceDate ?? null,
+      overridden: false,
+    }));
+    return rateSnapshot({
+      column: { id: 'c', tag: 'T', numbering: 'top-down', trayCount: 46 },
+      loadCase: { id: 'l', name: lc.name, basis: lc.basis, version: 1 },
+      sections,
+      loads: lc.loads,
+      methods: {},
+    }).results;
+  });
+}
+
+describe('compressed storage of run results', () => {
+  it('round-trips every demo case exactly and is at least five times smaller than the JSON', () => {
+    for (const results of demoResults()) {
+      const stored = encodeResults(results);
+      expect(decodeResults(stored)).toEqual(results);
+      expect(stored.length * 5).toBeLessThan(JSON.stringify(results).length);
     }
   });
 
-  it('reads unpacked results unchanged', () => {
-    const plain = { trays: [], sections: [] } as unknown as Parameters<typeof unpackResults>[0];
-    expect(unpackResults(plain)).toBe(plain);
+  it('keeps numbers bit-exact, absent details absent, and warnings with their text', () => {
+    const [r] = demoResults();
+    const t = r!.trays[0]!;
+    t.checks.jetFlood.value = 0.1 + 0.2; // not representable in short decimal form
+    delete (t.details as Record<string, number>).entrainedLiquid_kg_h;
+    t.warnings = [{ code: 'x-test', message: 'flow parameter 0.004 – below the chart (°C, m³/h·m)' }];
+    const back = decodeResults(encodeResults(r!)).trays[0]!;
+    expect(Object.is(back.checks.jetFlood.value, 0.1 + 0.2)).toBe(true);
+    expect('entrainedLiquid_kg_h' in back.details).toBe(false);
+    expect(back.warnings).toEqual(t.warnings);
+  });
+
+  it('reads rows stored before compression (plain JSON text and the packed-1 array form)', () => {
+    const [r] = demoResults();
+    expect(decodeResults(Buffer.from(JSON.stringify(r)))).toEqual(r);
+    const t = r!.trays[0]!;
+    const strings = ['s1', 'jetFlood', '%', 'max', 'ok', 'fair'];
+    const packed1 = {
+      ...r,
+      trays: [[t.tray, 0, 1, CHECK_NAMES.map(() => [1, 2, 80, 3, 1.25, 4, 5]), [0.5, null], []]],
+      format: 'packed-1',
+      strings,
+      detailKeys: ['flowParameter', 'capacityFactor_m_s'],
+    };
+    const back = decodeResults(Buffer.from(JSON.stringify(packed1))).trays[0]!;
+    expect(back.sectionId).toBe('s1');
+    expect(back.checks.weeping).toEqual({ value: 1, unit: '%', limit: 80, sense: 'max', percentOfLimit: 1.25, status: 'ok', method: 'fair' });
+    expect(back.details).toEqual({ flowParameter: 0.5 });
+  });
+});
+
+describe('compressed storage of small results', () => {
+  it('round-trips a one-tray result (small buffers come from a shared pool, unaligned)', () => {
+    const [r] = demoResults();
+    const one = { ...r!, trays: r!.trays.slice(0, 1) };
+    for (let i = 0; i < 5; i++) expect(decodeResults(encodeResults(one))).toEqual(one);
   });
 });
