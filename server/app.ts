@@ -15,7 +15,7 @@ import type { RouteDef } from './http/route.js';
 import { validate } from './http/validation.js';
 import { logger } from './logger.js';
 import { allRoutes } from './routes/index.js';
-import { activeUser, toSessionUser } from './services/users.js';
+import { activeSessionUser } from './services/users.js';
 import { can } from '../shared/permissions.js';
 import type { SessionUser } from '../shared/types/api.js';
 
@@ -37,9 +37,8 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
     let user: SessionUser | null = null;
     if (r.access !== 'public') {
       const id = readSessionUserId(req);
-      const u = id ? await activeUser(ds, id) : null;
-      if (!u) throw new UnauthorizedError();
-      user = toSessionUser(u);
+      user = id ? await activeSessionUser(ds, id) : null;
+      if (!user) throw new UnauthorizedError();
       if (r.access !== 'signed-in' && !can(user.role, r.access))
         throw new ForbiddenError(`Your role (${user.role}) may not ${r.access.replace('.', ' ')}`);
     }

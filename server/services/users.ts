@@ -32,9 +32,13 @@ export async function signIn(ds: DataSource, email: string, password: string): P
   return user;
 }
 
-export async function activeUser(ds: DataSource, id: string): Promise<User | null> {
-  const u = await ds.getRepository(User).findOneBy({ id });
-  return u && u.active ? u : null;
+/** The signed-in user of a request, if still active: one plain query (it runs on every API request). */
+export async function activeSessionUser(ds: DataSource, id: string): Promise<SessionUser | null> {
+  const rows = (await ds.query(
+    `SELECT id, email, name, role, unit_system AS "unitSystem" FROM users WHERE id = $1 AND active`,
+    [id],
+  )) as SessionUser[];
+  return rows[0] ?? null;
 }
 
 export async function listUsers(ds: DataSource): Promise<UserRecord[]> {
