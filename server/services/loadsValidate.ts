@@ -1,6 +1,5 @@
 /** Consistency checks of a per-tray load grid against its column (the schema has checked each field). */
 import type { ErrorDetail } from '../errors.js';
-import type { StageMapEntry } from '../../shared/types/loads.js';
 import type { TrayLoad } from '../../shared/types/rating.js';
 
 /** Faults naming the row and tray: tray outside the column, duplicate trays, vapour not lighter than liquid. */
@@ -24,27 +23,7 @@ export function loadErrors(loads: TrayLoad[], trayCount: number, root = 'loads')
   return errors;
 }
 
-/** Stage map: ranges inside the column, in order, not overlapping. */
-export function stageMapErrors(map: StageMapEntry[] | null | undefined, trayCount: number, root = 'stageMap'): ErrorDetail[] {
-  const errors: ErrorDetail[] = [];
-  const sorted = (map ?? []).map((m, i) => ({ ...m, i })).sort((a, b) => a.firstTray - b.firstTray);
-  sorted.forEach((m, k) => {
-    const p = `${root}.${m.i}`;
-    if (m.lastTray < m.firstTray)
-      errors.push({ path: `${p}.lastTray`, message: `stage ${m.stage}: lastTray must not be below firstTray` });
-    if (m.lastTray > trayCount)
-      errors.push({
-        path: `${p}.lastTray`,
-        message: `stage ${m.stage}: tray ${m.lastTray} is outside the column (trays 1–${trayCount})`,
-      });
-    const prev = sorted[k - 1];
-    if (prev && m.firstTray <= prev.lastTray)
-      errors.push({
-        path: `${p}.firstTray`,
-        message: `stage ${m.stage}: trays ${m.firstTray}–${m.lastTray} overlap stage ${prev.stage} (trays ${prev.firstTray}–${prev.lastTray})`,
-      });
-  });
-  return errors;
-}
+/** Stage map faults: the shared check, so the client shows the same faults as the user types. */
+export { stageMapErrors } from '../../shared/stageMap.js';
 
 export const sortLoads = (loads: TrayLoad[]): TrayLoad[] => [...loads].sort((a, b) => a.tray - b.tray);
