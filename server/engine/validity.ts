@@ -19,6 +19,8 @@ export const WARNING_CODES = {
   fairRestriction: 'fair-restriction',
   downcomerBottomLarger: 'downcomer-bottom-larger',
   weirLoadingHigh: 'weir-loading-high',
+  kisterHaasTransitionRecalled: 'kister-haas-transition-recalled',
+  kisterHaasValveTray: 'kister-haas-valve-tray',
 } as const;
 
 export function formatNumber(x: number): string {

@@ -21,6 +21,13 @@ describe('range warnings and multipass', () => {
       'range:fairFloodCapacityLygerosMagoulas:holeAreaRatio',
     ]));
     expect(r.trays[0]!.checks.jetFlood.method).toBe('kisterHaasFloodCapacity');
+    // h_ct coefficients are from memory (reference sheet §2.6): every Kister & Haas rating says so
+    expect(codes(r.warnings)).toContain('kister-haas-transition-recalled');
+    expect(codes(r.warnings)).not.toContain('kister-haas-valve-tray');
+    expect(codes(rateSection({ ...req, methods: {} }).warnings)).not.toContain('kister-haas-transition-recalled');
+    const valve = inventedRequest();
+    expect(valve.section.trayType).not.toBe('sieve');
+    expect(codes(rateSection({ ...valve, methods: { jetFlood: 'kister-haas' } }).warnings)).toContain('kister-haas-valve-tray');
     expect(codes(r.trays[0]!.warnings)).toContain('range:kisterHaasFloodCapacity:traySpacing_mm');
   });
 
