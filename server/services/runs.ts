@@ -5,8 +5,8 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { RatingRun } from '../db/entities/RatingRun.js';
 import { ENGINE_VERSION, rateSection, summarise, validateRatingRequest } from '../engine/index.js';
-import { NotFoundError, ValidationError, type ErrorDetail } from '../errors.js';
-import { insertRunWithAudit, readRunInputs, type NewRun } from './runsStore.js';
+import { ConflictError, NotFoundError, ValidationError, type ErrorDetail } from '../errors.js';
+import { forgetRunInputs, insertRunWithAudit, runInputsCache, type NewRun } from './runsStore.js';
 import { toRunSummary } from './runsRead.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { MethodOptions, TrayLoad } from '../../shared/types/rating.js';
@@ -75,8 +75,10 @@ export async function createRatingRun(
   em: EntityManager,
   user: SessionUser,
   input: Omit<CreateRatingRunInput, 'label'> & { label?: string },
+  fresh = false,
 ): Promise<RatingRun> {
-  const { column: col, loadCase: lc, sections: all } = await readRunInputs(em, user, input.columnId, input.loadCaseId);
+  const { inputs, cached } = await runInputsCache(em, user, input.columnId, input.loadCaseId, fresh);
+  const { column: col, loadCase: lc, sections: all } = inputs;
   if (!lc) throw new NotFoundError('Load case');
   let stored = input.sectionIds ? all.filter((s) => input.sectionIds!.includes(s.id)) : all;
   if (input.sectionIds) {
@@ -149,16 +151,22 @@ export async function createRatingRun(
       traysNear: results.traysNear,
     },
   };
-  const row = await insertRunWithAudit(em, run, {
-    userId: user.id,
-    changes: {
-      label,
-      kind: input.kind,
-      loadCaseId: lc.id,
-      sections: sections.map((s) => s.sectionId),
-      overridden: sections.filter((s) => s.overridden).map((s) => s.sectionId),
-    },
-  });
+  const changes = {
+    label,
+    kind: input.kind,
+    loadCaseId: lc.id,
+    sections: sections.map((s) => s.sectionId),
+    overridden: sections.filter((s) => s.overridden).map((s) => s.sectionId),
+  };
+  const row = await insertRunWithAudit(em, user, run, { changes }, inputs.guard);
+  if (!row) {
+    // the column, load case or sections changed since they were read (or the user lost access): read again
+    forgetRunInputs(input.columnId, input.loadCaseId);
+    if (cached) return createRatingRun(em, user, input, true);
+    throw new ConflictError('The column, its sections or the load case changed while the run was being rated; rate again', [
+      { path: 'loadCaseId', message: 'changed during rating' },
+    ]);
+  }
   return Object.assign(new RatingRun(), run, row, { loadCaseName: lc.name });
 }
 
