@@ -8,7 +8,7 @@ import swaggerUi from 'swagger-ui-express';
 import type { DataSource } from 'typeorm';
 import { config } from './config.js';
 import { ForbiddenError, UnauthorizedError } from './errors.js';
-import { readSessionUserId } from './http/auth.js';
+import { readSession, renewSessionIfOld } from './http/auth.js';
 import { errorHandler, notFoundHandler } from './http/errorHandler.js';
 import { buildOpenApi } from './http/openapi.js';
 import type { RouteDef } from './http/route.js';
@@ -36,9 +36,10 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
   const authn = wrap(async (req, res) => {
     let user: SessionUser | null = null;
     if (r.access !== 'public') {
-      const id = readSessionUserId(req);
-      user = id ? await activeSessionUser(ds, id) : null;
-      if (!user) throw new UnauthorizedError();
+      const session = readSession(req);
+      user = session ? await activeSessionUser(ds, session.userId) : null;
+      if (!user || !session) throw new UnauthorizedError();
+      renewSessionIfOld(res, user, session.issuedAt);
       if (r.access !== 'signed-in' && !can(user.role, r.access))
         throw new ForbiddenError(`Your role (${user.role}) may not ${r.access.replace('.', ' ')}`);
     }

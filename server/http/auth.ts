@@ -38,16 +38,24 @@ export function clearSession(res: Response): void {
   res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: 'strict', path: '/' });
 }
 
-/** Reads the session cookie; returns the user id or null for a missing, expired or forged token. */
-export function readSessionUserId(req: Request): string | null {
+/** Reads the session cookie; returns the user id and issue time, or null for a missing, expired or forged token. */
+export function readSession(req: Request): { userId: string; issuedAt: number } | null {
   const token = (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];
   if (!token) return null;
   try {
     const claims = jwt.verify(token, secretKey(), { algorithms: ['HS256'] }) as jwt.JwtPayload;
-    return typeof claims.sub === 'string' ? claims.sub : null;
+    return typeof claims.sub === 'string' ? { userId: claims.sub, issuedAt: claims.iat ?? 0 } : null;
   } catch {
     return null;
   }
+}
+
+/**
+ * Sliding session: a request made after half of the session's life renews the cookie, so a user who keeps
+ * working is not signed out mid-edit; an idle session still ends after SESSION_MINUTES.
+ */
+export function renewSessionIfOld(res: Response, user: { id: string; role: Role }, issuedAt: number, nowMs = Date.now()): void {
+  if (nowMs / 1000 - issuedAt > (config.sessionMinutes * 60) / 2) issueSession(res, user);
 }
 
 export type { SessionUser };

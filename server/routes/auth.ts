@@ -11,7 +11,9 @@ const signInLimiter = rateLimit({
   limit: () => config.loginRateLimit,
   standardHeaders: 'draft-7',
   legacyHeaders: false,
-  message: { error: 'Too many sign-in attempts from this address; wait 15 minutes and try again' },
+  // only failed attempts count: colleagues signing in from one office address must not lock each other out
+  skipSuccessfulRequests: true,
+  message: { error: 'Too many failed sign-in attempts from this address; wait 15 minutes and try again' },
 });
 
 export const authRoutes = defineRoutes([
@@ -55,6 +57,8 @@ export const authRoutes = defineRoutes([
     access: 'signed-in',
     summary: 'Set the signed-in user’s unit system',
     body: preferencesBody,
-    handler: async ({ ds, user, body }) => ({ user: await setPreferences(ds, user.id, (body as { unitSystem: 'SI' | 'US' }).unitSystem) }),
+    handler: async ({ ds, user, body }) => ({
+      user: await setPreferences(ds, user.id, (body as { unitSystem: 'SI' | 'US' }).unitSystem),
+    }),
   },
 ]);

@@ -1,3 +1,4 @@
+import jwt from 'jsonwebtoken';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { config } from '../../server/config.js';
@@ -45,7 +46,9 @@ describe('sign-in and sessions', () => {
   it('stores passwords as bcrypt hashes of cost at least 10', async () => {
     const { agent } = await signedIn(ctx, 'admin');
     const email = `new-${Date.now()}@test.example`;
-    const created = await agent.post('/api/users').send({ email, name: 'New Person', role: 'inspector', password: 'a-long-password' });
+    const created = await agent
+      .post('/api/users')
+      .send({ email, name: 'New Person', role: 'inspector', password: 'a-long-password' });
     expect(created.status).toBe(201);
     const rows = (await ctx.ds.query('SELECT password_hash FROM users WHERE email = $1', [email])) as { password_hash: string }[];
     const cost = Number(rows[0]!.password_hash.split('$')[2]);
@@ -59,8 +62,35 @@ describe('sign-in and sessions', () => {
     expect((await agent.get('/api/auth/me')).status).toBe(401);
   });
 
+  it('renews the cookie on a request made after half of the session life (sliding session); not before', async () => {
+    const u = await makeUser(ctx.ds, 'viewer');
+    const now = Math.floor(Date.now() / 1000);
+    const token = (ageMin: number) =>
+      jwt.sign({ role: 'viewer', iat: now - ageMin * 60 }, config.jwtSecret, {
+        subject: u.id,
+        expiresIn: config.sessionMinutes * 60,
+        algorithm: 'HS256',
+      });
+    const old = await request(ctx.app)
+      .get('/api/columns')
+      .set('Cookie', `frothline_session=${token(config.sessionMinutes * 0.6)}`);
+    expect(old.status).toBe(200);
+    expect(String(old.headers['set-cookie'])).toMatch(/frothline_session=/);
+    const young = await request(ctx.app)
+      .get('/api/columns')
+      .set('Cookie', `frothline_session=${token(1)}`);
+    expect(young.status).toBe(200);
+    expect(young.headers['set-cookie']).toBeUndefined();
+    const expired = await request(ctx.app)
+      .get('/api/columns')
+      .set('Cookie', `frothline_session=${token(config.sessionMinutes + 1)}`);
+    expect(expired.status).toBe(401);
+  });
+
   it('refuses a forged token', async () => {
-    const res = await request(ctx.app).get('/api/auth/me').set('Cookie', 'frothline_session=eyJhbGciOiJIUzI1NiJ9.eyJzdWIiOiJ4In0.bad');
+    const res = await request(ctx.app)
+      .get('/api/auth/me')
+      .set('Cookie', 'frothline_session=eyJhbGciOiJIUzI1NiJ9.eyJzdWIiOiJ4In0.bad');
     expect(res.status).toBe(401);
   });
 
@@ -102,7 +132,9 @@ describe('API conventions', () => {
   it('answers malformed JSON with 400 and oversize bodies with 413', async () => {
     const bad = await request(ctx.app).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('{"email":');
     expect(bad.status).toBe(400);
-    const big = await request(ctx.app).post('/api/auth/sign-in').send({ email: 'a@b.co', password: 'x'.repeat(2_000_000) });
+    const big = await request(ctx.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'a@b.co', password: 'x'.repeat(2_000_000) });
     expect(big.status).toBe(413);
   });
   it('sets security headers (helmet)', async () => {
