@@ -71,7 +71,7 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
     checkRange(w, kh, 'fractionalHoleArea', holeAreaRatio, undefined);
     checkRange(w, kh, 'weirHeight_mm', section.weirHeight_mm, undefined);
     w.push(warning(WARNING_CODES.kisterHaasTransitionRecalled,
-      "Kister & Haas: the froth-to-spray transition height h_ct uses coefficients from memory (Perry's 8th ed. eqs. 14-82 to 14-84 not yet checked against the printed page); C_SB itself follows the printed eq. 14-81. Cross-check with Fair's correlation."));
+      "Kister & Haas: the froth-to-spray transition height h_ct uses coefficients not yet confirmed against the printed source (Perry's 8th ed. eqs. 14-82 to 14-84); C_SB follows the printed eq. 14-81. Compare with Fair's correlation before relying on the result."));
     if (section.trayType !== 'sieve')
       w.push(warning(WARNING_CODES.kisterHaasValveTray,
         "Kister & Haas applied to a valve tray: Perry's 8th ed. presents eq. 14-81 for sieve trays; hole diameter and open area are taken from the valve orifices."));
