@@ -36,6 +36,7 @@ export const routes: RouteRecordRaw[] = [
         meta: { permission: 'users.manage', nav: { label: 'Users', icon: 'manage_accounts', order: 90 } },
       },
       { path: 'columns/:id', name: 'column', component: () => import('../pages/ColumnPage.vue'), meta: { permission: 'read' } },
+      { path: 'columns/:id/sections/new', name: 'section-new', component: () => import('../pages/SectionPage.vue'), meta: { permission: 'geometry.edit' } },
       { path: 'columns/:id/sections/:sectionId', name: 'section', component: () => import('../pages/SectionPage.vue'), meta: { permission: 'read' } },
       { path: 'columns/:id/import', name: 'load-import', component: () => import('../pages/LoadCaseImportPage.vue'), meta: { permission: 'loads.edit' } },
       { path: 'load-cases/:id', name: 'load-case', component: () => import('../pages/LoadCasePage.vue'), meta: { permission: 'read' } },
