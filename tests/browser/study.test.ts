@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { ColumnSummary } from '../../shared/types/columns.js';
+import type { ColumnDetail, ColumnSummary } from '../../shared/types/columns.js';
 import type { Page as ApiPage } from '../../shared/types/api.js';
 import type { StudySummary } from '../../shared/types/studies.js';
 import { FROTHLINE_URL, launch, shot, signInAs, type Browser } from '../helpers/browser.js';
@@ -8,12 +8,14 @@ import { FROTHLINE_URL, launch, shot, signInAs, type Browser } from '../helpers/
 let b: Browser;
 let studyId: string;
 let copyUrl: string;
+let t701Id: string;
 
 beforeAll(async () => {
   b = await launch();
   await signInAs(b.page, 'process-engineer');
   const cols = (await (await b.page.request.get(`${FROTHLINE_URL}/api/columns?q=T-701`)).json()) as ApiPage<ColumnSummary>;
   const t701 = cols.items.find((c) => c.tag === 'T-701')!;
+  t701Id = t701.id;
   const studies = (await (await b.page.request.get(`${FROTHLINE_URL}/api/columns/${t701.id}/studies`)).json()) as StudySummary[];
   // the seeded demo study (oldest), not copies made by earlier runs of this test
   studyId = studies.filter((s) => s.pumpAroundName === 'Top PA').at(-1)!.id;
@@ -49,6 +51,8 @@ describe('pump-around study page in Chromium', () => {
     expect(await b.page.locator('[data-test=study-caution]').innerText()).toMatch(/management-of-change/);
     expect(await b.page.locator('[data-test=dry-out-duty]').innerText()).toMatch(/\d kW/);
     expect(await b.page.locator('[data-test=recommended-duty]').innerText()).toMatch(/\d kW/);
+    // what "watched" means is said on the card itself, not only in the engine notes
+    expect(await b.page.locator('[data-test=watched-explained]').innerText()).toMatch(/guards when it suggests a duty/);
     for (const chart of ['min-liquid-chart', 'percent-chart'])
       await b.page.locator(`[data-test=${chart}] .main-svg`).first().waitFor();
     await shot(b.page, 'study-page');
@@ -78,6 +82,9 @@ describe('pump-around study page in Chromium', () => {
     // more duty condenses more vapour in the pump-around: less liquid on the top tray
     expect(liquidAfter[0]!).toBeLessThan(liquidBefore[0]!);
     expect(requests).toBe(0);
+    // the demo sweep ends past the dry-out duty: the dry trays are flagged next to the readout
+    expect(await b.page.locator('[data-test=slider-dry]').innerText()).toMatch(/Trays above the return run dry.*reflux 0 kg\/h/s);
+    expect(await b.page.locator('[data-test=slider-above-suggested]').count()).toBe(1);
     await b.page.evaluate(() => window.scrollTo(0, 0)); // a clean full-page shot under the fixed header
     await shot(b.page, 'study-slider-at-top-duty');
     const textAtTop = await b.page.locator('[data-test=selected-duty]').textContent();
@@ -88,6 +95,44 @@ describe('pump-around study page in Chromium', () => {
     );
     await chartChanged(b.page, liquidAfter);
     expect((await sliderLiquid(b.page))[0]!).toBeGreaterThan(liquidAfter[0]!);
+    // back at the base duty, below the suggested one: no flags
+    expect(await b.page.locator('[data-test=slider-dry]').count()).toBe(0);
+    expect(await b.page.locator('[data-test=slider-above-suggested]').count()).toBe(0);
+  });
+
+  it('a base duty already above the suggested duty is flagged, and every limit over is listed on the card', async () => {
+    // demo column T-701, Diesel PA on the summer case: at 21,800 kW it already runs past 70 % of its dry-out duty
+    const col = await (await b.page.request.get(`${FROTHLINE_URL}/api/columns/${t701Id}`)).json();
+    const pa = (col as ColumnDetail).pumpArounds.find((p) => p.name === 'Diesel PA')!;
+    const lc = (col as ColumnDetail).loadCases.find((l) => l.name === 'Summer normal')!;
+    const res = await b.page.request.post(`${FROTHLINE_URL}/api/columns/${t701Id}/studies`, {
+      data: {
+        label: 'Diesel PA at its summer duty',
+        loadCaseId: lc.id,
+        pumpAroundId: pa.id,
+        latentHeat_kJ_kg: 274.3,
+        liquidHeatCapacity_kJ_kgK: 2.7,
+        returnTemperatureDrop_K: 95,
+        baseDuty_kW: 21800,
+        sweep: { fromDuty_kW: 21800, toDuty_kW: 40000, steps: 40 },
+      },
+    });
+    expect(res.status()).toBe(201);
+    const made = (await res.json()) as StudySummary;
+    expect(made.recommendedDuty_kW!).toBeLessThan(21800);
+    await b.page.goto(`${FROTHLINE_URL}/studies/${made.id}`);
+    await b.page.getByText('What the sweep found').waitFor();
+    expect(await b.page.locator('[data-test=base-above-suggested]').innerText()).toMatch(/already above the suggested duty[\s\S]*less than today/);
+    expect(await b.page.locator('[data-test=recommended-recovered]').innerText()).toMatch(/less than today/);
+    expect(await b.page.locator('[data-test=recommended-recovered]').innerText()).not.toMatch(/−/);
+    // limits over at the base or suggested duty are on the card, watched or not
+    const over = await b.page.locator('[data-test^=over-at-]').allInnerTexts();
+    expect(over.join('\n')).toMatch(/Entrainment on trays? [\d, –and]+ — not watched/);
+    // the slider starts at the base duty, above the suggested one
+    expect(await b.page.locator('[data-test=slider-above-suggested]').innerText()).toMatch(/Above the suggested duty/);
+    await shot(b.page, 'study-base-above-suggested');
+    await b.page.goto(`${FROTHLINE_URL}/studies/${studyId}`);
+    await b.page.getByText('What the sweep found').waitFor();
   });
 
   it('a new study from these inputs: a missing λ is named at its field, then the study runs and opens', async () => {

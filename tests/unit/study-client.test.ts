@@ -1,6 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import { studyBody, studyFormFrom } from '../../src/composables/useStudyForm';
+import {
+  WATCHED_ABOVE,
+  WATCHED_ZONE,
+  baseAboveSuggested,
+  dryTraysAbove,
+  isWatched,
+  noteInPageWords,
+  overLimits,
+  trayList,
+} from '../../src/composables/useStudyFindings';
 import { lowestLiquidAbove, percentGrid, trayWindow } from '../../src/composables/useStudyPlot';
+import { watchedChecks } from '../../server/engine/pumpAround/checks';
+import type { CheckName, TrayResult } from '../../shared/types/rating';
 import { fromDisplay, toDisplay, unitLabel, type QuantityId } from '../../shared/units';
 import type { SlimStudyPoint, SlimStudyResult, SlimTrayPoint, StudyRecord } from '../../shared/types/studies';
 
@@ -106,5 +118,64 @@ describe('new-study form: display units in, SI out', () => {
     expect(body).not.toHaveProperty('latentHeat_kJ_kg');
     expect(body).not.toHaveProperty('loadCaseId');
     expect(body.sweep).toEqual({ steps: 40 });
+  });
+});
+
+describe('study findings shown on the page (from the stored key points)', () => {
+  const names = ['jetFlood', 'entrainment', 'weeping', 'pressureDrop'] as CheckName[];
+  // percent per check in `names` order
+  const at = point(1000, [
+    tray(1, 'above', 50, [40, 130, 101, 20]),
+    tray(5, 'above', 40, [40, 120, 50, 20]),
+    tray(8, 'zone', 900, [105, 60, 10, 20]),
+    tray(9, 'zone', 900, [100, 60, 10, 20]), // exactly at the limit: not over
+    tray(12, 'below', 500, [10, 10, 10, 140]),
+  ]);
+
+  it('groups the checks over their limit by check, watched ones first, and says which are not watched', () => {
+    expect(overLimits(names, at)).toEqual([
+      { check: 'weeping', kind: 'watched', trays: [1] },
+      { check: 'jetFlood', kind: 'watched', trays: [8] },
+      { check: 'entrainment', kind: 'unwatched', trays: [1, 5] },
+      { check: 'pressureDrop', kind: 'below', trays: [12] },
+    ]);
+    expect(overLimits(names, undefined)).toEqual([]);
+  });
+
+  it('watched checks match the engine: above the zone crest and weeping, in the zone flood, downcomer and weir loading', () => {
+    const rating = (sense: 'max' | 'min') => ({ checks: { weirLoading: { sense } } }) as unknown as TrayResult;
+    // the rating engine rates weir loading as a maximum (server/engine/rateTray.ts)
+    expect([...WATCHED_ABOVE].sort()).toEqual(watchedChecks('above', rating('max')).sort());
+    expect([...WATCHED_ZONE].sort()).toEqual(watchedChecks('zone', rating('max')).sort());
+    expect(isWatched('below', 'jetFlood')).toBe(false);
+    expect(isWatched('above', 'entrainment')).toBe(false);
+  });
+
+  it('flags a base duty above the suggested one, with the base as a share of dry-out', () => {
+    const r = { baseDuty_kW: 21800, recommendedDuty_kW: 20274, dryOutDuty_kW: 28963 };
+    const f = baseAboveSuggested(r)!;
+    expect(f.by_kW).toBeCloseTo(1526, 6);
+    expect(f.baseShareOfDryOut).toBeCloseTo(21800 / 28963, 9);
+    expect(baseAboveSuggested({ ...r, recommendedDuty_kW: 23000 })).toBeNull();
+    expect(baseAboveSuggested({ ...r, recommendedDuty_kW: null })).toBeNull();
+    expect(baseAboveSuggested({ ...r, dryOutDuty_kW: null })!.baseShareOfDryOut).toBeNull();
+  });
+
+  it('dry trays above the return at a slider duty; tray lists in words with ranges', () => {
+    expect(dryTraysAbove(result.points[1])).toEqual([2]);
+    expect(dryTraysAbove(result.points[0])).toEqual([]);
+    expect(dryTraysAbove(null)).toEqual([]);
+    expect(trayList([4])).toBe('tray 4');
+    expect(trayList([6, 1, 5])).toBe('trays 1, 5 and 6');
+    expect(trayList([1, 5, 6, 7, 8, 16])).toBe('trays 1, 5–8 and 16');
+  });
+
+  it('engine notes are shown with the page word for the suggested duty', () => {
+    expect(noteInPageWords('Checks over their limit at the recommended duty 20274 kW: tray 1 entrainment.')).toBe(
+      'Checks over their limit at the suggested duty 20274 kW: tray 1 entrainment.',
+    );
+    expect(noteInPageWords('No duty is free of watched limits: no recommended duty.')).toBe(
+      'No duty is free of watched limits: no suggested duty.',
+    );
   });
 });
