@@ -77,9 +77,9 @@ export function operatingWindow(
   const vertical = (limit: string, label: string, liquid: number): OperatingWindowCurve => ({
     limit, label, liquid_kg_h: [liquid, liquid], vapour_kg_h: [0, top],
   });
-  curves.push(vertical('downcomerInletVelocity', `Downcomer inlet velocity (${lim.downcomerInletVelocity} m/s)`, lInlet));
-  curves.push(vertical('minWeirLoading', `Minimum weir loading (crest ${lim.liquidLoad} mm)`, lMinWeir));
-  curves.push(vertical('maxWeirLoading', `Maximum weir loading (${lim.weirLoading} m³/(h·m))`, lMaxWeir));
+  curves.push({ ...vertical('downcomerInletVelocity', `Downcomer inlet velocity (${lim.downcomerInletVelocity} m/s)`, lInlet), value: lim.downcomerInletVelocity });
+  curves.push({ ...vertical('minWeirLoading', `Minimum weir loading (crest ${lim.liquidLoad} mm)`, lMinWeir), value: lim.liquidLoad });
+  curves.push({ ...vertical('maxWeirLoading', `Maximum weir loading (${lim.weirLoading} m³/(h·m))`, lMaxWeir), value: lim.weirLoading });
   return {
     tray: load.tray,
     curves,

@@ -160,6 +160,8 @@ export interface OperatingWindowCurve {
   /** e.g. 'flood', 'floodDesign', 'entrainment', 'downcomerBackup', 'downcomerInletVelocity', 'weep', 'minWeirLoading', 'maxWeirLoading' */
   limit: string;
   label: string;
+  /** for a limit drawn at one value: that value in SI (m/s, mm of crest, m³/(h·m)), so clients can relabel it in their units */
+  value?: number;
   /** points of liquid mass flow [kg/h] against vapour mass flow [kg/h] */
   liquid_kg_h: number[];
   vapour_kg_h: number[];
