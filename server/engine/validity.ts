@@ -35,6 +35,27 @@ export function inRange(meta: MethodMeta, input: string, value: number): boolean
   return r === undefined || (value >= r[0] && value <= r[1]);
 }
 
+/** How range inputs are named in warnings (the code keeps the field name). */
+const INPUT_LABELS: Record<string, string> = {
+  flowParameter: 'flow parameter',
+  percentFlood: 'percent of jet flood',
+  holeAreaRatio: 'hole area / active area',
+  fractionalHoleArea: 'hole area / active area',
+  thicknessOverDiameter: 'deck thickness / hole diameter',
+  weirHeightOverTraySpacing: 'weir height / tray spacing',
+  traySpacing_mm: 'tray spacing (mm)',
+  holeDiameter_mm: 'hole diameter (mm)',
+  deckThickness_mm: 'deck thickness (mm)',
+  weirHeight_mm: 'weir height (mm)',
+  weirLoad_m3_h_m: 'weir loading (m³/(h·m))',
+  vapourDensity_kg_m3: 'vapour density (kg/m³)',
+  liquidDensity_kg_m3: 'liquid density (kg/m³)',
+  surfaceTension_mN_m: 'surface tension (mN/m)',
+  pressure_kPa: 'pressure (kPa)',
+  liquidViscosity_mPa_s: 'liquid viscosity (mPa·s)',
+  headAboveDeck_mm: 'head above the deck (mm)',
+};
+
 /**
  * Push a range warning when `value` is outside the method's stored range for `input`.
  * `action` says what the engine did about it (e.g. "evaluated at the chart edge 0.01").
@@ -51,9 +72,10 @@ export function checkRange(
   if (r === undefined || (value >= r[0] && value <= r[1])) return true;
   const w: EngineWarning = {
     code: `range:${meta.id}:${input}`,
+    // the method's source is listed with the methods of every report, not repeated in each warning
     message:
-      `${meta.label}: ${input} = ${formatNumber(value)} is outside its range ` +
-      `${formatNumber(r[0])}–${formatNumber(r[1])} (${meta.source.split(';')[0]}); ${action}.`,
+      `${meta.label}: ${INPUT_LABELS[input] ?? input} ${formatNumber(value)} is outside its range ` +
+      `${formatNumber(r[0])}–${formatNumber(r[1])}; ${action}.`,
   };
   if (tray !== undefined) w.tray = tray;
   out.push(w);
