@@ -1,6 +1,7 @@
 import { Notify } from 'quasar';
 import type { Router } from 'vue-router';
 import type { ApiErrorBody } from '../../shared/types/api';
+import { pathWords } from '../utils/fieldNames';
 
 /** An API failure, carrying the server's `{ error, details }` body. */
 export class ApiError extends Error {
@@ -30,7 +31,7 @@ export interface RequestOptions {
 }
 
 function describe(body: ApiErrorBody): string {
-  const d = body.details?.slice(0, 4).map((x) => `${x.path}: ${x.message}`) ?? [];
+  const d = body.details?.slice(0, 4).map((x) => `${pathWords(x.path)}: ${x.message}`) ?? [];
   return d.length ? `${body.error} — ${d.join('; ')}` : body.error;
 }
 

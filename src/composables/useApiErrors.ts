@@ -1,5 +1,6 @@
 import { ref } from 'vue';
 import { ApiError } from '../boot/api';
+import { pathWords } from '../utils/fieldNames';
 
 /** A 409 for a stale version (optimistic lock), as opposed to another conflict such as a name already taken. */
 export function isStale(e: unknown): boolean {
@@ -30,7 +31,7 @@ export function useApiErrors(fields: readonly string[]) {
     for (const d of e.body.details ?? []) {
       if (fields.includes(d.path))
         fieldErrors.value[d.path] = `${fieldErrors.value[d.path] ? `${fieldErrors.value[d.path]}; ` : ''}${d.message}`;
-      else rest.push(`${d.path}: ${d.message}`);
+      else rest.push(`${pathWords(d.path)}: ${d.message}`);
     }
     banner.value = conflict.value
       ? 'Someone else changed this since you opened it. The latest version has been loaded; check it and make your change again.'
