@@ -16,7 +16,7 @@ import { validate } from './http/validation.js';
 import { logger } from './logger.js';
 import { allRoutes } from './routes/index.js';
 import { activeSessionUser } from './services/users.js';
-import { can } from '../shared/permissions.js';
+import { can, PERMISSION_LABELS, ROLE_LABELS } from '../shared/permissions.js';
 import type { SessionUser } from '../shared/types/api.js';
 
 export interface AppOptions {
@@ -41,7 +41,9 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
       if (!user || !session) throw new UnauthorizedError();
       renewSessionIfOld(res, user, session.issuedAt);
       if (r.access !== 'signed-in' && !can(user.role, r.access))
-        throw new ForbiddenError(`Your role (${user.role}) may not ${r.access.replace('.', ' ')}`);
+        throw new ForbiddenError(
+          `Your role (${ROLE_LABELS[user.role]}) does not include “${PERMISSION_LABELS[r.access].toLowerCase()}”`,
+        );
     }
     res.locals.user = user;
   }, true);

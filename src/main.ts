@@ -5,13 +5,16 @@ import 'quasar/src/css/index.sass';
 import './css/app.scss';
 import { createPinia } from 'pinia';
 import { Dialog, Notify, Quasar } from 'quasar';
+import iconSet from 'quasar/icon-set/material-icons';
 import { createApp } from 'vue';
 import App from './App.vue';
 import { installApi } from './boot/api';
 import { router } from './router';
 
 const app = createApp(App);
-app.use(Quasar, { plugins: { Notify, Dialog }, config: { notify: { position: 'top-right', timeout: 5000 } } });
+// an empty table is not a warning: show an information icon instead of the default triangle
+const icons = { ...iconSet, table: { ...iconSet.table, warning: 'info_outline' } };
+app.use(Quasar, { plugins: { Notify, Dialog }, iconSet: icons, config: { notify: { position: 'top-right', timeout: 5000 } } });
 app.use(createPinia());
 app.use(router);
 installApi(router);

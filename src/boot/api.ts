@@ -18,6 +18,10 @@ let onUnauthorized: (() => void) | null = null;
 
 export function installApi(r: Router): void {
   router = r;
+  // an API failure has already been shown to the user by request(); do not also report it as unhandled
+  window.addEventListener('unhandledrejection', (e) => {
+    if (e.reason instanceof ApiError) e.preventDefault();
+  });
 }
 export function setUnauthorizedHandler(fn: () => void): void {
   onUnauthorized = fn;
