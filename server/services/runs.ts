@@ -6,7 +6,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { RatingRun } from '../db/entities/RatingRun.js';
 import { ENGINE_VERSION, rateSection, summarise, validateRatingRequest } from '../engine/index.js';
 import { ConflictError, NotFoundError, ValidationError, type ErrorDetail } from '../errors.js';
-import { forgetRunInputs, insertRunWithAudit, runInputsCache, type NewRun } from './runsStore.js';
+import { forgetRunInputs, guardOf, insertRunWithAudit, runInputsCache, type NewRun } from './runsStore.js';
 import { toRunSummary } from './runsRead.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { MethodOptions, TrayLoad } from '../../shared/types/rating.js';
@@ -158,7 +158,7 @@ export async function createRatingRun(
     sections: sections.map((s) => s.sectionId),
     overridden: sections.filter((s) => s.overridden).map((s) => s.sectionId),
   };
-  const row = await insertRunWithAudit(em, user, run, { changes }, inputs.guard);
+  const row = await insertRunWithAudit(em, user, run, { changes }, guardOf(inputs, lc.version));
   if (!row) {
     // the column, load case or sections changed since they were read (or the user lost access): read again
     forgetRunInputs(input.columnId, input.loadCaseId);

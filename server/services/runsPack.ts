@@ -16,6 +16,17 @@ import { CHECK_NAMES, type CheckResult, type TrayDetails } from '../../shared/ty
 import type { RunResults, RunTrayResult } from '../../shared/types/runs.js';
 
 const MAGIC = Buffer.from('FRB2', 'latin1');
+
+/** magic | Brotli(bytes), quality 1: fast, and most of the size gain. */
+function pack(magic: Buffer, bytes: Buffer): Buffer {
+  const params = { [zc.BROTLI_PARAM_QUALITY]: 1, [zc.BROTLI_PARAM_SIZE_HINT]: bytes.length };
+  return Buffer.concat([magic, brotliCompressSync(bytes, { params })]);
+}
+
+/** The bytes packed behind `magic`, or null when `b` does not start with it (older rows: JSON text). */
+function unpack(magic: Buffer, b: Buffer): Buffer | null {
+  return b.subarray(0, magic.length).equals(magic) ? brotliDecompressSync(b.subarray(magic.length)) : null;
+}
 const PER_CHECK = 3;
 
 /** Per tray: tray, section, controlling check, per check [unit, sense, status, method], warnings. */
@@ -56,8 +67,7 @@ export function encodeResults(r: RunResults): Buffer {
   const len = Buffer.allocUnsafe(4);
   len.writeUInt32LE(head.length);
   const raw = Buffer.concat([len, head, littleEndian(Buffer.from(nums.buffer))]);
-  const params = { [zc.BROTLI_PARAM_QUALITY]: 1, [zc.BROTLI_PARAM_SIZE_HINT]: raw.length };
-  return Buffer.concat([MAGIC, brotliCompressSync(raw, { params })]);
+  return pack(MAGIC, raw);
 }
 
 /** Doubles are stored little-endian; swap in place on a big-endian host (the buffer is ours). */
@@ -146,7 +156,8 @@ function unpackLegacy(p: RunResults | Packed1): RunResults {
 
 /** Results from the stored bytes: the binary form, or JSON text written before it. */
 export function decodeResults(b: Buffer): RunResults {
-  if (b.subarray(0, MAGIC.length).equals(MAGIC)) return decodeBinary(brotliDecompressSync(b.subarray(MAGIC.length)));
+  const raw = unpack(MAGIC, b);
+  if (raw) return decodeBinary(raw);
   return unpackLegacy(JSON.parse(b.toString('utf8')) as RunResults | Packed1);
 }
 
@@ -155,15 +166,12 @@ const JSON_MAGIC = Buffer.from('FRJ1', 'latin1');
 /** Any JSON value as stored bytes: 'FRJ1' | Brotli(JSON). Used for the run snapshot. */
 export function encodeJson(v: unknown): Buffer {
   const json = Buffer.from(JSON.stringify(v), 'utf8');
-  const params = { [zc.BROTLI_PARAM_QUALITY]: 1, [zc.BROTLI_PARAM_SIZE_HINT]: json.length };
-  return Buffer.concat([JSON_MAGIC, brotliCompressSync(json, { params })]);
+  return pack(JSON_MAGIC, json);
 }
 
 /** The value from encodeJson's bytes, or from plain UTF-8 JSON text (rows stored before compression). */
 export function decodeJson<T>(b: Buffer): T {
-  const text = b.subarray(0, JSON_MAGIC.length).equals(JSON_MAGIC)
-    ? brotliDecompressSync(b.subarray(JSON_MAGIC.length)).toString('utf8')
-    : b.toString('utf8');
+  const text = (unpack(JSON_MAGIC, b) ?? b).toString('utf8');
   return JSON.parse(text) as T;
 }
 

@@ -30,7 +30,7 @@ export interface RunInputsGuard {
 }
 
 export interface RunInputs {
-  guard: RunInputsGuard;
+  columnVersion: number;
   column: { id: string; tag: string; numbering: 'top-down' | 'bottom-up'; trayCount: number };
   loadCase: { id: string; name: string; basis: LoadBasis; version: number; loads: TrayLoad[] } | null;
   sections: {
@@ -41,11 +41,18 @@ export interface RunInputs {
     geometry: SectionGeometry;
     provenance: GeometryProvenance;
     provenanceDate: string | null;
+    version: number;
   }[];
 }
 
-const SECTIONS_SIG = `(SELECT coalesce(array_agg(s.id::text || ':' || s.version ORDER BY s.first_tray), '{}'::text[])
-   FROM tray_sections s WHERE s.column_id = c.id)`;
+/** The guard of inputs read with a found load case (the versions they were read at). */
+export function guardOf(inputs: RunInputs, loadCaseVersion: number): RunInputsGuard {
+  return {
+    columnVersion: inputs.columnVersion,
+    loadCaseVersion,
+    sections: inputs.sections.map((s) => `${s.id}:${s.version}`),
+  };
+}
 
 /** Column (if the user may see it; 404 otherwise), the load case (null if not on this column) and its sections. */
 export async function readRunInputs(
@@ -59,14 +66,12 @@ export async function readRunInputs(
     em,
     `frothline-read-run-inputs-${user.role === 'admin' ? 'all' : 'member'}`,
     `SELECT json_build_object('id', c.id, 'tag', c.tag, 'numbering', c.numbering, 'trayCount', c.tray_count) AS column,
-       json_build_object('columnVersion', c.version, 'loadCaseVersion',
-         (SELECT l.version FROM load_cases l WHERE l.id = $2 AND l.column_id = c.id),
-         'sections', ${SECTIONS_SIG}) AS guard,
+       c.version AS "columnVersion",
        (SELECT json_build_object('id', l.id, 'name', l.name, 'basis', l.basis, 'version', l.version, 'loads', l.loads)
           FROM load_cases l WHERE l.id = $2 AND l.column_id = c.id) AS "loadCase",
        (SELECT coalesce(json_agg(json_build_object('id', s.id, 'name', s.name, 'firstTray', s.first_tray,
           'lastTray', s.last_tray, 'geometry', s.geometry, 'provenance', s.provenance,
-          'provenanceDate', s.provenance_date) ORDER BY s.first_tray), '[]'::json)
+          'provenanceDate', s.provenance_date, 'version', s.version) ORDER BY s.first_tray), '[]'::json)
           FROM tray_sections s WHERE s.column_id = c.id) AS sections
      FROM columns c JOIN process_units u ON u.id = c.unit_id
      WHERE c.id = $1 AND ${f.sql}`,
@@ -97,7 +102,8 @@ export async function insertRunWithAudit(
        SELECT 1 FROM columns c JOIN process_units u ON u.id = c.unit_id
        WHERE c.id = $1::uuid AND c.version = $17 AND ${f.sql}
          AND EXISTS (SELECT 1 FROM load_cases l WHERE l.id = $2::uuid AND l.column_id = c.id AND l.version = $18)
-         AND ${SECTIONS_SIG} = $19::text[]),
+         AND (SELECT coalesce(array_agg(s.id::text || ':' || s.version ORDER BY s.first_tray), '{}'::text[])
+              FROM tray_sections s WHERE s.column_id = c.id) = $19::text[]),
      run AS (
        INSERT INTO rating_runs (column_id, load_case_id, label, kind, status, engine_version, snapshot, results, summary,
          reviews, review_comment, author_id, reviewer_id, load_case_name)
@@ -153,7 +159,7 @@ export async function runInputsCache(
   if (hit?.users.has(user.id)) return { inputs: hit.inputs, cached: true };
   const inputs = await readRunInputs(em, user, columnId, loadCaseId);
   if (inputs.loadCase) {
-    const users = hit && !fresh ? hit.users : new Set<string>();
+    const users = hit?.users ?? new Set<string>();
     users.add(user.id);
     cache.delete(key);
     if (cache.size >= MAX_CACHED) cache.delete(cache.keys().next().value as string);

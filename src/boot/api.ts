@@ -34,8 +34,9 @@ export interface RequestOptions {
   quiet?: boolean;
 }
 
-function describe(body: ApiErrorBody): string {
-  const d = body.details?.slice(0, 4).map((x) => `${pathWords(x.path)}: ${x.message}`) ?? [];
+/** An API error body in one line for people: the error, then up to `max` details with their fields in words. */
+export function describeApiError(body: ApiErrorBody, max = 4): string {
+  const d = body.details?.slice(0, max).map((x) => `${pathWords(x.path)}: ${x.message}`) ?? [];
   return d.length ? `${body.error} — ${d.join('; ')}` : body.error;
 }
 
@@ -66,7 +67,7 @@ async function request<T>(method: string, url: string, opts: RequestOptions = {}
       if (router && current?.name !== 'sign-in')
         void router.push({ name: 'sign-in', query: { redirect: current?.fullPath } });
     } else if (!opts.quiet) {
-      Notify.create({ type: 'negative', message: describe(body), multiLine: true });
+      Notify.create({ type: 'negative', message: describeApiError(body), multiLine: true });
     }
     throw new ApiError(res.status, body);
   }

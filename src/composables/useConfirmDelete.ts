@@ -1,5 +1,5 @@
 import { Dialog, Notify } from 'quasar';
-import { api, ApiError } from '../boot/api';
+import { api, ApiError, describeApiError } from '../boot/api';
 import { useColumnStore } from '../stores/column-store';
 import type { TraySectionRecord } from '../../shared/types/columns';
 import type { LoadCaseSummary } from '../../shared/types/loads';
@@ -48,8 +48,7 @@ export function useConfirmDelete() {
         }).onOk(() => void on.reload());
         return;
       }
-      const details = e.body.details?.map((d) => `${d.path}: ${d.message}`).join('; ');
-      Notify.create({ type: 'negative', multiLine: true, message: details ? `${e.body.error} — ${details}` : e.body.error });
+      Notify.create({ type: 'negative', multiLine: true, message: describeApiError(e.body, Infinity) });
       if (e.status !== 404) return; // 404: someone else deleted it already, so carry on as if deleted
     }
     await store.load(t.columnId);

@@ -1,5 +1,5 @@
 import { computed, ref, watch, type Ref } from 'vue';
-import { api, ApiError } from '../boot/api';
+import { api, ApiError, describeApiError } from '../boot/api';
 import { useColumnStore } from '../stores/column-store';
 import { stageMapErrors } from '../../shared/stageMap';
 import type {
@@ -77,7 +77,7 @@ export function useImportCheck(
     } catch (e) {
       if (n !== seq) return;
       if (!(e instanceof ApiError)) throw e;
-      failure.value = [e.message, ...(e.body.details ?? []).map((d) => `${d.path} ${d.message}`)].join(' — ');
+      failure.value = describeApiError(e.body, Infinity);
     } finally {
       if (n === seq) checking.value = false;
     }
