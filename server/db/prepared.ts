@@ -18,6 +18,11 @@ export async function preparedQuery<T>(
 ): Promise<T[]> {
   const em = 'manager' in db ? db.manager : db;
   if (em.queryRunner) return (await em.query(text, values)) as T[];
-  const pool = (em.connection.driver as unknown as { master: PgPool }).master;
-  return (await pool.query({ name, text, values })).rows as T[];
+  return (await driverPool(em).query({ name, text, values })).rows as T[];
+}
+
+/** The pg pool behind TypeORM's PostgreSQL driver (outside transactions). */
+export function driverPool(db: DataSource | EntityManager): PgPool {
+  const em = 'manager' in db ? db.manager : db;
+  return (em.connection.driver as unknown as { master: PgPool }).master;
 }

@@ -6,10 +6,11 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { RatingRun } from '../db/entities/RatingRun.js';
 import { ENGINE_VERSION, rateSection, summarise, validateRatingRequest } from '../engine/index.js';
 import { ConflictError, NotFoundError, ValidationError, type ErrorDetail } from '../errors.js';
-import { forgetRunInputs, guardOf, insertRunWithAudit, runInputsCache, type NewRun } from './runsStore.js';
+import { encodeJsonAsync, encodeResultsAsync } from './runsPack.js';
+import { forgetRunInputs, guardOf, insertRunWithAudit, runInputsCache, runInputsMemo, type NewRun } from './runsStore.js';
 import { toRunSummary } from './runsRead.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { MethodOptions, TrayLoad } from '../../shared/types/rating.js';
+import type { MethodOptions, RatingRequest, TrayLoad } from '../../shared/types/rating.js';
 import type {
   CreateRatingRunInput,
   CreateRunBody,
@@ -21,21 +22,30 @@ import type {
 } from '../../shared/types/runs.js';
 
 /** Rate the snapshot: one engine call per section, trays merged and ordered by tray number. */
-export function rateSnapshot(snapshot: Omit<RunSnapshot, 'engineVersion'>): { results: RunResults; methods: MethodOptions } {
+export function rateSnapshot(
+  snapshot: Omit<RunSnapshot, 'engineVersion'>,
+  /** validated requests by section id, filled here; only for sections whose geometry and loads are fixed for the map's life */
+  validated?: Map<string, RatingRequest>,
+): { results: RunResults; methods: MethodOptions } {
   const trays: RunTrayResult[] = [];
   const sections: RunResults['sections'] = [];
   const errors: ErrorDetail[] = [];
   let methods: MethodOptions = snapshot.methods;
   for (const s of snapshot.sections) {
-    const loads = snapshot.loads.filter((l) => l.tray >= s.firstTray && l.tray <= s.lastTray);
-    const v = validateRatingRequest({ section: s.geometry, trays: loads, methods: snapshot.methods });
-    if (!v.ok) {
-      for (const e of v.errors)
-        errors.push({ path: `sections.${s.name}${e.path.replace(/\//g, '.')}`, message: `section "${s.name}": ${e.message}` });
-      continue;
+    let request = validated?.get(s.sectionId);
+    if (!request) {
+      const loads = snapshot.loads.filter((l) => l.tray >= s.firstTray && l.tray <= s.lastTray);
+      const v = validateRatingRequest({ section: s.geometry, trays: loads, methods: snapshot.methods });
+      if (!v.ok) {
+        for (const e of v.errors)
+          errors.push({ path: `sections.${s.name}${e.path.replace(/\//g, '.')}`, message: `section "${s.name}": ${e.message}` });
+        continue;
+      }
+      request = v.value;
+      validated?.set(s.sectionId, request);
     }
-    methods = v.value.methods ?? methods;
-    const r = rateSection(v.value);
+    methods = request.methods ?? methods;
+    const r = rateSection(request);
     for (const t of r.trays) trays.push({ ...t, sectionId: s.sectionId });
     sections.push({
       sectionId: s.sectionId,
@@ -67,6 +77,28 @@ export function rateSnapshot(snapshot: Omit<RunSnapshot, 'engineVersion'>): { re
 }
 
 /**
+ * Rate the snapshot and pack the results (layout now, compression off the event loop). A plain function,
+ * so that no frame of the async caller holds the results while the write is awaited unless they are kept.
+ */
+function rateAndPack(
+  base: Omit<RunSnapshot, 'engineVersion'>,
+  validated: Map<string, RatingRequest> | undefined,
+  uncoveredTrays: number[],
+  keep: boolean,
+): { packed: Promise<Buffer>; summary: RatingRun['summary']; methods: MethodOptions; results?: RunResults } {
+  const { results, methods } = rateSnapshot(base, validated);
+  results.uncoveredTrays = uncoveredTrays;
+  const summary = {
+    controllingCheck: results.controllingCheck,
+    controllingTray: results.controllingTray,
+    maxPercentOfLimit: results.maxPercentOfLimit,
+    traysOver: results.traysOver,
+    traysNear: results.traysNear,
+  };
+  return { packed: encodeResultsAsync(results), summary, methods, results: keep ? results : undefined };
+}
+
+/**
  * Create a rating run: one read, rate, one write (run and audit row). Works inside the caller's
  * transaction too: inspections pass `geometryOverride` (per section id, the as-found geometry) and kind
  * 'as-found'. Without a label the run is named after the load case and the time.
@@ -75,8 +107,23 @@ export async function createRatingRun(
   em: EntityManager,
   user: SessionUser,
   input: Omit<CreateRatingRunInput, 'label'> & { label?: string },
-  fresh = false,
 ): Promise<RatingRun> {
+  const { run, results } = await storeRatingRun(em, user, input, true);
+  return Object.assign(run, { results: results! });
+}
+
+/**
+ * Rate and store; the results come back only when `keepResults` is set. Otherwise they are let go as soon
+ * as they are packed, before the write is awaited: a 60-tray result is a few hundred kB of objects, and
+ * holding one per request in flight makes every young-generation collection copy them.
+ */
+async function storeRatingRun(
+  em: EntityManager,
+  user: SessionUser,
+  input: Omit<CreateRatingRunInput, 'label'> & { label?: string },
+  keepResults: boolean,
+  fresh = false,
+): Promise<{ run: RatingRun; results?: RunResults }> {
   const { inputs, cached } = await runInputsCache(em, user, input.columnId, input.loadCaseId, fresh);
   const { column: col, loadCase: lc, sections: all } = inputs;
   if (!lc) throw new NotFoundError('Load case');
@@ -125,9 +172,12 @@ export async function createRatingRun(
     loads,
     methods: input.methods ?? {},
   };
-  const { results, methods } = rateSnapshot(base);
-  // uncovered trays are those of the load case outside every rated section
-  results.uncoveredTrays = lc.loads.map((l) => l.tray).filter((t) => !loads.some((l) => l.tray === t));
+  // without a geometry override, validation and the snapshot bytes depend only on the rows read and the options
+  const memo = input.geometryOverride
+    ? undefined
+    : runInputsMemo(inputs, JSON.stringify([input.methods ?? {}, input.sectionIds ?? null]));
+  const uncovered = lc.loads.map((l) => l.tray).filter((t) => !loads.some((l) => l.tray === t));
+  const { packed, summary, methods, results: kept } = rateAndPack(base, memo?.validated, uncovered, keepResults);
   const snapshot: RunSnapshot = { ...base, methods, engineVersion: ENGINE_VERSION };
   const label = input.label ?? `${lc.name} — ${new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC`;
   const run: NewRun = {
@@ -138,18 +188,11 @@ export async function createRatingRun(
     status: 'draft',
     engineVersion: ENGINE_VERSION,
     snapshot,
-    results,
     authorId: user.id,
     reviews: [],
     reviewComment: null,
     reviewerId: null,
-    summary: {
-      controllingCheck: results.controllingCheck,
-      controllingTray: results.controllingTray,
-      maxPercentOfLimit: results.maxPercentOfLimit,
-      traysOver: results.traysOver,
-      traysNear: results.traysNear,
-    },
+    summary,
   };
   const changes = {
     label,
@@ -158,21 +201,22 @@ export async function createRatingRun(
     sections: sections.map((s) => s.sectionId),
     overridden: sections.filter((s) => s.overridden).map((s) => s.sectionId),
   };
-  const row = await insertRunWithAudit(em, user, run, { changes }, guardOf(inputs, lc.version));
+  const snapshotBytes = memo ? (memo.snapshotBytes ??= await encodeJsonAsync(snapshot)) : undefined;
+  const row = await insertRunWithAudit(em, user, run, { snapshot: snapshotBytes, results: packed }, { changes }, guardOf(inputs, lc.version));
   if (!row) {
     // the column, load case or sections changed since they were read (or the user lost access): read again
     forgetRunInputs(input.columnId, input.loadCaseId);
-    if (cached) return createRatingRun(em, user, input, true);
+    if (cached) return storeRatingRun(em, user, input, keepResults, true);
     throw new ConflictError('The column, its sections or the load case changed while the run was being rated; rate again', [
       { path: 'loadCaseId', message: 'changed during rating' },
     ]);
   }
-  return Object.assign(new RatingRun(), run, row, { loadCaseName: lc.name });
+  return { run: Object.assign(new RatingRun(), run, row, { loadCaseName: lc.name }), results: kept };
 }
 
 /** POST /runs answers the summary (the run page loads the full record with GET /runs/:id). */
 export async function createRunFromBody(ds: DataSource, user: SessionUser, body: CreateRunBody): Promise<RunSummary> {
   // no explicit transaction: one read, then one atomic statement writes the run and its audit row
-  const run = await createRatingRun(ds.manager, user, { ...body, kind: 'rating' });
+  const { run } = await storeRatingRun(ds.manager, user, { ...body, kind: 'rating' }, false);
   return toRunSummary(run, user.name);
 }

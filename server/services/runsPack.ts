@@ -10,17 +10,25 @@
  * Older rows hold JSON text (plain results, or the 'packed-1' array form), and are read back unchanged.
  * The run snapshot (geometry, loads, methods) is stored the same way as compressed JSON (encodeJson).
  */
-import { brotliCompressSync, brotliDecompressSync, constants as zc } from 'node:zlib';
+import { promisify } from 'node:util';
+import { brotliCompress, brotliCompressSync, brotliDecompressSync, constants as zc } from 'node:zlib';
 import type { ValueTransformer } from 'typeorm';
 import { CHECK_NAMES, type CheckResult, type TrayDetails } from '../../shared/types/rating.js';
 import type { RunResults, RunTrayResult } from '../../shared/types/runs.js';
 
 const MAGIC = Buffer.from('FRB2', 'latin1');
 
+const brotliParams = (bytes: Buffer) => ({ [zc.BROTLI_PARAM_QUALITY]: 1, [zc.BROTLI_PARAM_SIZE_HINT]: bytes.length });
+
 /** magic | Brotli(bytes), quality 1: fast, and most of the size gain. */
 function pack(magic: Buffer, bytes: Buffer): Buffer {
-  const params = { [zc.BROTLI_PARAM_QUALITY]: 1, [zc.BROTLI_PARAM_SIZE_HINT]: bytes.length };
-  return Buffer.concat([magic, brotliCompressSync(bytes, { params })]);
+  return Buffer.concat([magic, brotliCompressSync(bytes, { params: brotliParams(bytes) })]);
+}
+
+const brotliAsync = promisify(brotliCompress);
+/** As pack, compressing on libuv's thread pool so the event loop stays free for other requests. */
+async function packAsync(magic: Buffer, bytes: Buffer): Promise<Buffer> {
+  return Buffer.concat([magic, await brotliAsync(bytes, { params: brotliParams(bytes) })]);
 }
 
 /** The bytes packed behind `magic`, or null when `b` does not start with it (older rows: JSON text). */
@@ -38,6 +46,17 @@ interface Header extends Omit<RunResults, 'trays'> {
 }
 
 export function encodeResults(r: RunResults): Buffer {
+  return pack(MAGIC, resultsLayout(r));
+}
+
+/** As encodeResults, with the compression done off the event loop (the request path of run creation). */
+export function encodeResultsAsync(r: RunResults): Promise<Buffer> {
+  return packAsync(MAGIC, resultsLayout(r));
+}
+
+/** The uncompressed layout: header length, header JSON, doubles. */
+function resultsLayout(r: RunResults): Buffer {
+  // Plain indexed loops: this runs once per stored run, on the request path (bench/api.ts).
   const strings: string[] = [];
   const index = new Map<string, number>();
   const s = (x: string): number => {
@@ -45,29 +64,39 @@ export function encodeResults(r: RunResults): Buffer {
     if (i === undefined) index.set(x, (i = strings.push(x) - 1));
     return i;
   };
-  const detailKeys = [...new Set(r.trays.flatMap((t) => Object.keys(t.details)))];
-  const stride = CHECK_NAMES.length * PER_CHECK + detailKeys.length;
-  const nums = new Float64Array(stride * r.trays.length);
+  const keySet = new Set<string>();
+  for (const t of r.trays) for (const k in t.details) keySet.add(k);
+  const detailKeys = [...keySet];
+  const nChecks = CHECK_NAMES.length;
+  const nDetails = detailKeys.length;
+  const nums = new Float64Array((nChecks * PER_CHECK + nDetails) * r.trays.length);
+  const trays: HeaderTray[] = new Array<HeaderTray>(r.trays.length);
   let o = 0;
-  const put = (x: number | undefined): void => void (nums[o++] = x ?? NaN);
-  const trays = r.trays.map((t): HeaderTray => {
-    const idx: number[] = [];
-    for (const c of CHECK_NAMES) {
-      const k = t.checks[c];
-      put(k.value);
-      put(k.limit);
-      put(k.percentOfLimit);
-      idx.push(s(k.unit), s(k.sense), s(k.status), s(k.method));
+  for (let ti = 0; ti < r.trays.length; ti++) {
+    const t = r.trays[ti]!;
+    const idx = new Array<number>(4 * nChecks);
+    for (let ci = 0; ci < nChecks; ci++) {
+      const k = t.checks[CHECK_NAMES[ci]!];
+      nums[o++] = k.value ?? NaN;
+      nums[o++] = k.limit ?? NaN;
+      nums[o++] = k.percentOfLimit ?? NaN;
+      idx[4 * ci] = s(k.unit);
+      idx[4 * ci + 1] = s(k.sense);
+      idx[4 * ci + 2] = s(k.status);
+      idx[4 * ci + 3] = s(k.method);
     }
-    for (const k of detailKeys) put(t.details[k]);
-    return [t.tray, s(t.sectionId), s(t.controllingCheck), idx, t.warnings];
-  });
-  const header: Header = { ...r, strings, detailKeys, trays };
+    const d = t.details as unknown as Record<string, number | undefined>;
+    for (let j = 0; j < nDetails; j++) nums[o++] = d[detailKeys[j]!] ?? NaN;
+    trays[ti] = [t.tray, s(t.sectionId), s(t.controllingCheck), idx, t.warnings];
+  }
+  const { trays: _trays, ...rest } = r;
+  const header: Header = { ...rest, strings, detailKeys, trays };
   const head = Buffer.from(JSON.stringify(header), 'utf8');
-  const len = Buffer.allocUnsafe(4);
-  len.writeUInt32LE(head.length);
-  const raw = Buffer.concat([len, head, littleEndian(Buffer.from(nums.buffer))]);
-  return pack(MAGIC, raw);
+  const raw = Buffer.allocUnsafe(4 + head.length + nums.byteLength);
+  raw.writeUInt32LE(head.length, 0);
+  head.copy(raw, 4);
+  littleEndian(Buffer.from(nums.buffer)).copy(raw, 4 + head.length);
+  return raw;
 }
 
 /** Doubles are stored little-endian; swap in place on a big-endian host (the buffer is ours). */
@@ -165,8 +194,12 @@ const JSON_MAGIC = Buffer.from('FRJ1', 'latin1');
 
 /** Any JSON value as stored bytes: 'FRJ1' | Brotli(JSON). Used for the run snapshot. */
 export function encodeJson(v: unknown): Buffer {
-  const json = Buffer.from(JSON.stringify(v), 'utf8');
-  return pack(JSON_MAGIC, json);
+  return pack(JSON_MAGIC, Buffer.from(JSON.stringify(v), 'utf8'));
+}
+
+/** As encodeJson, compressing off the event loop. */
+export function encodeJsonAsync(v: unknown): Promise<Buffer> {
+  return packAsync(JSON_MAGIC, Buffer.from(JSON.stringify(v), 'utf8'));
 }
 
 /** The value from encodeJson's bytes, or from plain UTF-8 JSON text (rows stored before compression). */

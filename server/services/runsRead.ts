@@ -9,7 +9,7 @@ import { iso, visibleChild } from './columnsCommon.js';
 import type { Page, SessionUser } from '../../shared/types/api.js';
 import type { ReviewStatus, RunRecord, RunSummary, RunWindow } from '../../shared/types/runs.js';
 
-export function toRunSummary(r: RatingRun, authorName: string | null): RunSummary {
+export function toRunSummary(r: Omit<RatingRun, 'results'>, authorName: string | null): RunSummary {
   return {
     id: r.id,
     columnId: r.columnId,

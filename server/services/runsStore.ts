@@ -1,8 +1,9 @@
 /**
  * The statements behind creating a rating run: one read (column visibility, load case and sections in one
  * round trip) and one write (the run and its audit row in one statement, so it is atomic without an
- * explicit transaction). Run creation is the busiest write of the API (bench/api.ts); snapshot and results
- * are sent compressed (services/runsPack.ts).
+ * explicit transaction; runs created at the same moment share that statement, db/writeBatcher.ts). Run
+ * creation is the busiest write of the API (bench/api.ts); snapshot and results are sent compressed
+ * (services/runsPack.ts).
  *
  * The read is kept in a small cache keyed by column and load case (runInputsCache below). The write then
  * carries a guard: it inserts only if the column, the load case and every section of the column still
@@ -10,14 +11,16 @@
  * their version (optimistic locking), so a stale cache entry can never be stored in a run: the guard
  * fails, the caller reads afresh and rates again.
  */
-import type { EntityManager } from 'typeorm';
-import { preparedQuery } from '../db/prepared.js';
+import { EntityManager } from 'typeorm';
+import { randomUUID } from 'node:crypto';
+import { driverPool, preparedQuery } from '../db/prepared.js';
+import { WriteBatcher } from '../db/writeBatcher.js';
 import { NotFoundError } from '../errors.js';
 import { siteFilterSql } from './access.js';
-import { encodeJson, encodeResults } from './runsPack.js';
+import { encodeJsonAsync } from './runsPack.js';
 import type { RatingRun } from '../db/entities/RatingRun.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { SectionGeometry, TrayLoad } from '../../shared/types/rating.js';
+import type { RatingRequest, SectionGeometry, TrayLoad } from '../../shared/types/rating.js';
 import type { LoadBasis } from '../../shared/types/loads.js';
 import type { GeometryProvenance } from '../../shared/types/columns.js';
 
@@ -81,63 +84,158 @@ export async function readRunInputs(
   return rows[0];
 }
 
-export type NewRun = Omit<RatingRun, 'id' | 'createdAt' | 'updatedAt' | 'version' | 'loadCaseName'>;
+/** A run to insert; its results go in packed (services/runsPack.ts). */
+export type NewRun = Omit<RatingRun, 'id' | 'createdAt' | 'updatedAt' | 'version' | 'loadCaseName' | 'results'>;
 
 /**
- * INSERT the run (snapshot and results compressed) and its audit row in one statement, only if the guard
- * still holds for this user; null when it does not (nothing is written).
+ * Work derived from one cached read of the inputs that does not depend on the run: per (method options,
+ * section choice) the validated engine requests of each section and the stored bytes of the snapshot.
+ * Kept beside the cached rows (a WeakMap on them), so it goes when they are re-read or evicted. The rating
+ * itself is always computed afresh.
+ */
+export interface RunInputsMemo {
+  validated: Map<string, RatingRequest>;
+  snapshotBytes?: Buffer;
+}
+const memos = new WeakMap<RunInputs, Map<string, RunInputsMemo>>();
+const MAX_MEMOS_PER_INPUTS = 16;
+
+export function runInputsMemo(inputs: RunInputs, key: string): RunInputsMemo {
+  let byKey = memos.get(inputs);
+  if (!byKey) memos.set(inputs, (byKey = new Map()));
+  let m = byKey.get(key);
+  if (!m) {
+    if (byKey.size >= MAX_MEMOS_PER_INPUTS) byKey.delete(byKey.keys().next().value as string);
+    byKey.set(key, (m = { validated: new Map() }));
+  }
+  return m;
+}
+
+type InsertedRun = { id: string; createdAt: Date; updatedAt: Date; version: number };
+
+/** Values of one run insert, in the order of RUN_ROW_COLUMNS below. */
+type RunRow = unknown[];
+const RUN_ROW_COLUMNS: [name: string, type: string][] = [
+  ['id', 'uuid'],
+  ['column_id', 'uuid'],
+  ['load_case_id', 'uuid'],
+  ['label', 'text'],
+  ['kind', 'text'],
+  ['status', 'text'],
+  ['engine_version', 'text'],
+  ['snapshot', 'bytea'],
+  ['results', 'bytea'],
+  ['summary', 'jsonb'],
+  ['reviews', 'jsonb'],
+  ['review_comment', 'text'],
+  ['author_id', 'uuid'],
+  ['reviewer_id', 'uuid'],
+  ['load_case_name', 'text'],
+  // not stored in the run: the audit row and the guard
+  ['audit_user', 'uuid'],
+  ['changes', 'jsonb'],
+  ['column_version', 'int'],
+  ['load_case_version', 'int'],
+  ['sections', 'text[]'],
+  ['member', 'uuid'], // null for an administrator (every site), else the user whose site access is checked
+];
+const STORED = RUN_ROW_COLUMNS.slice(0, 15).map(([n]) => n).join(', ');
+
+const batchSql = new Map<number, string>();
+/**
+ * One statement inserting n runs and their audit rows. A row is inserted only if its guard still holds:
+ * the column, its load case and every section of the column have the versions the run was rated on, and
+ * the user may still see the column. Rows that fail their guard are skipped (the caller reads again).
+ */
+function insertRunsSql(n: number): string {
+  let sql = batchSql.get(n);
+  if (sql) return sql;
+  const w = RUN_ROW_COLUMNS.length;
+  const rows = Array.from({ length: n }, (_, i) =>
+    `(${RUN_ROW_COLUMNS.map(([, type], j) => `$${i * w + j + 1}${i === 0 ? `::${type}` : ''}`).join(', ')})`,
+  );
+  sql = `WITH v (${RUN_ROW_COLUMNS.map(([name]) => name).join(', ')}) AS (VALUES ${rows.join(', ')}),
+     ok AS (
+       SELECT v.* FROM v JOIN columns c ON c.id = v.column_id AND c.version = v.column_version
+         JOIN process_units u ON u.id = c.unit_id
+       WHERE (v.member IS NULL OR u.site_id IN (SELECT m.site_id FROM site_members m WHERE m.user_id = v.member))
+         AND EXISTS (SELECT 1 FROM load_cases l WHERE l.id = v.load_case_id AND l.column_id = c.id AND l.version = v.load_case_version)
+         AND (SELECT coalesce(array_agg(s.id::text || ':' || s.version ORDER BY s.first_tray), '{}'::text[])
+              FROM tray_sections s WHERE s.column_id = c.id) = v.sections),
+     run AS (
+       INSERT INTO rating_runs (${STORED}, created_at, updated_at)
+       SELECT ${STORED}, t.at, t.at FROM ok, LATERAL (SELECT clock_timestamp() AS at) t
+       RETURNING id, created_at, updated_at, version),
+     logged AS (
+       INSERT INTO audit_log (user_id, action, entity, entity_id, changes)
+       SELECT ok.audit_user, 'create', 'rating-run', run.id::text, ok.changes FROM run JOIN ok ON ok.id = run.id)
+     SELECT id, created_at AS "createdAt", updated_at AS "updatedAt", version FROM run`;
+  batchSql.set(n, sql);
+  return sql;
+}
+
+interface PgPool {
+  query(config: { name: string; text: string; values: unknown[] }): Promise<{ rows: InsertedRun[] }>;
+}
+
+async function sendRuns(db: PgPool | EntityManager, rows: RunRow[]): Promise<(InsertedRun | null)[]> {
+  const text = insertRunsSql(rows.length);
+  const values = rows.flat();
+  const out: InsertedRun[] =
+    db instanceof EntityManager
+      ? ((await db.query(text, values)) as InsertedRun[])
+      : (await db.query({ name: `frothline-insert-runs-${rows.length}`, text, values })).rows;
+  const byId = new Map(out.map((r) => [r.id, r]));
+  return rows.map((r) => byId.get(r[0] as string) ?? null);
+}
+
+/** One batcher per connection pool (services/../db/writeBatcher.ts). */
+const batchers = new WeakMap<object, WriteBatcher<RunRow, InsertedRun>>();
+function batcherFor(pool: PgPool): WriteBatcher<RunRow, InsertedRun> {
+  let b = batchers.get(pool);
+  if (!b) batchers.set(pool, (b = new WriteBatcher({ send: (rows) => sendRuns(pool, rows) })));
+  return b;
+}
+
+/**
+ * INSERT the run (snapshot and results compressed) and its audit row, only if the guard still holds for
+ * this user; null when it does not (nothing is written). Inside a transaction the statement runs there;
+ * otherwise it joins the runs being written at the same moment in one statement (db/writeBatcher.ts).
  */
 export async function insertRunWithAudit(
   em: EntityManager,
   user: SessionUser,
   r: NewRun,
+  packed: { snapshot?: Buffer; results: Promise<Buffer> },
   audit: { changes: unknown },
   guard: RunInputsGuard,
-): Promise<{ id: string; createdAt: Date; updatedAt: Date; version: number } | null> {
-  const f = siteFilterSql(user, 'u.site_id', 20);
-  const rows = await preparedQuery<{ id: string; createdAt: Date; updatedAt: Date; version: number }>(
-    em,
-    `frothline-insert-run-${user.role === 'admin' ? 'all' : 'member'}`,
-    `WITH guard AS (
-       SELECT 1 FROM columns c JOIN process_units u ON u.id = c.unit_id
-       WHERE c.id = $1::uuid AND c.version = $17 AND ${f.sql}
-         AND EXISTS (SELECT 1 FROM load_cases l WHERE l.id = $2::uuid AND l.column_id = c.id AND l.version = $18)
-         AND (SELECT coalesce(array_agg(s.id::text || ':' || s.version ORDER BY s.first_tray), '{}'::text[])
-              FROM tray_sections s WHERE s.column_id = c.id) = $19::text[]),
-     run AS (
-       INSERT INTO rating_runs (column_id, load_case_id, label, kind, status, engine_version, snapshot, results, summary,
-         reviews, review_comment, author_id, reviewer_id, load_case_name)
-       SELECT $1::uuid, $2::uuid, $3::text, $4::text, $5::text, $6::text, $7::bytea, $8::bytea, $9::jsonb, $10::jsonb,
-         $11::text, $12::uuid, $13::uuid, $16::text FROM guard
-       RETURNING id, created_at, updated_at, version),
-     logged AS (
-       INSERT INTO audit_log (user_id, action, entity, entity_id, changes)
-       SELECT $14::uuid, 'create', 'rating-run', run.id::text, $15::jsonb FROM run)
-     SELECT id, created_at AS "createdAt", updated_at AS "updatedAt", version FROM run`,
-    [
-      r.columnId,
-      r.loadCaseId,
-      r.label,
-      r.kind,
-      r.status,
-      r.engineVersion,
-      encodeJson(r.snapshot),
-      encodeResults(r.results),
-      JSON.stringify(r.summary),
-      JSON.stringify(r.reviews),
-      r.reviewComment,
-      r.authorId,
-      r.reviewerId,
-      user.id,
-      JSON.stringify(audit.changes ?? null),
-      r.snapshot.loadCase.name,
-      guard.columnVersion,
-      guard.loadCaseVersion,
-      guard.sections,
-      ...f.params,
-    ],
-  );
-  return rows[0] ?? null;
+): Promise<InsertedRun | null> {
+  const [snapshot, results] = await Promise.all([packed.snapshot ?? encodeJsonAsync(r.snapshot), packed.results]);
+  const row: RunRow = [
+    randomUUID(),
+    r.columnId,
+    r.loadCaseId,
+    r.label,
+    r.kind,
+    r.status,
+    r.engineVersion,
+    snapshot,
+    results,
+    JSON.stringify(r.summary),
+    JSON.stringify(r.reviews),
+    r.reviewComment,
+    r.authorId,
+    r.reviewerId,
+    r.snapshot.loadCase.name,
+    user.id,
+    JSON.stringify(audit.changes ?? null),
+    guard.columnVersion,
+    guard.loadCaseVersion,
+    guard.sections,
+    user.role === 'admin' ? null : user.id,
+  ];
+  if (em.queryRunner) return (await sendRuns(em, [row]))[0]!;
+  return batcherFor(driverPool(em) as PgPool).write(row);
 }
 
 const MAX_CACHED = 200;

@@ -98,3 +98,49 @@ describe('run creation after edits', () => {
     expect((await run()).status).toBe(401);
   });
 });
+
+describe('runs created at the same moment', () => {
+  it('are each stored once with their own audit row, when they share one statement (db/writeBatcher.ts)', async () => {
+    const e = await signedIn(ctx, 'process-engineer', [plant.siteId]);
+    const labels = Array.from({ length: 12 }, (_, i) => `together ${i}`);
+    const answers = await Promise.all(
+      labels.map((label) => e.agent.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label })),
+    );
+    expect(answers.map((a) => a.status)).toEqual(labels.map(() => 201));
+    const ids = answers.map((a) => a.body.id as string);
+    expect(new Set(ids).size).toBe(labels.length);
+    expect(answers.map((a) => a.body.label)).toEqual(labels);
+    const stored = (await ctx.ds.query(`SELECT id, label FROM rating_runs WHERE id = ANY($1::uuid[])`, [ids])) as {
+      id: string;
+      label: string;
+    }[];
+    expect(new Map(stored.map((r) => [r.id, r.label]))).toEqual(new Map(ids.map((id, i) => [id, labels[i]])));
+    const audits = (await ctx.ds.query(
+      `SELECT entity_id, user_id FROM audit_log WHERE entity = 'rating-run' AND action = 'create' AND entity_id = ANY($1::text[])`,
+      [ids],
+    )) as { entity_id: string; user_id: string }[];
+    expect(audits.map((a) => a.entity_id).sort()).toEqual([...ids].sort());
+    expect(new Set(audits.map((a) => a.user_id))).toEqual(new Set([e.user.id]));
+    const one = (await e.agent.get(`/api/runs/${ids[5]}`)).body;
+    expect(one.results.trays.length).toBeGreaterThan(0);
+    expect(one.label).toBe(labels[5]);
+  });
+
+  it('a run refused by its guard in a shared statement does not stop the others', async () => {
+    const post = (agent: Agent, label: string) =>
+      agent.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label });
+    const leaving = await signedIn(ctx, 'process-engineer', [plant.siteId]);
+    const staying = (await signedIn(ctx, 'process-engineer', [plant.siteId])).agent;
+    expect((await post(leaving.agent, 'before')).status).toBe(201); // its read of the inputs is now cached
+    const sites = await admin.put(`/api/users/${leaving.user.id}/sites`).send({ siteIds: [] });
+    expect(sites.status).toBe(200);
+    // the leaving user's run reaches the insert on the cached read, fails its guard there and is then refused
+    const answers = await Promise.all(['s1', 'l1', 's2', 's3'].map((l) => post(l[0] === 'l' ? leaving.agent : staying, l)));
+    expect(answers.map((a) => a.status)).toEqual([201, 404, 201, 201]);
+    const labels = (await ctx.ds.query(`SELECT label FROM rating_runs WHERE column_id = $1 AND label = ANY($2::text[])`, [
+      plant.columnId,
+      ['s1', 'l1', 's2', 's3'],
+    ])) as { label: string }[];
+    expect(labels.map((r) => r.label).sort()).toEqual(['s1', 's2', 's3']);
+  });
+});

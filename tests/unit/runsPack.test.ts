@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_SECTIONS } from '../../server/db/seed/demoColumn.js';
 import { DEMO_LOAD_CASES } from '../../server/db/seed/demoLoads.js';
-import { decodeResults, encodeResults } from '../../server/services/runsPack.js';
+import { decodeResults, encodeResults, encodeResultsAsync } from '../../server/services/runsPack.js';
 import { rateSnapshot } from '../../server/services/runs.js';
 import { CHECK_NAMES } from '../../shared/types/rating.js';
 import type { RunResults } from '../../shared/types/runs.js';
 
-function demoResults(): RunResults[] {
+function demoSnapshots() {
   return DEMO_LOAD_CASES.map((lc) => {
     const sections = DEMO_SECTIONS.map((s, i) => ({
       ...s,
@@ -14,14 +14,18 @@ function demoResults(): RunResults[] {
       provenanceDate: s.provenanceDate ?? null,
       overridden: false,
     }));
-    return rateSnapshot({
-      column: { id: 'c', tag: 'T', numbering: 'top-down', trayCount: 46 },
+    return {
+      column: { id: 'c', tag: 'T', numbering: 'top-down' as const, trayCount: 46 },
       loadCase: { id: 'l', name: lc.name, basis: lc.basis, version: 1 },
       sections,
       loads: lc.loads,
       methods: {},
-    }).results;
+    };
   });
+}
+
+function demoResults(): RunResults[] {
+  return demoSnapshots().map((s) => rateSnapshot(s).results);
 }
 
 describe('compressed storage of run results', () => {
@@ -69,5 +73,24 @@ describe('compressed storage of small results', () => {
     const [r] = demoResults();
     const one = { ...r!, trays: r!.trays.slice(0, 1) };
     for (let i = 0; i < 5; i++) expect(decodeResults(encodeResults(one))).toEqual(one);
+  });
+});
+
+describe('work shared between runs of the same inputs', () => {
+  it('rating with validated requests kept from an earlier run gives the same results and leaves them as they were', () => {
+    for (const snapshot of demoSnapshots()) {
+      const validated = new Map();
+      const first = rateSnapshot(snapshot, validated);
+      expect(validated.size).toBe(snapshot.sections.length);
+      const kept = structuredClone([...validated.entries()]);
+      const second = rateSnapshot(snapshot, validated);
+      expect(second).toEqual(first);
+      expect(second).toEqual(rateSnapshot(snapshot));
+      expect([...validated.entries()]).toEqual(kept);
+    }
+  });
+
+  it('compressing off the event loop stores the same results', async () => {
+    for (const results of demoResults()) expect(decodeResults(await encodeResultsAsync(results))).toEqual(results);
   });
 });
