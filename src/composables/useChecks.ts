@@ -42,8 +42,8 @@ export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#
 export const REVIEW_LABELS: Record<ReviewStatus, string> = {
   draft: 'Working copy',
   submitted: 'Awaiting review',
-  approved: 'Accepted',
-  returned: 'Sent back',
+  approved: 'Approved',
+  returned: 'Returned',
 };
 export const REVIEW_COLORS: Record<ReviewStatus, string> = {
   draft: 'grey-7',

@@ -225,10 +225,10 @@ describe('engineer path in Chromium', () => {
   it('US customary units apply to the run page when the user switches', async () => {
     await b.page.goto(runUrl);
     await b.page.locator('[data-test="tray-table"]').waitFor();
-    await b.page.getByRole('button', { name: 'US' }).click();
+    await b.page.getByRole('button', { name: 'US', exact: true }).click();
     await b.page.getByText('ΔP (psi)').waitFor();
     await shot(b.page, 'engineer-run-us');
-    await b.page.getByRole('button', { name: 'SI' }).click();
+    await b.page.getByRole('button', { name: 'SI', exact: true }).click();
     await b.page.getByText('ΔP (Pa)').waitFor();
   });
 
@@ -236,7 +236,7 @@ describe('engineer path in Chromium', () => {
     await b.page.getByRole('link', { name: 'T-701' }).first().click();
     await b.page.getByRole('cell', { name: 'Top (above top PA)', exact: true }).click();
     await b.page.waitForURL(/\/sections\//);
-    await b.page.getByRole('button', { name: 'US' }).click();
+    await b.page.getByRole('button', { name: 'US', exact: true }).click();
     const weir = b.page.getByLabel('Outlet weir height (in)');
     await weir.waitFor();
     expect(Number(await weir.inputValue())).toBeCloseTo(50 / 25.4, 2); // 50 mm shown in inches (1 in = 25.4 mm exactly)
@@ -245,6 +245,6 @@ describe('engineer path in Chromium', () => {
     await b.page.getByText(/Between 0 and 11\.8\d? in/).waitFor();
     await b.page.evaluate(() => window.scrollTo(0, 0));
     await shot(b.page, 'engineer-section-us');
-    await b.page.getByRole('button', { name: 'SI' }).click();
+    await b.page.getByRole('button', { name: 'SI', exact: true }).click();
   });
 });

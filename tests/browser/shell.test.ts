@@ -44,3 +44,31 @@ describe('client shell in Chromium', () => {
     await b.page.waitForURL((u) => u.pathname === '/');
   });
 });
+
+describe('on a phone-sized screen (390 × 844)', () => {
+  let m: Browser;
+  beforeAll(async () => {
+    m = await launch({ width: 390, height: 844 });
+  });
+  afterAll(() => m?.close());
+
+  it('nothing runs off the side; the account menu names the user; runs list as items that open the run', async () => {
+    await signInAs(m.page, 'process-engineer');
+    await m.page.getByText('T-701', { exact: true }).click();
+    await m.page.getByText('Rating runs', { exact: true }).waitFor();
+    const widths = await m.page.evaluate(() => [document.documentElement.scrollWidth, window.innerWidth]);
+    expect(widths[0]).toBeLessThanOrEqual(widths[1]!);
+    const menu = m.page.getByRole('button', { name: /^Account:/ });
+    expect(await menu.innerText()).not.toMatch(/Nandakumar|Engineer/i); // only the icon in the bar
+    await menu.click();
+    await m.page.getByText('Sign out').waitFor();
+    await m.page.keyboard.press('Escape');
+    const items = m.page.locator('.fl-run-item');
+    expect(await items.count()).toBeGreaterThan(0);
+    await shot(m.page, 'phone-column');
+    await items.first().click();
+    await m.page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
+    await m.page.getByText('Screening estimates', { exact: false }).first().waitFor();
+    await shot(m.page, 'phone-run');
+  });
+});

@@ -160,14 +160,14 @@ describe('pump-around study page in Chromium', () => {
     copyUrl = b.page.url();
   });
 
-  it('the author sends the copy for review; a specialist sends it back, then accepts it', async () => {
-    await b.page.getByRole('button', { name: 'Send for review' }).click();
+  it('the author submits the copy for review; a specialist returns it, then approves it', async () => {
+    await b.page.getByRole('button', { name: 'Submit for review' }).click();
     await b.page.locator('[data-test=review-submitted]').waitFor();
     await b.context.clearCookies();
     await signInAs(b.page, 'internals-specialist');
     await b.page.goto(copyUrl);
-    await b.page.getByRole('button', { name: 'Send back' }).click();
-    const dialogSendBack = b.page.getByRole('dialog').getByRole('button', { name: 'Send back' });
+    await b.page.getByRole('button', { name: 'Return' }).click();
+    const dialogSendBack = b.page.getByRole('dialog').getByRole('button', { name: 'Return' });
     expect(await dialogSendBack.isDisabled()).toBe(true); // a comment is required
     await b.page.getByRole('dialog').getByLabel('What should change (required)').fill('Use the winter case as the base');
     await dialogSendBack.click();
@@ -176,18 +176,18 @@ describe('pump-around study page in Chromium', () => {
     await b.context.clearCookies();
     await signInAs(b.page, 'process-engineer');
     await b.page.goto(copyUrl);
-    await b.page.getByRole('button', { name: 'Send for review' }).click();
+    await b.page.getByRole('button', { name: 'Submit for review' }).click();
     await b.page.locator('[data-test=review-submitted]').waitFor();
     await b.context.clearCookies();
     await signInAs(b.page, 'internals-specialist');
     await b.page.goto(copyUrl);
-    await b.page.getByRole('button', { name: 'Accept' }).click();
-    await b.page.getByRole('dialog').getByRole('button', { name: 'Accept' }).click();
+    await b.page.getByRole('button', { name: 'Approve' }).click();
+    await b.page.getByRole('dialog').getByRole('button', { name: 'Approve' }).click();
     await b.page.locator('[data-test=review-approved]').waitFor();
-    expect(await b.page.getByRole('button', { name: 'Send back' }).count()).toBe(0);
+    expect(await b.page.getByRole('button', { name: 'Return' }).count()).toBe(0);
     expect(await b.page.locator('[data-test=study-reviews]').innerText()).toMatch(
-      /Sent back by .*\n[\s\S]*winter case[\s\S]*Accepted by/,
+      /Returned by .*\n[\s\S]*winter case[\s\S]*Approved by/,
     );
-    await shot(b.page, 'study-accepted');
+    await shot(b.page, 'study-approved');
   });
 });
