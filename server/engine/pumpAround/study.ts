@@ -4,8 +4,8 @@
  *
  * - Dry-out duty: closed form Q0 + λ·L_min over the trays above the zone (traffic.ts).
  * - Minimum-liquid and zone-overload duties: the lowest duty at which a watched check (checks.ts) goes
- *   over its limit as the duty rises, solved between Q_lo = min(base duty, sweep start) and the dry-out
- *   duty (scan.ts). Not reached before dry-out → null. A check already over at Q_lo that never clears
+ *   over its limit as the duty rises, solved between Q_lo = min(base duty, sweep start, margin × dry-out
+ *   duty) and the dry-out duty (scan.ts). Not reached before dry-out → null. A check already over at Q_lo that never clears
  *   limits at Q_lo.
  * - Limiting duty: the lowest of the three. Recommended duty = min(margin × dry-out duty, highest duty
  *   with no watched check over), margin default 0.7 (common practice: tray-methods.md §9 knows no
@@ -56,11 +56,13 @@ export function runStudy(input: StudyInput): StudyResult {
     'Extra condensation spread evenly over the pump-around zone trays (return to draw); the circulation is added to the base (net) liquid of every zone tray.',
   ];
   const dry = dryOutDuty(input.trays, pa, lambda, numbering);
-  const qLo = Math.min(pa.baseDuty_kW, input.sweep.fromDuty_kW);
+  // search down to the margin duty too, so that a suggestion below the base duty and the sweep start is
+  // checked over the whole way up to the base, not only at its own point
+  const qLo = Math.max(0, Math.min(pa.baseDuty_kW, input.sweep.fromDuty_kW, dry ? margin * dry.duty_kW : Infinity));
   let scan: ScanResult = { minimumLiquid: null, zoneOverload: null, clearing: [], alwaysOver: [] };
   if (dry && dry.duty_kW > qLo) {
     scan = scanWatchedChecks(qLo, dry.duty_kW, baseTrays, shiftOne, rate);
-    notes.push(`Limits searched from ${fmt(qLo)} (lower of base duty and sweep start) to the dry-out duty ${fmt(dry.duty_kW)}.`);
+    notes.push(`Limits searched from ${fmt(qLo)} (lowest of base duty, sweep start and margin × dry-out duty) to the dry-out duty ${fmt(dry.duty_kW)}.`);
   } else if (dry) {
     notes.push(`Tray ${dry.tray} above the zone has no liquid at the base case: dry-out at the base duty.`);
   }
@@ -75,7 +77,13 @@ export function runStudy(input: StudyInput): StudyResult {
   for (const c of scan.alwaysOver) notes.push(`Tray ${c.tray} ${c.check} is over its limit over the whole range searched.`);
   const feasibleFrom = Math.max(qLo, ...scan.clearing.map((c) => c.duty_kW));
   const highestFree = scan.alwaysOver.length === 0 && limiting && limiting.duty_kW > feasibleFrom ? limiting.duty_kW : null;
-  const recommended = dry && highestFree !== null ? Math.min(margin * dry.duty_kW, highestFree) : null;
+  let recommended = dry && highestFree !== null ? Math.min(margin * dry.duty_kW, highestFree) : null;
+  if (recommended !== null && recommended < feasibleFrom) {
+    notes.push(
+      `The margin duty ${fmt(recommended)} lies below ${fmt(feasibleFrom)}, under which a watched check is over its limit: no duty meets both the margin and the limits.`,
+    );
+    recommended = null;
+  }
   if (recommended === null) notes.push('No duty in the range searched is free of watched limits: no recommended duty.');
   else notes.push(...overAt(recommended, 'recommended'));
 

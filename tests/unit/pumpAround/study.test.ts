@@ -133,6 +133,19 @@ describe('runStudy on the invented example column', () => {
     expect(low.recommendedDuty_kW).toBeCloseTo(r.recommendedDuty_kW!, 6);
   });
 
+  it('a margin duty below the base duty and the sweep start is searched from there up: a limit in between is found', () => {
+    // the sweep starts at the base duty; margin 0.1 puts the margin duty far below it, where tray 7 floods
+    const low = runStudy({ ...input, margin: 0.1, sweep: { ...input.sweep, fromDuty_kW: Q0 } });
+    expect(low.notes.join(' ')).toContain(`Limits searched from ${Math.round(0.1 * r.dryOutDuty_kW!)} kW`);
+    expect(low.notes.some((n) => /^Tray 7 jetFlood is over its limit below \d+ kW and clears above it/.test(n))).toBe(true);
+    expect(low.recommendedDuty_kW).toBeNull();
+    expect(low.notes.join(' ')).toMatch(/no duty meets both the margin and the limits/);
+    // margin 0.2 puts it above that flood: the suggestion stands, and tray 7 is within its flood limit there
+    const ok = runStudy({ ...input, margin: 0.2, sweep: { ...input.sweep, fromDuty_kW: Q0 } });
+    expect(ok.recommendedDuty_kW).toBeCloseTo(0.2 * r.dryOutDuty_kW!, 6);
+    expect(percentAt(input, 7, 'jetFlood', ok.recommendedDuty_kW!)).toBeLessThanOrEqual(100);
+  });
+
   it('a circulation too large for the zone at every duty: overload at the start, no recommended duty', () => {
     const { returnTemperatureDrop_K: _, ...pa } = input.pumpAround;
     const big = runStudy({ ...input, pumpAround: { ...pa, circulation_kg_h: 400000 } });
