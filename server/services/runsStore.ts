@@ -113,9 +113,8 @@ export function runInputsMemo(inputs: RunInputs, key: string): RunInputsMemo {
 
 type InsertedRun = { id: string; createdAt: Date; updatedAt: Date; version: number };
 
-/** Values of one run insert, in the order of RUN_ROW_COLUMNS below. */
-type RunRow = unknown[];
-const RUN_ROW_COLUMNS: [name: string, type: string][] = [
+/** The rating_runs columns a run insert fills, with their types. */
+const STORED_COLUMNS: [name: string, type: string][] = [
   ['id', 'uuid'],
   ['column_id', 'uuid'],
   ['load_case_id', 'uuid'],
@@ -131,7 +130,9 @@ const RUN_ROW_COLUMNS: [name: string, type: string][] = [
   ['author_id', 'uuid'],
   ['reviewer_id', 'uuid'],
   ['load_case_name', 'text'],
-  // not stored in the run: the audit row and the guard
+];
+/** Values that go with each row but are not stored in the run: its audit row and its guard. */
+const GUARD_COLUMNS: [name: string, type: string][] = [
   ['audit_user', 'uuid'],
   ['changes', 'jsonb'],
   ['column_version', 'int'],
@@ -139,7 +140,10 @@ const RUN_ROW_COLUMNS: [name: string, type: string][] = [
   ['sections', 'text[]'],
   ['member', 'uuid'], // null for an administrator (every site), else the user whose site access is checked
 ];
-const STORED = RUN_ROW_COLUMNS.slice(0, 15).map(([n]) => n).join(', ');
+const RUN_ROW_COLUMNS = [...STORED_COLUMNS, ...GUARD_COLUMNS];
+const STORED = STORED_COLUMNS.map(([n]) => n).join(', ');
+/** Values of one run insert, in the order of RUN_ROW_COLUMNS. */
+type RunRow = unknown[];
 
 const batchSql = new Map<number, string>();
 /**
@@ -189,7 +193,7 @@ async function sendRuns(db: PgPool | EntityManager, rows: RunRow[]): Promise<(In
   return rows.map((r) => byId.get(r[0] as string) ?? null);
 }
 
-/** One batcher per connection pool (services/../db/writeBatcher.ts). */
+/** One batcher per connection pool (db/writeBatcher.ts). */
 const batchers = new WeakMap<object, WriteBatcher<RunRow, InsertedRun>>();
 function batcherFor(pool: PgPool): WriteBatcher<RunRow, InsertedRun> {
   let b = batchers.get(pool);
