@@ -71,4 +71,17 @@ describe('on a phone-sized screen (390 × 844)', () => {
     await m.page.getByText('Screening estimates', { exact: false }).first().waitFor();
     await shot(m.page, 'phone-run');
   });
+  it('the inspector lists inspections as items and opens one', async () => {
+    await m.context.clearCookies();
+    await signInAs(m.page, 'inspector');
+    await m.page.goto(`${FROTHLINE_URL}/inspections`);
+    const items = m.page.locator('.fl-inspection-item');
+    await items.first().waitFor();
+    expect(await items.first().innerText()).toMatch(/ · .*\n[\s\S]*from \d{4}-\d{2}-\d{2}/);
+    const widths = await m.page.evaluate(() => [document.documentElement.scrollWidth, window.innerWidth]);
+    expect(widths[0]).toBeLessThanOrEqual(widths[1]!);
+    await shot(m.page, 'phone-inspections');
+    await items.first().click();
+    await m.page.waitForURL(/\/inspections\/[0-9a-f-]{36}$/);
+  });
 });
