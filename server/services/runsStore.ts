@@ -11,7 +11,7 @@
  * their version (optimistic locking), so a stale cache entry can never be stored in a run: the guard
  * fails, the caller reads afresh and rates again.
  */
-import { EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { randomUUID } from 'node:crypto';
 import { driverPool, preparedQuery } from '../db/prepared.js';
 import { WriteBatcher } from '../db/writeBatcher.js';
@@ -20,9 +20,9 @@ import { siteFilterSql } from './access.js';
 import { encodeJsonAsync } from './runsPack.js';
 import type { RatingRun } from '../db/entities/RatingRun.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { RatingRequest, SectionGeometry, TrayLoad } from '../../shared/types/rating.js';
+import type { RatingRequest, TrayLoad } from '../../shared/types/rating.js';
 import type { LoadBasis } from '../../shared/types/loads.js';
-import type { GeometryProvenance } from '../../shared/types/columns.js';
+import type { TraySectionRecord, TrayNumbering } from '../../shared/types/columns.js';
 
 /** The versions a run's inputs were read at (checked again by the insert). */
 export interface RunInputsGuard {
@@ -34,18 +34,9 @@ export interface RunInputsGuard {
 
 export interface RunInputs {
   columnVersion: number;
-  column: { id: string; tag: string; numbering: 'top-down' | 'bottom-up'; trayCount: number };
+  column: { id: string; tag: string; numbering: TrayNumbering; trayCount: number };
   loadCase: { id: string; name: string; basis: LoadBasis; version: number; loads: TrayLoad[] } | null;
-  sections: {
-    id: string;
-    name: string;
-    firstTray: number;
-    lastTray: number;
-    geometry: SectionGeometry;
-    provenance: GeometryProvenance;
-    provenanceDate: string | null;
-    version: number;
-  }[];
+  sections: Omit<TraySectionRecord, 'columnId' | 'notes'>[];
 }
 
 /** The guard of inputs read with a found load case (the versions they were read at). */
@@ -178,26 +169,19 @@ function insertRunsSql(n: number): string {
   return sql;
 }
 
-interface PgPool {
-  query(config: { name: string; text: string; values: unknown[] }): Promise<{ rows: InsertedRun[] }>;
-}
-
-async function sendRuns(db: PgPool | EntityManager, rows: RunRow[]): Promise<(InsertedRun | null)[]> {
-  const text = insertRunsSql(rows.length);
-  const values = rows.flat();
-  const out: InsertedRun[] =
-    db instanceof EntityManager
-      ? ((await db.query(text, values)) as InsertedRun[])
-      : (await db.query({ name: `frothline-insert-runs-${rows.length}`, text, values })).rows;
+/** Insert rows in one statement (prepared per batch size; inside a transaction it runs there). */
+async function sendRuns(em: EntityManager, rows: RunRow[]): Promise<(InsertedRun | null)[]> {
+  const out = await preparedQuery<InsertedRun>(em, `frothline-insert-runs-${rows.length}`, insertRunsSql(rows.length), rows.flat());
   const byId = new Map(out.map((r) => [r.id, r]));
   return rows.map((r) => byId.get(r[0] as string) ?? null);
 }
 
 /** One batcher per connection pool (db/writeBatcher.ts). */
 const batchers = new WeakMap<object, WriteBatcher<RunRow, InsertedRun>>();
-function batcherFor(pool: PgPool): WriteBatcher<RunRow, InsertedRun> {
+function batcherFor(em: EntityManager): WriteBatcher<RunRow, InsertedRun> {
+  const pool = driverPool(em);
   let b = batchers.get(pool);
-  if (!b) batchers.set(pool, (b = new WriteBatcher({ send: (rows) => sendRuns(pool, rows) })));
+  if (!b) batchers.set(pool, (b = new WriteBatcher({ send: (rows) => sendRuns(em, rows) })));
   return b;
 }
 
@@ -239,7 +223,7 @@ export async function insertRunWithAudit(
     user.role === 'admin' ? null : user.id,
   ];
   if (em.queryRunner) return (await sendRuns(em, [row]))[0]!;
-  return batcherFor(driverPool(em) as PgPool).write(row);
+  return batcherFor(em).write(row);
 }
 
 const MAX_CACHED = 200;
