@@ -17,7 +17,7 @@ import { driverPool, preparedQuery } from '../db/prepared.js';
 import { WriteBatcher } from '../db/writeBatcher.js';
 import { NotFoundError } from '../errors.js';
 import { siteFilterSql } from './access.js';
-import { encodeJsonAsync } from './runsPack.js';
+import { encodeJson } from './runsPack.js';
 import type { RatingRun } from '../db/entities/RatingRun.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { RatingRequest, TrayLoad } from '../../shared/types/rating.js';
@@ -194,11 +194,12 @@ export async function insertRunWithAudit(
   em: EntityManager,
   user: SessionUser,
   r: NewRun,
-  packed: { snapshot?: Buffer; results: Promise<Buffer> },
+  packed: { snapshot?: Buffer; results: Buffer },
   audit: { changes: unknown },
   guard: RunInputsGuard,
 ): Promise<InsertedRun | null> {
-  const [snapshot, results] = await Promise.all([packed.snapshot ?? encodeJsonAsync(r.snapshot), packed.results]);
+  const snapshot = packed.snapshot ?? encodeJson(r.snapshot);
+  const results = packed.results;
   const row: RunRow = [
     randomUUID(),
     r.columnId,

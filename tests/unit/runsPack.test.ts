@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_SECTIONS } from '../../server/db/seed/demoColumn.js';
 import { DEMO_LOAD_CASES } from '../../server/db/seed/demoLoads.js';
-import { decodeResults, encodeResults, encodeResultsAsync } from '../../server/services/runsPack.js';
+import { decodeResults, encodeResults } from '../../server/services/runsPack.js';
 import { rateSnapshot } from '../../server/services/runs.js';
 import { CHECK_NAMES } from '../../shared/types/rating.js';
 import type { RunResults } from '../../shared/types/runs.js';
@@ -88,9 +88,5 @@ describe('work shared between runs of the same inputs', () => {
       expect(second).toEqual(rateSnapshot(snapshot));
       expect([...validated.entries()]).toEqual(kept);
     }
-  });
-
-  it('compressing off the event loop stores the same results', async () => {
-    for (const results of demoResults()) expect(decodeResults(await encodeResultsAsync(results))).toEqual(results);
   });
 });
