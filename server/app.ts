@@ -84,8 +84,11 @@ export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOpt
     pinoHttp({
       logger,
       autoLogging: !config.isTest,
+      // our serializers get the raw request and response: the wrapped (standard) ones first build a full
+      // copy with every header, on every request, only for us to keep two fields of it
+      wrapSerializers: false,
       serializers: {
-        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        req: (req: { method: string; originalUrl?: string; url: string }) => ({ method: req.method, url: req.originalUrl ?? req.url }),
         res: (res: { statusCode: number }) => ({ status: res.statusCode }),
       },
     }),

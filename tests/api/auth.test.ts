@@ -1,6 +1,6 @@
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { config } from '../../server/config.js';
 import { makeUser, setupApp, signedIn, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
 
@@ -85,6 +85,23 @@ describe('sign-in and sessions', () => {
       .get('/api/columns')
       .set('Cookie', `frothline_session=${token(config.sessionMinutes + 1)}`);
     expect(expired.status).toBe(401);
+  });
+
+  it('refuses a session token once it has expired, though it was accepted before', async () => {
+    const u = await makeUser(ctx.ds, 'viewer');
+    const cookie = `frothline_session=${jwt.sign({ role: 'viewer' }, config.jwtSecret, {
+      subject: u.id,
+      expiresIn: 120,
+      algorithm: 'HS256',
+    })}`;
+    expect((await request(ctx.app).get('/api/auth/me').set('Cookie', cookie)).status).toBe(200);
+    vi.useFakeTimers({ toFake: ['Date'], now: Date.now() + 121_000 });
+    try {
+      expect((await request(ctx.app).get('/api/auth/me').set('Cookie', cookie)).status).toBe(401);
+    } finally {
+      vi.useRealTimers();
+    }
+    expect((await request(ctx.app).get('/api/auth/me').set('Cookie', cookie)).status).toBe(200);
   });
 
   it('refuses a forged token', async () => {
