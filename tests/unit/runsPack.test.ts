@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { DEMO_SECTIONS } from '../../server/db/seed/demoColumn.js';
 import { DEMO_LOAD_CASES } from '../../server/db/seed/demoLoads.js';
@@ -47,6 +48,40 @@ describe('compressed storage of run results', () => {
     expect(Object.is(back.checks.jetFlood.value, 0.1 + 0.2)).toBe(true);
     expect('entrainedLiquid_kg_h' in back.details).toBe(false);
     expect(back.warnings).toEqual(t.warnings);
+  });
+
+  it('writes the current layout (FRB3) and keeps warnings without a tray number without one', () => {
+    const [r] = demoResults();
+    r!.trays[1]!.warnings = [
+      { code: 'a', message: 'no tray' },
+      { code: 'b', message: 'with a tray', tray: 7 },
+    ];
+    const stored = encodeResults(r!);
+    expect(stored.subarray(0, 4).toString('latin1')).toBe('FRB3');
+    const back = decodeResults(stored);
+    expect(back.trays[1]!.warnings).toEqual(r!.trays[1]!.warnings);
+    expect('tray' in back.trays[1]!.warnings[0]!).toBe(false);
+  });
+
+  it('switches to 4-byte string indices when the string table outgrows 2 bytes', () => {
+    const [r] = demoResults();
+    const t = r!.trays[0]!;
+    t.warnings = Array.from({ length: 70_000 }, (_, i) => ({ code: 'many', message: `message ${i}`, tray: t.tray }));
+    const back = decodeResults(encodeResults(r!));
+    expect(back.trays[0]!.warnings).toHaveLength(70_000);
+    expect(back.trays[0]!.warnings[69_999]).toEqual({ code: 'many', message: 'message 69999', tray: t.tray });
+    expect(back).toEqual(r);
+  });
+
+  it('reads rows stored in the earlier binary layout (FRB2)', () => {
+    // tests/fixtures/run-results-frb2.json: two demo trays as the FRB2 encoder stored them, and their results
+    const fixture = JSON.parse(readFileSync(new URL('../fixtures/run-results-frb2.json', import.meta.url), 'utf8')) as {
+      stored: string;
+      results: RunResults;
+    };
+    const stored = Buffer.from(fixture.stored, 'base64');
+    expect(stored.subarray(0, 4).toString('latin1')).toBe('FRB2');
+    expect(decodeResults(stored)).toEqual(fixture.results);
   });
 
   it('reads rows stored before compression (plain JSON text and the packed-1 array form)', () => {
