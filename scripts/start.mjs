@@ -4,7 +4,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { ensureNodeModules } from './lib/deps.mjs';
 import { Cluster, ensurePostgres } from './lib/postgres.mjs';
-import { log, loadDotEnv, run, start, waitForPort } from './lib/util.mjs';
+import { log, loadDotEnv, run, SERVER_NODE_OPTIONS, start, waitForPort } from './lib/util.mjs';
 
 loadDotEnv();
 const env = process.env;
@@ -46,7 +46,9 @@ try {
   log('building the client…');
   run('node_modules/.bin/vite', ['build', '--logLevel', 'warn'], { env: childEnv });
   fakes = await startFakes({ dataDir, s3Port, smtpPort, bucket });
-  server = start('node_modules/.bin/tsx', ['server/main.ts'], { env: { ...childEnv, NODE_ENV: 'production' } });
+  // the same young-generation size as `npm run bench` measures with (DEVELOPERS.md, "Benchmarks")
+  const nodeOptions = [childEnv.NODE_OPTIONS, SERVER_NODE_OPTIONS].filter(Boolean).join(' ');
+  server = start('node_modules/.bin/tsx', ['server/main.ts'], { env: { ...childEnv, NODE_ENV: 'production', NODE_OPTIONS: nodeOptions } });
   server.on('exit', (code) => {
     if (!stopping) shutdown(code ?? 1);
   });

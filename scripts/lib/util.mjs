@@ -5,6 +5,13 @@ import net from 'node:net';
 
 export const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
 
+/**
+ * Node options of the API server process: a young generation of up to 64 MB per semi-space, so that the
+ * short-lived objects of rating requests die there instead of being copied and promoted (the run and
+ * pump-around benches measure with the same option: package.json "bench").
+ */
+export const SERVER_NODE_OPTIONS = '--max-semi-space-size=64';
+
 export function log(msg) {
   process.stdout.write(`\x1b[36m[frothline]\x1b[0m ${msg}\n`);
 }

@@ -85,15 +85,21 @@ export const weepPointHoleVelocityFair = method(
     const ksPerU = p.holeAreaRatio * Math.sqrt(p.vapourDensity / (p.liquidDensity - p.vapourDensity));
     const crestTerm = 1000 * bennettWeirConstant(p.weirHeight_mm) * Math.pow(p.liquid_m3_s / p.weirLength_m, 2 / 3);
     const dry = (p.dryK * p.vapourDensity) / p.liquidDensity;
-    const hL = (u: number): number => {
-      const phi = bennettEffectiveDensity(u * ksPerU);
-      return phi * p.weirHeight_mm + crestTerm * Math.cbrt(phi);
-    };
     const hL0 = p.weirHeight_mm + crestTerm;
     if (p.residualHead_mm >= hL0) return 0;
     // h_d alone reaches h_L(0) ≥ h_L(u) here, so the residual is positive at this upper end.
     const hi = Math.sqrt(hL0 / dry) * 1.0001;
-    const r = brent((u) => dry * u * u + p.residualHead_mm - hL(u), 0, hi, { xTol: 1e-6 * hi });
+    // residual h_d(u) + h_σ − h_L(u), written inline: a named inner function would be wrapped by the
+    // TypeScript loader's name-keeping helper on every call of this hot function (one per tray rated)
+    const r = brent(
+      (u) => {
+        const phi = bennettEffectiveDensity(u * ksPerU);
+        return dry * u * u + p.residualHead_mm - (phi * p.weirHeight_mm + crestTerm * Math.cbrt(phi));
+      },
+      0,
+      hi,
+      { xTol: 1e-6 * hi },
+    );
     return r.converged ? r.root : hi;
   },
   {

@@ -7,11 +7,11 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { PumpAroundStudy } from '../db/entities/PumpAroundStudy.js';
 import { ValidationError, NotFoundError } from '../errors.js';
-import { runStudy, validateStudyInput } from '../engine/pumpAround/index.js';
+import { validateStudyInput } from '../engine/pumpAround/index.js';
 import { assertColumnVisible, canSeeColumn } from './access.js';
 import { audit } from './audit.js';
 import { loadStudyParts, studyInputFrom, type StudyParts } from './studyInputs.js';
-import { slimStudyResult } from './studyResult.js';
+import { runSlimStudy } from './studyResult.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { StudyInput } from '../../shared/types/pumpAround.js';
 import type { CreateStudyBody, SlimStudyResult, StudyRecord, StudySummary } from '../../shared/types/studies.js';
@@ -41,7 +41,7 @@ export async function buildStudy(
       checked.errors.map((e) => ({ path: requestPath(e.path), message: e.message })),
     );
   const input = checked.value;
-  const result = slimStudyResult(input, runStudy(input));
+  const result = runSlimStudy(input);
   if (excludedTrays.length)
     result.notes.push(`Load-case trays outside every section were left out of the study: ${excludedTrays.join(', ')}.`);
   if (netOfCirculation_kg_h !== null)

@@ -11,7 +11,8 @@ export {
   topDownPosition,
 } from './traffic.js';
 export type { ShiftedTray, TrafficShift, TrayRegion } from './traffic.js';
-export { DEFAULT_MARGIN, runStudy } from './study.js';
+export { DEFAULT_MARGIN, runStudy, runStudyWith } from './study.js';
+export type { StudyResultOf } from './study.js';
 export { studyPoint, sweepDuties } from './points.js';
 export { SCAN_INTERVALS, scanWatchedChecks } from './scan.js';
 export { MINIMUM_LIQUID_CHECKS, ZONE_OVERLOAD_CHECKS, watchedChecks } from './checks.js';

@@ -13,7 +13,7 @@
  * The input must have passed validateStudyInput. Tray numbers are reported in the input's numbering.
  */
 import type { TrayLoad, TrayResult } from '../../../shared/types/rating.js';
-import type { StudyInput, StudyLimit, StudyResult, StudySection } from '../../../shared/types/pumpAround.js';
+import type { StudyInput, StudyLimit, StudyPoint, StudyResult, StudySection } from '../../../shared/types/pumpAround.js';
 import { prepareSection, rateTrayPrepared, type PreparedSection } from '../index.js';
 import { watchedChecks } from './checks.js';
 import { sectionForTray } from './column.js';
@@ -27,7 +27,20 @@ const AT_LIMIT_PERCENT = 1e-3;
 
 const fmt = (q: number): string => `${Math.round(q)} kW`;
 
+/** A study result whose sweep points were mapped as they were rated (runStudyWith). */
+export type StudyResultOf<P> = Omit<StudyResult, 'points'> & { points: P[] };
+
+/** The full study: every sweep point with the full rating of every tray (the CLI prints this). */
 export function runStudy(input: StudyInput): StudyResult {
+  return runStudyWith(input, (p) => p);
+}
+
+/**
+ * The study with each sweep point passed through `mapPoint` as soon as it is rated. A caller that keeps
+ * less than the full ratings (the API keeps percent of limit and status per check) lets them go while
+ * they are young: holding 12,000 full tray ratings to the end made garbage collection most of the run.
+ */
+export function runStudyWith<P>(input: StudyInput, mapPoint: (p: StudyPoint) => P): StudyResultOf<P> {
   const numbering = input.numbering ?? 'top-down';
   const margin = input.margin ?? DEFAULT_MARGIN;
   const pa = input.pumpAround;
@@ -116,6 +129,8 @@ export function runStudy(input: StudyInput): StudyResult {
     recommendedDuty_kW: recommended,
     margin,
     notes,
-    points: sweepDuties(input).map((q) => studyPoint(shiftTraffic(input.trays, pa, q, lambda, numbering), pa.baseDuty_kW, numbering, rateShifted)),
+    points: sweepDuties(input).map((q) =>
+      mapPoint(studyPoint(shiftTraffic(input.trays, pa, q, lambda, numbering), pa.baseDuty_kW, numbering, rateShifted)),
+    ),
   };
 }

@@ -1,7 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { rateTray } from '../../../server/engine/index.js';
-import { dryOutDuty, runStudy, sectionForTray, validateStudyInput } from '../../../server/engine/pumpAround/index.js';
+import { dryOutDuty, runStudy, runStudyWith, sectionForTray, validateStudyInput } from '../../../server/engine/pumpAround/index.js';
+import { slimPoint } from '../../../server/services/studyResult.js';
 import type { StudyInput, StudyResult } from '../../../shared/types/pumpAround.js';
 import type { CheckName, TrayLoad } from '../../../shared/types/rating.js';
 
@@ -48,6 +49,12 @@ describe('runStudy on the invented example column', () => {
         expect(t.rating).toEqual(rateTray(sectionForTray(input.sections, b.tray)!, b, input.methods));
       }
     }
+  });
+
+  it('mapping each point as it is rated (the stored form) gives the same study as mapping afterwards', () => {
+    const slim = runStudyWith(input, slimPoint);
+    const { points, ...rest } = r;
+    expect(slim).toEqual({ ...rest, points: points.map(slimPoint) });
   });
 
   it('reflux falls by Δm = (Q − Q0)/λ', () => {
