@@ -14,7 +14,7 @@ import { router } from './router';
 const app = createApp(App);
 // an empty table is not a warning: show an information icon instead of the default triangle
 const icons = { ...iconSet, table: { ...iconSet.table, warning: 'info_outline' } };
-app.use(Quasar, { plugins: { Notify, Dialog }, iconSet: icons, config: { notify: { position: 'top-right', timeout: 5000 } } });
+app.use(Quasar, { plugins: { Notify, Dialog }, iconSet: icons, config: { notify: { position: 'top', timeout: 5000 } } });
 app.use(createPinia());
 app.use(router);
 installApi(router);

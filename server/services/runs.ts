@@ -88,8 +88,8 @@ export function rateSnapshot(
 }
 
 /**
- * Rate the snapshot and pack the results. A plain function,
- * so that no frame of the async caller holds the results while the write is awaited unless they are kept.
+ * Rate the snapshot and pack the results. A plain function, so that no frame of the async caller holds
+ * the results while the write is awaited unless they are kept.
  */
 function rateAndPack(
   base: Omit<RunSnapshot, 'engineVersion'>,
