@@ -71,6 +71,20 @@ describe('on a phone-sized screen (390 × 844)', () => {
     await m.page.getByText('Screening estimates', { exact: false }).first().waitFor();
     await shot(m.page, 'phone-run');
   });
+  it("a study's title keeps whole lines, with its chip and actions below it", async () => {
+    await m.page.goto(`${FROTHLINE_URL}/`);
+    await m.page.getByText('T-701', { exact: true }).first().click();
+    await m.page.getByText(/how far can the duty go\?/).first().click();
+    await m.page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+    const title = m.page.locator('[data-test="study-label"]');
+    await title.waitFor();
+    // squeezed beside the chip and buttons, the title was ~80 px wide with one word per line
+    expect((await title.boundingBox())!.width).toBeGreaterThan(250);
+    const widths = await m.page.evaluate(() => [document.documentElement.scrollWidth, window.innerWidth]);
+    expect(widths[0]).toBeLessThanOrEqual(widths[1]!);
+    await shot(m.page, 'phone-study');
+  });
+
   it('the inspector lists inspections as items and opens one', async () => {
     await m.context.clearCookies();
     await signInAs(m.page, 'inspector');
