@@ -22,6 +22,7 @@ export const useInspectionStore = defineStore('inspection', () => {
   const list = async (columnId?: string) => (await api.get<{ items: InspectionSummary[] }>('/inspections', { query: { columnId } })).items;
   const create = (body: CreateInspectionBody) => api.post<InspectionRecord>('/inspections', body);
   async function load(id: string): Promise<void> {
+    if (rec.value?.id !== id) rec.value = null; // never show another inspection under this address
     rec.value = await api.get<InspectionRecord>(`/inspections/${id}`);
   }
   async function update(body: UpdateInspectionBody): Promise<void> {

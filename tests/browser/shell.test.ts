@@ -43,6 +43,30 @@ describe('client shell in Chromium', () => {
     await b.page.goto(`${FROTHLINE_URL}/admin/users`);
     await b.page.waitForURL((u) => u.pathname === '/');
   });
+
+  it('a link to a record that is gone, or to no record at all, says so instead of loading for ever', async () => {
+    const none = '00000000-0000-4000-8000-000000000000';
+    const cases: [string, string][] = [
+      [`/runs/${none}`, 'No rating run at this address'],
+      ['/runs/not-a-run-id', 'This address does not name a rating run'],
+      [`/inspections/${none}`, 'No inspection at this address'],
+      [`/studies/${none}`, 'No pump-around study at this address'],
+      [`/load-cases/${none}`, 'No load case at this address'],
+      [`/columns/${none}`, 'No column at this address'],
+    ];
+    for (const [path, title] of cases) {
+      await b.page.goto(`${FROTHLINE_URL}${path}`);
+      await b.page.locator('[data-test="record-missing"]').getByText(title).waitFor();
+    }
+    await shot(b.page, 'shell-record-missing');
+    // a section id that is not one of the column's sections: no blank form for a new section
+    await b.page.getByRole('link', { name: 'Columns' }).last().click();
+    await b.page.getByText('T-701', { exact: true }).first().click();
+    await b.page.waitForURL(/\/columns\/[0-9a-f-]{36}$/);
+    await b.page.goto(`${b.page.url()}/sections/${none}`);
+    await b.page.locator('[data-test="record-missing"]').getByText('No tray section at this address').waitFor();
+    expect(await b.page.getByLabel('Section name').count()).toBe(0);
+  });
 });
 
 describe('on a phone-sized screen (390 × 844)', () => {
