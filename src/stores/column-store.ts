@@ -1,6 +1,6 @@
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
-import { api } from '../boot/api';
+import { api, type RequestOptions } from '../boot/api';
 import type {
   ColumnDetail,
   CreateColumnBody,
@@ -20,10 +20,10 @@ export const useColumnStore = defineStore('column', () => {
   const column = ref<ColumnDetail | null>(null);
   const loading = ref(false);
 
-  async function load(id: string): Promise<ColumnDetail> {
+  async function load(id: string, opts?: RequestOptions): Promise<ColumnDetail> {
     loading.value = true;
     try {
-      column.value = await api.get<ColumnDetail>(`/columns/${id}`);
+      column.value = await api.get<ColumnDetail>(`/columns/${id}`, opts);
       return column.value;
     } finally {
       loading.value = false;
@@ -53,7 +53,7 @@ export const useColumnStore = defineStore('column', () => {
   const updateSection = (id: string, body: UpdateSectionBody) =>
     api.put<TraySectionRecord>(`/sections/${id}`, body, { quiet: true });
 
-  const loadCase = (id: string) => api.get<LoadCaseRecord>(`/load-cases/${id}`);
+  const loadCase = (id: string, opts?: RequestOptions) => api.get<LoadCaseRecord>(`/load-cases/${id}`, opts);
   const createLoadCase = (columnId: string, body: CreateLoadCaseBody) =>
     api.post<LoadCaseRecord>(`/columns/${columnId}/load-cases`, body, { quiet: true });
   const putLoads = (id: string, body: PutLoadsBody) => api.put<LoadCaseRecord>(`/load-cases/${id}/loads`, body, { quiet: true });

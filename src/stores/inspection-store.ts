@@ -1,6 +1,6 @@
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
-import { api } from '../boot/api';
+import { api, type RequestOptions } from '../boot/api';
 import type {
   AsFoundBody,
   AsFoundResult,
@@ -21,9 +21,9 @@ export const useInspectionStore = defineStore('inspection', () => {
 
   const list = async (columnId?: string) => (await api.get<{ items: InspectionSummary[] }>('/inspections', { query: { columnId } })).items;
   const create = (body: CreateInspectionBody) => api.post<InspectionRecord>('/inspections', body);
-  async function load(id: string): Promise<void> {
+  async function load(id: string, opts?: RequestOptions): Promise<void> {
     if (rec.value?.id !== id) rec.value = null; // never show another inspection under this address
-    rec.value = await api.get<InspectionRecord>(`/inspections/${id}`);
+    rec.value = await api.get<InspectionRecord>(`/inspections/${id}`, opts);
   }
   async function update(body: UpdateInspectionBody): Promise<void> {
     rec.value = await api.patch<InspectionRecord>(url(), body);

@@ -1,6 +1,6 @@
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
-import { api } from '../boot/api';
+import { api, type RequestOptions } from '../boot/api';
 import type { CreateRunBody, ReviewActionBody, RunComparison, RunRecord, RunWindow } from '../../shared/types/runs';
 import type { MethodsPayload } from '../../shared/types/methods';
 
@@ -10,8 +10,8 @@ export const useRunStore = defineStore('run', () => {
   const methods = ref<MethodsPayload | null>(null);
   const windows = new Map<string, RunWindow>();
 
-  async function load(id: string): Promise<RunRecord> {
-    run.value = await api.get<RunRecord>(`/runs/${id}`);
+  async function load(id: string, opts?: RequestOptions): Promise<RunRecord> {
+    run.value = await api.get<RunRecord>(`/runs/${id}`, opts);
     return run.value;
   }
   const create = (body: CreateRunBody) => api.post<RunRecord>('/runs', body);

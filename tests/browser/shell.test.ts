@@ -57,6 +57,7 @@ describe('client shell in Chromium', () => {
     for (const [path, title] of cases) {
       await b.page.goto(`${FROTHLINE_URL}${path}`);
       await b.page.locator('[data-test="record-missing"]').getByText(title).waitFor();
+      expect(await b.page.locator('.q-notification').count()).toBe(0); // the page says it; no toast as well
     }
     await shot(b.page, 'shell-record-missing');
     // a section id that is not one of the column's sections: no blank form for a new section
