@@ -32,6 +32,8 @@ export interface RequestOptions {
   body?: unknown;
   /** do not show a notification on failure (the caller shows the error itself) */
   quiet?: boolean;
+  /** do not show a notification for these statuses only (the caller shows them; others are notified) */
+  quietFor?: readonly number[];
 }
 
 /** An API error body in one line for people: the error, then up to `max` details with their fields in words. */
@@ -66,7 +68,7 @@ async function request<T>(method: string, url: string, opts: RequestOptions = {}
       const current = router?.currentRoute.value;
       if (router && current?.name !== 'sign-in')
         void router.push({ name: 'sign-in', query: { redirect: current?.fullPath } });
-    } else if (!opts.quiet) {
+    } else if (!opts.quiet && !opts.quietFor?.includes(res.status)) {
       Notify.create({ type: 'negative', message: describeApiError(body), multiLine: true });
     }
     throw new ApiError(res.status, body);

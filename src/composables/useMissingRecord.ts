@@ -1,19 +1,20 @@
 import { ref } from 'vue';
-import { Notify } from 'quasar';
-import { ApiError, describeApiError } from '../boot/api';
+import { ApiError, type RequestOptions } from '../boot/api';
 
 /** Why a record page has nothing to show: the API's refusal, or a record missing from what was loaded. */
 export type MissingRecord = { status: number; message: string };
 
-/**
- * A record page's main load, made with `QUIET` (the page, not a notification, tells the user). A record that
- * does not exist (404), an address that cannot name one (400) or one the user may not open (403) is kept in
- * `missing`, so the page says so instead of loading for ever; any other API failure is notified here and
- * thrown on.
- */
-/** Request options for a load made through `loading`. */
-export const QUIET = { quiet: true } as const;
+/** The statuses that mean a page's record cannot be shown: malformed address, not allowed, not there. */
+const MISSING_STATUSES = [400, 403, 404] as const;
 
+/** Request options for a page's main load: the page, not a notification, says the record is missing. */
+export const QUIET: RequestOptions = { quietFor: MISSING_STATUSES };
+
+/**
+ * A record page's main load, made with `QUIET`. A record that does not exist (404), an address that
+ * cannot name one (400) or one the user may not open (403) is kept in `missing`, so the page says so
+ * instead of loading for ever; any other failure is notified by the API client and thrown on.
+ */
 export function useMissingRecord() {
   const missing = ref<MissingRecord | null>(null);
 
@@ -22,11 +23,10 @@ export function useMissingRecord() {
     try {
       return await p;
     } catch (e) {
-      if (e instanceof ApiError && [400, 403, 404].includes(e.status)) {
+      if (e instanceof ApiError && (MISSING_STATUSES as readonly number[]).includes(e.status)) {
         missing.value = { status: e.status, message: e.body.error };
         return undefined;
       }
-      if (e instanceof ApiError && e.status !== 401) Notify.create({ type: 'negative', message: describeApiError(e.body), multiLine: true });
       throw e;
     }
   }

@@ -5,8 +5,8 @@
  * - Dry-out duty: closed form Q0 + λ·L_min over the trays above the zone (traffic.ts).
  * - Minimum-liquid and zone-overload duties: the lowest duty at which a watched check (checks.ts) goes
  *   over its limit as the duty rises, solved between Q_lo = min(base duty, sweep start, margin × dry-out
- *   duty) and the dry-out duty (scan.ts). Not reached before dry-out → null. A check already over at Q_lo that never clears
- *   limits at Q_lo.
+ *   duty) and the dry-out duty (scan.ts). Not reached before dry-out → null. A check already over at
+ *   Q_lo that never clears limits at Q_lo.
  * - Limiting duty: the lowest of the three. Recommended duty = min(margin × dry-out duty, highest duty
  *   with no watched check over), margin default 0.7 (common practice: tray-methods.md §9 knows no
  *   published rule); null when no duty in the range is free of watched limits.
