@@ -4,8 +4,11 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { ensureNodeModules } from './lib/deps.mjs';
 import { Cluster, ensurePostgres } from './lib/postgres.mjs';
+import { ensureSessionSecret } from './lib/secret.mjs';
 import { log, loadDotEnv, run, SERVER_NODE_OPTIONS, start, waitForPort } from './lib/util.mjs';
 
+const secret = ensureSessionSecret('.env');
+if (secret !== 'kept' && secret !== 'from the environment') log(`session-signing secret ${secret} in .env (JWT_SECRET, random)`);
 loadDotEnv();
 const env = process.env;
 const port = Number(env.PORT ?? 5180);

@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 // npm test: the same bootstrap as npm start with throwaway data on free ports, then every test.
 // Ends with the line "N passed, N failed" and a non-zero exit on any failure.
+import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { chromiumPath, ensureChromium, ensureNodeModules } from './lib/deps.mjs';
@@ -34,7 +35,7 @@ const env = {
   SMTP_PORT: String(smtpPort),
   S3_BUCKET: 'frothline-test',
   PORT: String(appPort),
-  JWT_SECRET: `test-${Math.random().toString(36).slice(2)}`,
+  JWT_SECRET: randomBytes(48).toString('base64url'),
   LOGIN_RATE_LIMIT: '1000',
   BCRYPT_ROUNDS: '10',
   CHROMIUM_PATH: chromiumPath,
