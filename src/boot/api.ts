@@ -53,12 +53,20 @@ async function request<T>(method: string, url: string, opts: RequestOptions = {}
       ).toString()
     : '';
   const isForm = opts.body instanceof FormData;
-  const res = await fetch(`/api${url}${qs}`, {
-    method,
-    credentials: 'same-origin',
-    headers: opts.body !== undefined && !isForm ? { 'Content-Type': 'application/json' } : undefined,
-    body: opts.body === undefined ? undefined : isForm ? (opts.body as FormData) : JSON.stringify(opts.body),
-  });
+  let res: Response;
+  try {
+    res = await fetch(`/api${url}${qs}`, {
+      method,
+      credentials: 'same-origin',
+      headers: opts.body !== undefined && !isForm ? { 'Content-Type': 'application/json' } : undefined,
+      body: opts.body === undefined ? undefined : isForm ? (opts.body as FormData) : JSON.stringify(opts.body),
+    });
+  } catch {
+    // no answer at all (offline, server down): say so rather than fail silently
+    const body: ApiErrorBody = { error: 'The server could not be reached. Check the connection and try again.' };
+    if (!opts.quiet) Notify.create({ type: 'negative', message: body.error, multiLine: true });
+    throw new ApiError(0, body);
+  }
   if (res.status === 204) return undefined as T;
   const data = (await res.json().catch(() => ({ error: `HTTP ${res.status}` }))) as unknown;
   if (!res.ok) {

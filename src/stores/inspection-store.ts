@@ -45,8 +45,8 @@ export const useInspectionStore = defineStore('inspection', () => {
     rec.value!.photos.push(p);
     return p;
   }
-  async function sign(who: 'inspector' | 'engineer'): Promise<void> {
-    rec.value = await api.post<InspectionRecord>(url(`/sign/${who}`), { version: rec.value!.version });
+  async function sign(who: 'inspector' | 'engineer', opts?: RequestOptions): Promise<void> {
+    rec.value = await api.post<InspectionRecord>(url(`/sign/${who}`), { version: rec.value!.version }, opts);
   }
   const asFound = (body: AsFoundBody) => api.post<AsFoundResult>(url('/as-found'), body);
   const photoUrl = (photoId: string, size: 'thumb' | 'original' = 'thumb') => `/api${url(`/photos/${photoId}`)}?size=${size}`;

@@ -79,6 +79,7 @@ describe('turnaround inspection on a tablet', () => {
     const p = b.page;
     await p.getByRole('tab', { name: 'Sign-off' }).click();
     await p.getByRole('button', { name: 'Sign as inspector' }).click();
+    await p.locator('.q-dialog').getByRole('button', { name: 'Sign', exact: true }).click();
     await p.locator('[data-test="signature-inspector"]').waitFor();
     await p.getByText('Signed records are read-only.', { exact: true }).waitFor();
     expect(await p.getByRole('button', { name: 'Sign as inspector' }).count()).toBe(0);
@@ -92,6 +93,7 @@ describe('turnaround inspection on a tablet', () => {
     await p.goto(inspectionUrl);
     await p.getByRole('tab', { name: 'Sign-off' }).click();
     await p.getByRole('button', { name: 'Countersign as engineer' }).click();
+    await p.locator('.q-dialog', { hasText: 'you have reviewed the tray records' }).getByRole('button', { name: 'Countersign', exact: true }).click();
     await p.locator('[data-test="signature-engineer"]').waitFor();
     await p.getByText('Signed off', { exact: true }).waitFor();
     await shot(p, 'inspection-engineer-signed');
