@@ -1,4 +1,4 @@
-import { ref } from 'vue';
+import { computed, ref } from 'vue';
 import { trayLoadSchema } from '../../shared/schemas/ratingRequest';
 import { QUANTITIES, convert, type QuantityId } from '../../shared/units';
 import type { TrayLoad } from '../../shared/types/rating';
@@ -42,6 +42,9 @@ export function useLoadGrid(system: UnitSystem) {
     ),
   );
   const rows = ref<string[][]>([]);
+  /** the rows as last loaded or saved (converted along with them), to tell unsaved edits */
+  const saved = ref<string[][]>([]);
+  const dirty = computed(() => JSON.stringify(rows.value) !== JSON.stringify(saved.value));
 
   function setLoads(loads: TrayLoad[]): void {
     rows.value = loads.map((l) =>
@@ -51,6 +54,7 @@ export function useLoadGrid(system: UnitSystem) {
         return c.quantity ? fmt(convert(c.quantity, v, QUANTITIES[c.quantity].siUnit, units.value[i]!)) : String(v);
       }),
     );
+    saved.value = rows.value.map((r) => [...r]);
   }
 
   /** Change a column's unit, converting the numbers already in it. */
@@ -58,7 +62,7 @@ export function useLoadGrid(system: UnitSystem) {
     const q = GRID_COLUMNS[col]?.quantity;
     const from = units.value[col];
     if (!q || !from) return;
-    for (const r of rows.value) {
+    for (const r of [...rows.value, ...saved.value]) {
       const n = Number(r[col]);
       if (r[col] !== '' && Number.isFinite(n)) r[col] = fmt(convert(q, n, from, unit));
     }
@@ -139,5 +143,5 @@ export function useLoadGrid(system: UnitSystem) {
     return { loads: [...loads].sort((a, b) => a.tray - b.tray), errors };
   }
 
-  return { units, rows, setLoads, setUnit, paste, addRow, removeRow, toLoads };
+  return { units, rows, dirty, setLoads, setUnit, paste, addRow, removeRow, toLoads };
 }
