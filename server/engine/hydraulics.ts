@@ -11,7 +11,7 @@ import {
 import { FAIR_ENTRAINMENT_DATA_SPAN, entrainedLiquidRate, fairEntrainmentOwnFit } from './entrainment.js';
 import {
   clearLiquidHeightBennett, dryTrayHeadK, dryTrayHeadKleinValve, dryTrayHeadOrifice, headToPascal,
-  kleinClosedBalanceVelocity, residualHeadBennett,
+  kleinClosedBalanceVelocity, kleinOpenBalanceVelocity, residualHeadBennett,
 } from './pressureDrop.js';
 import { eduljeeK2OwnFit, weepPointHoleVelocityEduljee, weepPointHoleVelocityFair } from './weeping.js';
 import { crestOverWeirFrancis, weirLoadingVolumetric } from './weir.js';
@@ -114,10 +114,12 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   let weepMethod: string;
   let uEdu = 0;
   let uFairWeep = 0;
+  let uValvesOpen = 0;
   if (p.trayType === 'moving-valve') {
     const v = p.valves;
-    uWeep = kleinClosedBalanceVelocity(v.legFactor, v.valveThickness_mm, v.materialDensity_kg_m3, p.closedK, rhoV);
+    uWeep = kleinClosedBalanceVelocity(v.legFactor, v.valveThickness_mm, v.materialDensity_kg_m3, p.closedK, rhoV, p.eddyLossCoefficient);
     weepMethod = kleinClosedBalanceVelocity.meta.id;
+    uValvesOpen = kleinOpenBalanceVelocity(uWeep, p.closedK, p.dryK);
   } else {
     uFairWeep = weepPointHoleVelocityFair({
       dryK: p.dryK, holeAreaRatio: p.holeAreaRatio, vapourDensity: rhoV, liquidDensity: rhoL,
@@ -169,6 +171,9 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     weepPointHoleVelocity_m_s: uWeep,
     weepPointEduljee_m_s: uEdu,
     weepPointFair_m_s: uFairWeep,
+    valvesStartOpenVelocity_m_s: p.trayType === 'moving-valve' ? uWeep : 0,
+    valvesAllOpenVelocity_m_s: uValvesOpen,
+    valvePartlyOpenDryHead_mm: balanceHead,
     turndownRatio: weepRatio,
     orificeCoefficient: p.orificeCoefficient,
     dryPressureDrop_mm: hd,

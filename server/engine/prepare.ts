@@ -5,7 +5,7 @@
  */
 import type { EngineWarning, FoamingClass, JetFloodMethod, MethodOptions, SectionGeometry, TrayType, ValveData } from '../../shared/types/rating.js';
 import { fairFloodCapacityLygerosMagoulas, fairHoleAreaCorrection, kisterHaasFloodCapacity } from './flooding.js';
-import { kleinClosedValveK, kleinOpenValveK, orificeCoefficientHughmarkOConnell } from './pressureDrop.js';
+import { kleinClosedValveK, kleinEddyLossCoefficient, kleinOpenValveK, orificeCoefficientHughmarkOConnell } from './pressureDrop.js';
 import { weepPointHoleVelocityEduljee } from './weeping.js';
 import { resolveLimits, type ResolvedLimits } from './limits.js';
 import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
@@ -35,8 +35,10 @@ export interface PreparedSection {
   /** dry-head coefficient K = h_d/(u_h² ρV/ρL) [s²·mm/m²] for sieve and fixed valves (open K for moving valves) */
   readonly dryK: number;
   readonly closedK: number;
-  /** R_vw t_v ρ_M (moving valves; divide by ρL for the balance head in mm) */
+  /** C_vw R_vw t_v ρ_M (moving valves; divide by ρL for the partly-open dry head in mm) */
   readonly balanceNumerator: number;
+  /** Klein's eddy loss coefficient C_vw (moving valves; 0 otherwise) */
+  readonly eddyLossCoefficient: number;
   /** moving-valve data (a zero placeholder for other tray types) */
   readonly valves: ValveData;
   readonly limits: ResolvedLimits;
@@ -81,6 +83,7 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
   let dryK: number;
   let closedK = 0;
   let balanceNumerator = 0;
+  let eddyLossCoefficient = 0;
   if (section.trayType === 'sieve') {
     if (section.orificeCoefficient !== undefined) {
       orificeCoefficient = section.orificeCoefficient;
@@ -101,7 +104,8 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
       const v = section.valves;
       if (!v) throw new Error('section.valves is required for moving-valve trays');
       closedK = kleinClosedValveK(v.orificeShape);
-      balanceNumerator = v.legFactor * v.valveThickness_mm * v.materialDensity_kg_m3;
+      eddyLossCoefficient = kleinEddyLossCoefficient(v.orificeShape);
+      balanceNumerator = eddyLossCoefficient * v.legFactor * v.valveThickness_mm * v.materialDensity_kg_m3;
     }
   }
   const v = section.valves;
@@ -144,6 +148,7 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
     dryK,
     closedK,
     balanceNumerator,
+    eddyLossCoefficient,
     valves: section.valves ?? NO_VALVES,
     limits,
     nearPercent: 100 * limits.nearFraction,

@@ -53,9 +53,12 @@ type Shape = 'flat' | 'venturi';
 const K_CLOSED: Record<Shape, number> = { flat: 0, venturi: 0 };
 const K_OPEN_VENTURI = { value: 0 };
 const K_OPEN_FLAT: { t: number; k: number }[] = [];
+/** Klein's eddy loss coefficient C_vw [-] (Ludwig Example 8-41: 1.3); read from the table below */
+const EDDY = { value: 0 };
 for (const row of kleinTable) {
   const shape = row.orificeShape as Shape;
-  if (row.coefficient === 'closed') K_CLOSED[shape] = row.K_si;
+  if (row.coefficient === 'eddy') EDDY.value = row.K_si;
+  else if (row.coefficient === 'closed') K_CLOSED[shape] = row.K_si;
   else if (shape === 'venturi') K_OPEN_VENTURI.value = row.K_si;
   else if (row.deckThickness_mm !== null) K_OPEN_FLAT.push({ t: row.deckThickness_mm, k: row.K_si });
 }
@@ -128,37 +131,111 @@ export const dryTrayHeadK = method(
   },
 );
 
-/** Klein balance (partly open) head R_vw t_v ρ_M/ρL [mm] (Perry 8th Sec. 14 form, recalled). Example: 1.25, 1.5, 8000, 700 → 21.4 mm. */
-export function kleinBalanceHead(legFactor: number, valveThickness_mm: number, metalDensity: number, liquidDensity: number): number {
-  return (legFactor * valveThickness_mm * metalDensity) / liquidDensity;
-}
+/**
+ * Klein's eddy loss coefficient C_vw [-] of the valve force balance (Ludwig Vol. 2 3rd ed. p. 208
+ * nomenclature, "C_vw = eddy loss coefficient, dimensionless, Table 8-22", and Example 8-41, which uses
+ * C_vw = 1.3 for a venturi-orifice valve; seen). The rectangular-orifice value of Table 8-22 was not
+ * seen: 1.3 is used for both orifice shapes. Perry's 8th ed. eq. (14-104) lists no C_vw, i.e. it is
+ * the same balance with C_vw = 1 (about 12 % lower opening velocity: non-conservative for weeping).
+ */
+export const kleinEddyLossCoefficient = method(
+  'kleinEddyLossCoefficient',
+  function kleinEddyLossCoefficient(_orificeShape: Shape): number {
+    return EDDY.value;
+  },
+  {
+    label: 'Klein eddy loss coefficient C_vw',
+    source: 'Ludwig, Applied Process Design Vol. 2 3rd ed. p. 208 and Example 8-41 (C_vw = 1.3, printed for a venturi-orifice valve and applied here to rectangular orifices as well), after Klein, Chem. Eng. May 3 1982 p. 81',
+    equation: 'C_vw = 1.3',
+    provenance: 'seen',
+    ranges: {},
+  },
+);
 
 /**
- * Hole velocity at which moving valves start to open (closed-valve balance point, Klein point A):
- *   U_h,closed = [R_vw t_v ρ_M/(K_c ρV)]^0.5   [m/s]
- * Source: Klein, Chem. Eng., May 3 1982, p. 81, as in Perry 8th ed. Sec. 14 (form recalled; derived by
- * equating the closed and balance branches). Example: R_vw 1.25, t_v 1.5 mm, ρ_M 8000, K_c 1682,
- * ρV 3 → 1.72 m/s.
+ * Dry head while the valves are partly open (between Klein's balance points A and B): the valve
+ * weight per unit orifice area, as liquid head, times the eddy loss coefficient:
+ *   h_d = C_vw R_vw t_v ρ_M/ρL   [mm]
+ * Source: Klein (1982) as in Ludwig Vol. 2 3rd ed. (variables and C_vw seen, eq. 8-311 context); the
+ * form follows from the printed balance-point velocity (continuity with the closed branch at point A,
+ * derived). Perry's 8th ed. form is the same without C_vw.
+ * @param legFactor R_vw [-]; @param valveThickness_mm t_v [mm]; @param metalDensity ρ_M [kg/m³]
+ * @param liquidDensity ρL [kg/m³]; @param eddyLossCoefficient C_vw [-]
+ * @returns h_d [mm liquid]. Example: Ludwig Example 8-41 inputs (t_v 0.060 in, R_vw 1.45, C_vw 1.3,
+ * ρ_M 490, ρL 31.0 lb/ft³) → 45.4 mm = 1.79 in (computed here; not a printed answer).
+ */
+export const kleinBalanceHead = method(
+  'kleinBalanceHead',
+  function kleinBalanceHead(legFactor: number, valveThickness_mm: number, metalDensity: number, liquidDensity: number, eddyLossCoefficient: number): number {
+    return (eddyLossCoefficient * legFactor * valveThickness_mm * metalDensity) / liquidDensity;
+  },
+  {
+    label: 'Klein partly-open valve dry head',
+    source: 'Klein, Chem. Eng. May 3 1982 p. 81, as in Ludwig, Applied Process Design Vol. 2 3rd ed. pp. 208-210 (with the eddy loss coefficient C_vw)',
+    equation: 'h_d = C_vw R_vw t_v rhoM/rhoL',
+    provenance: 'derived',
+    ranges: {},
+  },
+);
+
+/**
+ * Hole velocity at which moving valves start to open (closed balance point, Klein's point A):
+ *   U_h,A = [t_v R_vw (C_vw/K_c) (ρ_M/ρV)]^0.5   [m/s]
+ * Source: Ludwig, Applied Process Design Vol. 2 3rd ed. Example 8-41 (after Klein 1982; seen), English
+ * units there (t_v in, K_c s²·in/ft², ft/s); in SI with t_v in mm and K_c in s²·mm/m² the same form
+ * gives m/s. Perry's 8th ed. eq. (14-104) prints it without C_vw (that is C_vw = 1).
+ * @param legFactor R_vw [-] (about 1.1–1.5 legged, 1.0 caged); @param valveThickness_mm t_v [mm]
+ * @param metalDensity ρ_M [kg/m³] (steel ≈ 7850–8000); @param closedK K_c [s²·mm/m²]
+ * @param vapourDensity ρV [kg/m³]; @param eddyLossCoefficient C_vw [-]
+ * @returns U_h,A on the deck-orifice area [m/s].
+ * Example: Ludwig Example 8-41, venturi valve, t_v 0.060 in, R_vw 1.45, C_vw 1.3, K_c 3.077,
+ * ρ_M 490, ρV 1.91 lb/ft³ → 3.07 ft/s (printed: 3.06 ft/s).
  */
 export const kleinClosedBalanceVelocity = method(
   'kleinClosedBalanceVelocity',
-  function kleinClosedBalanceVelocity(legFactor: number, valveThickness_mm: number, metalDensity: number, closedK: number, vapourDensity: number): number {
-    return Math.sqrt((legFactor * valveThickness_mm * metalDensity) / (closedK * vapourDensity));
+  function kleinClosedBalanceVelocity(
+    legFactor: number,
+    valveThickness_mm: number,
+    metalDensity: number,
+    closedK: number,
+    vapourDensity: number,
+    eddyLossCoefficient: number,
+  ): number {
+    return Math.sqrt((eddyLossCoefficient * legFactor * valveThickness_mm * metalDensity) / (closedK * vapourDensity));
   },
   {
-    label: 'Klein closed-valve balance point',
-    source: "Klein, Chem. Eng. May 3 1982 p. 81; Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 [form from memory]",
-    equation: 'U_closed = [Rvw tv rhoM/(Kc rhoV)]^0.5',
-    provenance: 'recalled',
+    label: 'Klein closed-valve balance point (valves start to open)',
+    source: "Klein, Chem. Eng. May 3 1982 p. 81, as printed in Ludwig, Applied Process Design Vol. 2 3rd ed. Example 8-41; Perry's Chemical Engineers' Handbook 8th ed. eq. (14-104) gives the same balance without C_vw",
+    equation: 'U_A = [t_v R_vw (C_vw/Kc) (rhoM/rhoV)]^0.5',
+    provenance: 'seen',
+    ranges: {},
+  },
+);
+
+/**
+ * Hole velocity at which all valves are open (Klein's point B): U_h,B = U_h,A (K_c/K_o)^0.5 [m/s]
+ * (Ludwig Vol. 2 3rd ed. Example 8-41, after Klein 1982; seen; Perry's 8th ed. eq. 14-105 form).
+ * Example: Ludwig Example 8-41, 3.06 ft/s, K_c 3.077, K_o 0.448 (venturi) → 8.02 ft/s (printed: 8.01 ft/s).
+ */
+export const kleinOpenBalanceVelocity = method(
+  'kleinOpenBalanceVelocity',
+  function kleinOpenBalanceVelocity(closedBalanceVelocity_m_s: number, closedK: number, openK: number): number {
+    return closedBalanceVelocity_m_s * Math.sqrt(closedK / openK);
+  },
+  {
+    label: 'Klein open-valve balance point (all valves open)',
+    source: "Klein, Chem. Eng. May 3 1982 p. 81, as printed in Ludwig, Applied Process Design Vol. 2 3rd ed. Example 8-41; Perry's Chemical Engineers' Handbook 8th ed. Sec. 14",
+    equation: 'U_B = U_A (Kc/Ko)^0.5',
+    provenance: 'seen',
     ranges: {},
   },
 );
 
 /**
  * Moving-valve dry head, Klein (1982) after Bolles (1976): closed branch K_c, balance branch
- * R_vw t_v ρ_M/ρL while the valves open, open branch K_o (continuous at both break points).
- * @returns h_d [mm liquid]. Example: R_vw 1.25, t_v 1.5 mm, ρ_M 8000, ρV 3, ρL 700, flat 12 ga:
- * 3 m/s → 21.4 mm (balance); 1 m/s → 7.2 mm (closed); 6 m/s → 39.2 mm (open).
+ * C_vw R_vw t_v ρ_M/ρL while the valves open, open branch K_o (continuous at both break points).
+ * @returns h_d [mm liquid]. Example: R_vw 1.25, t_v 1.5 mm, ρ_M 8000, C_vw 1.3, ρV 3, ρL 700, flat
+ * 12 ga: balance 27.9 mm; 1 m/s → 7.2 mm (closed); 3 m/s → 27.9 mm (partly open); 6 m/s → 39.2 mm (open).
  */
 export const dryTrayHeadKleinValve = method(
   'dryTrayHeadKleinValve',
@@ -178,9 +255,9 @@ export const dryTrayHeadKleinValve = method(
   },
   {
     label: 'Klein moving-valve dry pressure drop',
-    source: 'Klein, Chem. Eng. May 3 1982 p. 81; Bolles, CEP 72(9) 43 (1976); Ludwig Vol. 2 3rd ed. Table 8-23',
-    equation: 'closed Kc rhoV/rhoL U^2; balance Rvw tv rhoM/rhoL; open Ko rhoV/rhoL U^2',
-    provenance: 'recalled',
+    source: 'Klein, Chem. Eng. May 3 1982 p. 81; Bolles, CEP 72(9) 43 (1976); Ludwig, Applied Process Design Vol. 2 3rd ed. pp. 208-210, Table 8-23',
+    equation: 'closed Kc rhoV/rhoL U^2; partly open C_vw Rvw tv rhoM/rhoL; open Ko rhoV/rhoL U^2',
+    provenance: 'seen',
     ranges: {},
   },
 );

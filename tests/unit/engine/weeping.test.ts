@@ -47,8 +47,12 @@ describe('Fair weep criterion (h_d + h_σ = h_L)', () => {
 });
 
 describe('Klein closed-valve balance point', () => {
-  it('reproduces the reference-sheet example (derived from Klein 1982 as in Perry 8th)', () => {
+  it('reproduces the reference-sheet example (derived from Klein 1982 as in Perry 8th) and its C_vw correction', () => {
     // reference sheet §5.6 [derived]: R_vw 1.25, t_v 1.5 mm, ρ_M 8000, flat orifice K_c (Ludwig Table 8-23), ρV 3 → 1.72 m/s
-    expect(Math.abs(rel(kleinClosedBalanceVelocity(1.25, 1.5, 8000, kleinClosedValveK('flat'), 3), 1.72))).toBeLessThan(0.01);
+    // without the eddy loss coefficient (Perry's form, C_vw = 1) ...
+    expect(Math.abs(rel(kleinClosedBalanceVelocity(1.25, 1.5, 8000, kleinClosedValveK('flat'), 3, 1), 1.72))).toBeLessThan(0.01);
+    // ... and 1.72 × 1.3^0.5 = 1.96 m/s with C_vw = 1.3 as printed in Ludwig Vol. 2 3rd ed. Example 8-41 (derived);
+    // the printed example itself is reproduced in kleinValve.test.ts
+    expect(Math.abs(rel(kleinClosedBalanceVelocity(1.25, 1.5, 8000, kleinClosedValveK('flat'), 3, 1.3), 1.961))).toBeLessThan(0.01);
   });
 });

@@ -1,0 +1,55 @@
+/**
+ * Stored runs keep the engine version that rated them: a run stored by an earlier engine (0.2.0, in the
+ * FRB2 results layout of that time) still opens, exports, and says which engine version rated it.
+ */
+import { readFileSync } from 'node:fs';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ENGINE_VERSION } from '../../server/engine/index.js';
+import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
+import { loads, makePlant, section, type Plant } from './columnsFixture.js';
+
+const frb2 = JSON.parse(readFileSync(new URL('../fixtures/run-results-frb2.json', import.meta.url), 'utf8')) as {
+  stored: string;
+  results: { engineVersion: string; trays: { tray: number }[] };
+};
+
+let ctx: TestContext;
+let plant: Plant;
+
+beforeAll(async () => {
+  ctx = await setupApp();
+  plant = await makePlant(ctx.ds);
+});
+afterAll(() => ctx.close());
+
+describe('runs rated by an earlier engine version', () => {
+  it('still open and report the version that rated them, beside runs of the current version', async () => {
+    const { agent: specialist } = await signedIn(ctx, 'internals-specialist', [plant.siteId]);
+    const { agent: engineer } = await signedIn(ctx, 'process-engineer', [plant.siteId]);
+    expect((await specialist.post(`/api/columns/${plant.columnId}/sections`).send(section(1, 8, 'Top'))).status).toBe(201);
+    const lc = (await engineer.post(`/api/columns/${plant.columnId}/load-cases`)
+      .send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 8) })).body.id;
+    const current = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Current' })).body;
+    const old = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Old' })).body;
+    expect(frb2.results.engineVersion).toBe('0.2.0');
+    expect(ENGINE_VERSION).not.toBe('0.2.0');
+    // make the second row what engine 0.2.0 stored: its version and its results bytes as written then
+    await ctx.ds.query('UPDATE rating_runs SET engine_version = $1, results = $2 WHERE id = $3', [
+      '0.2.0', Buffer.from(frb2.stored, 'base64'), old.id,
+    ]);
+
+    const a = await engineer.get(`/api/runs/${current.id}`);
+    expect(a.status).toBe(200);
+    expect(a.body.engineVersion).toBe(ENGINE_VERSION);
+    const b = await engineer.get(`/api/runs/${old.id}`);
+    expect(b.status).toBe(200);
+    expect(b.body.engineVersion).toBe('0.2.0');
+    expect(b.body.results.trays.map((t: { tray: number }) => t.tray)).toEqual(frb2.results.trays.map((t) => t.tray));
+    const csv = await engineer.get(`/api/runs/${old.id}/export?format=csv`);
+    expect(csv.status).toBe(200);
+    expect(csv.text).toMatch(/engine 0\.2\.0/);
+    const list = await engineer.get(`/api/columns/${plant.columnId}`);
+    expect(list.status).toBe(200);
+    expect(list.body.runs.map((r: { id: string }) => r.id)).toEqual(expect.arrayContaining([current.id, old.id]));
+  });
+});
