@@ -17,8 +17,8 @@ export interface StudyForm {
   to: number | null;
   steps: number | null;
   margin: number | null;
-  /** the load case's zone liquid already carries the circulation */
-  zoneIncludesCirculation: boolean;
+  /** the load case's zone liquid already carries the circulation; null until the user chooses (no default) */
+  zoneIncludesCirculation: boolean | null;
 }
 
 type Units = UnitsLike & { enter: (q: QuantityId, v: number) => number };
@@ -41,7 +41,7 @@ export function studyFormFrom(s: StudyRecord | null, units: UnitsLike): StudyFor
     to: show('duty', r?.sweep.toDuty_kW),
     steps: r?.sweep.steps ?? 40,
     margin: r?.margin ?? 0.7,
-    zoneIncludesCirculation: r?.zoneLiquidIncludesCirculation ?? false,
+    zoneIncludesCirculation: r?.zoneLiquidIncludesCirculation ?? null,
   };
 }
 
@@ -59,7 +59,7 @@ export function studyBody(f: StudyForm, units: Units): CreateStudyBody {
     circulation_kg_h: f.mode === 'circulation' ? si('massFlow', f.circulation) : undefined,
     sweep: { fromDuty_kW: si('duty', f.from), toDuty_kW: si('duty', f.to), steps: f.steps ?? undefined },
     margin: f.margin ?? undefined,
-    zoneLiquidIncludesCirculation: f.zoneIncludesCirculation,
+    zoneLiquidIncludesCirculation: f.zoneIncludesCirculation ?? undefined,
   };
   return JSON.parse(JSON.stringify(body)) as CreateStudyBody;
 }

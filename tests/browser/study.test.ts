@@ -147,9 +147,8 @@ describe('pump-around study page in Chromium', () => {
     await b.page.getByRole('button', { name: 'Run and save the study' }).click();
     // the server's error for latentHeat_kJ_kg is shown at the λ field itself
     await b.page.locator('.q-field--error').filter({ hasText: 'Latent heat λ' }).getByText('is required').waitFor();
-    expect(await b.page.getByRole('checkbox', { name: /already includes the circulation/ }).getAttribute('aria-checked')).toBe(
-      'true',
-    );
+    // the copy keeps the earlier study's answer to the zone-liquid question
+    expect(await b.page.getByRole('radio', { name: /Yes: it includes the circulation/ }).getAttribute('aria-checked')).toBe('true');
     await b.page.waitForTimeout(400); // let the field's error message finish its entrance
     await shot(b.page, 'study-new-error');
     await lambda.fill(value);
