@@ -46,3 +46,12 @@ export function can(role: Role | null | undefined, permission: Permission): bool
   if (!role) return false;
   return PERMISSION_MATRIX[role].includes(permission);
 }
+
+/**
+ * What a column's engineer must hold: who may be assigned as a column's engineer and countersign its
+ * inspections (besides seeing the column's site). Process engineers and internals specialists hold it.
+ */
+export const COLUMN_ENGINEER_PERMISSION: Permission = 'ratings.run';
+
+/** The roles that hold a permission. */
+export const rolesWith = (permission: Permission): Role[] => ROLES.filter((r) => can(r, permission));

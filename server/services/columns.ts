@@ -4,6 +4,7 @@ import { ProcessUnit, Site, TowerColumn } from '../db/entities/index.js';
 import { ConflictError, NotFoundError, ValidationError } from '../errors.js';
 import { siteFilterSql } from './access.js';
 import { audit } from './audit.js';
+import { assertColumnEngineer } from './columnEngineer.js';
 import { assertVersion, iso, visibleColumn } from './columnsCommon.js';
 import { listLoadCaseSummaries } from './loadsRead.js';
 import { listPumpArounds } from './sectionsPumpArounds.js';
@@ -95,6 +96,7 @@ export async function createColumn(ds: DataSource, user: SessionUser, body: Crea
     }
     checkMarks(body.trayMarks, body.trayCount);
     await assertTagFree(em, body.unitId, body.tag);
+    await assertColumnEngineer(em, body.engineerId, unit.siteId);
     const col = await em.save(
       TowerColumn,
       em.create(TowerColumn, {
@@ -152,6 +154,10 @@ export async function updateColumn(ds: DataSource, user: SessionUser, id: string
     checkMarks(body.trayMarks ?? col.trayMarks, trayCount);
     await assertRenumberable(em, col, body);
     if (body.tag !== undefined) await assertTagFree(em, col.unitId, body.tag, id);
+    if (body.engineerId !== undefined && body.engineerId !== col.engineerId) {
+      const unit = await em.findOneByOrFail(ProcessUnit, { id: col.unitId });
+      await assertColumnEngineer(em, body.engineerId, unit.siteId);
+    }
     const { version: _v, ...changes } = body;
     Object.assign(col, changes);
     await em.save(TowerColumn, col);

@@ -1,21 +1,22 @@
 /**
  * Sign-off: the inspector signs first, then the column's engineer (columns.engineer_id, or — when none
- * is set — any process engineer or internals specialist with access to the site). Signing queues an
- * e-mail notice in the same transaction; delivery happens later, so a mail failure never loses a signature.
+ * is set — any process engineer or internals specialist with access to the site). The countersigner is
+ * never the inspector who signed, and holds COLUMN_ENGINEER_PERMISSION at the time of signing. Signing
+ * queues an e-mail notice in the same transaction; delivery happens later, so a mail failure never loses a
+ * signature.
  */
 import type { DataSource, EntityManager } from 'typeorm';
 import { Inspection } from '../db/entities/Inspection.js';
 import { ConflictError, ForbiddenError } from '../errors.js';
 import { queueNotice, userEmail } from '../mail/outbox.js';
 import { audit } from './audit.js';
+import { engineerRoleNames } from './columnEngineer.js';
 import { assertVersion } from './columnsCommon.js';
 import { toInspectionRecord } from './inspectionRead.js';
 import { visibleInspection } from './inspections.js';
-import { can } from '../../shared/permissions.js';
+import { can, COLUMN_ENGINEER_PERMISSION, rolesWith } from '../../shared/permissions.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { InspectionRecord, SignatureRecord } from '../../shared/types/inspections.js';
-
-const ENGINEER_ROLES = ['process-engineer', 'internals-specialist'];
 
 const signature = (u: SessionUser): SignatureRecord => ({ userId: u.id, name: u.name, role: u.role, at: new Date().toISOString() });
 
@@ -34,7 +35,7 @@ async function engineerEmails(em: EntityManager, engineerId: string | null, site
   }
   const rows = (await em.query(
     `SELECT u.email FROM users u JOIN site_members m ON m.user_id = u.id WHERE m.site_id = $1 AND u.active AND u.role = ANY($2)`,
-    [siteId, ENGINEER_ROLES],
+    [siteId, rolesWith(COLUMN_ENGINEER_PERMISSION)],
   )) as { email: string }[];
   return rows.map((r) => r.email);
 }
@@ -78,9 +79,11 @@ export async function signAsEngineer(ds: DataSource, user: SessionUser, id: stri
   return ds.transaction(async (em) => {
     const insp = await visibleInspection(em, user, id, true);
     const col = await columnInfo(em, insp.columnId);
-    const allowed = col.engineerId ? col.engineerId === user.id : ENGINEER_ROLES.includes(user.role);
-    if (!allowed)
-      throw new ForbiddenError(col.engineerId ? `Only the engineer of ${col.tag} may countersign` : 'Only a process engineer or internals specialist may countersign');
+    if (col.engineerId && col.engineerId !== user.id) throw new ForbiddenError(`Only the engineer of ${col.tag} may countersign`);
+    if (!can(user.role, COLUMN_ENGINEER_PERMISSION))
+      throw new ForbiddenError(`Only a ${engineerRoleNames()} may countersign; your role does not allow it`);
+    if (user.id === insp.inspectorId || user.id === insp.inspectorSignature?.userId)
+      throw new ForbiddenError('You signed this inspection as its inspector; another engineer must countersign it');
     if (insp.status !== 'inspector-signed')
       throw new ConflictError(insp.status === 'draft' ? 'The inspector signs first' : 'This inspection is already signed by the engineer');
     assertVersion('inspection', insp.version, version);
