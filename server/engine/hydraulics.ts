@@ -16,6 +16,7 @@ import {
 import { eduljeeK2OwnFit, weepPointHoleVelocityEduljee, weepPointHoleVelocityFair } from './weeping.js';
 import { crestOverWeirFrancis, weirLoadingVolumetric } from './weir.js';
 import { apronHeadLoss, downcomerBackupClear, downcomerInletVelocity, downcomerResidenceTimeApparent, downcomerSealKister } from './downcomer.js';
+import { passHydraulics } from './multipass.js';
 import { REPORT_CAP, S_PER_H, finiteOrCap, safeNumber } from './units.js';
 import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
 
@@ -193,6 +194,12 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     entrainedLiquid_kg_h: entrained,
     totalPressureDrop_Pa: headToPascal(hT, rhoL),
   };
+  if (p.passLayout) {
+    passHydraulics(p.passLayout, tray, {
+      liquid_m3_s: qL, trayHead_mm: hT, weirHeight_mm: p.weirHeight_mm, clearance_mm: p.clearance_mm, traySpacing_mm: p.traySpacing_mm,
+      bottomOverTop: p.downcomerBottomArea / p.downcomerTopArea, aerationFactor: p.limits.aerationFactor,
+    }, details);
+  }
   // Safety net: every reported number finite (extreme but schema-valid inputs can overflow a power law).
   if (!allFinite(details)) for (const k in details) details[k] = safeNumber(details[k]!);
   return { details, percentFlood: pctFlood, floodMethod: useKH ? KH.id : FAIR.id, weepRatio, weepMethod, dryMethod };

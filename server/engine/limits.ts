@@ -47,6 +47,7 @@ export const DEFAULT_LIMITS = Object.freeze({
   liquidLoad: tableLimit('liquidLoad'),
   downcomerBackup: tableLimit('downcomerBackup'),
   downcomerSeal: tableLimit('downcomerSeal'),
+  passImbalance: tableLimit('passImbalance'),
   nearFraction: tableLimit('nearFraction'),
 });
 
@@ -64,6 +65,8 @@ export interface ResolvedLimits {
   downcomerInletVelocity: number;
   downcomerResidenceTime: number;
   downcomerSeal: number;
+  /** multipass trays: largest pass L/V departure [%] (a section warning, not a per-tray check) */
+  passImbalance: number;
   nearFraction: number;
   aerationFactor: number;
 }
@@ -85,6 +88,7 @@ export function resolveLimits(foaming: FoamingClass, methods: MethodOptions | un
     downcomerInletVelocity: o.downcomerInletVelocity ?? fc.inletVelocityLimit_m_s,
     downcomerResidenceTime: o.downcomerResidenceTime ?? fc.residenceTimeMin_s,
     downcomerSeal: o.downcomerSeal ?? DEFAULT_LIMITS.downcomerSeal,
+    passImbalance: DEFAULT_LIMITS.passImbalance,
     nearFraction: methods?.nearFraction ?? DEFAULT_LIMITS.nearFraction,
     aerationFactor: fc.downcomerAerationFactor,
   };

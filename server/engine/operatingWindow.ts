@@ -7,6 +7,7 @@ import { prepareSection, type PreparedSection } from './prepare.js';
 import { trayHydraulics, type Hydraulics } from './hydraulics.js';
 import { solveIncreasing } from './solve.js';
 import { weirLoadingForCrestFrancis } from './weir.js';
+import { passLimitSizes } from './multipass.js';
 import { S_PER_H } from './units.js';
 
 export interface OperatingWindowOptions {
@@ -37,10 +38,12 @@ export function operatingWindow(
   const lim = p.limits;
   const rhoL = load.liquidDensity_kg_m3;
   const n = Math.max(2, options.points ?? 21);
-  const liquidAtWeirLoading = (w: number): number => (w * p.weirLength * rhoL); // m³/(h·m) × m × kg/m³ = kg/h
-  const lMinWeir = liquidAtWeirLoading(weirLoadingForCrestFrancis(lim.liquidLoad));
-  const lMaxWeir = liquidAtWeirLoading(lim.weirLoading);
-  const lInlet = lim.downcomerInletVelocity * p.downcomerTopArea * rhoL * S_PER_H;
+  // multipass layout: the lines where the worst pass reaches each limit
+  const sizes = p.passLayout ? passLimitSizes(p.passLayout, load.tray) : undefined;
+  const liquidAtWeirLoading = (w: number, weir: number): number => (w * weir * rhoL); // m³/(h·m) × m × kg/m³ = kg/h
+  const lMinWeir = liquidAtWeirLoading(weirLoadingForCrestFrancis(lim.liquidLoad), sizes?.minCrestWeir_m ?? p.weirLength);
+  const lMaxWeir = liquidAtWeirLoading(lim.weirLoading, sizes?.maxLoadingWeir_m ?? p.weirLength);
+  const lInlet = lim.downcomerInletVelocity * (sizes?.inletArea_m2 ?? p.downcomerTopArea) * rhoL * S_PER_H;
   const lMax = 1.25 * Math.max(load.liquidMassFlow_kg_h, lMaxWeir, lInlet);
   const guess = Math.max(load.vapourMassFlow_kg_h, 1);
 

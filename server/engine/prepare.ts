@@ -9,11 +9,15 @@ import { kleinClosedValveK, kleinEddyLossCoefficient, kleinOpenValveK, orificeCo
 import { weepPointHoleVelocityEduljee } from './weeping.js';
 import { resolveLimits, type ResolvedLimits } from './limits.js';
 import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
+import { preparePasses, type PreparedPasses } from './multipass.js';
+import { MIN_FLOW_PATH_M, passesWarning } from '../../shared/passes.js';
 
 export interface PreparedSection {
   readonly section: SectionGeometry;
   readonly trayType: TrayType;
   readonly passes: number;
+  /** two- and four-pass trays with a pass layout: pass panels, downcomers and liquid split */
+  readonly passLayout: PreparedPasses | undefined;
   readonly jetMethod: JetFloodMethod;
   readonly traySpacing_mm: number;
   readonly weirHeight_mm: number;
@@ -123,11 +127,14 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
   if (section.downcomerBottomArea_m2 > section.downcomerTopArea_m2 * 1.001) {
     w.push(warning(WARNING_CODES.downcomerBottomLarger, 'downcomer bottom area exceeds its top area; check the downcomer geometry.'));
   }
+  const passLayout = preparePasses(section);
+  passWarnings(w, section, passLayout, limits.passImbalance);
   const apron = Math.min((section.downcomerClearance_mm / 1000) * section.outletWeirLength_m, section.downcomerBottomArea_m2);
   return {
     section,
     trayType: section.trayType,
     passes: section.passes,
+    passLayout,
     jetMethod,
     traySpacing_mm: ts,
     weirHeight_mm: section.weirHeight_mm,
@@ -154,4 +161,34 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
     nearPercent: 100 * limits.nearFraction,
     sectionWarnings: w,
   };
+}
+
+/** Section warnings of a multipass tray: passes for the diameter, short flow paths, imbalance, layout against the totals. */
+function passWarnings(w: EngineWarning[], s: SectionGeometry, pp: PreparedPasses | undefined, imbalanceLimit: number): void {
+  const forDiameter = passesWarning(s.passes, s.columnDiameter_m);
+  if (forDiameter) w.push(warning(WARNING_CODES.passesForDiameter, `${forDiameter}.`));
+  if (!pp) return;
+  const shortest = Math.min(...pp.odd.panels.map((p) => p.flowPathLength));
+  if (shortest < MIN_FLOW_PATH_M) {
+    w.push(warning(WARNING_CODES.passFlowPathShort,
+      `shortest flow path ${formatNumber(shortest * 1000)} mm is under about ${MIN_FLOW_PATH_M * 1000} mm (Kister, Distillation Design, 1992, §6.5): consider fewer passes.`));
+  }
+  if (pp.imbalance_percent > imbalanceLimit) {
+    w.push(warning(WARNING_CODES.passImbalance,
+      `pass L/V imbalance ${formatNumber(pp.imbalance_percent)} % exceeds ${imbalanceLimit} % (vapour shared by bubbling area): the liquid split does not match the pass areas, which costs efficiency and loads one pass early.`));
+  }
+  const mismatch: string[] = [];
+  for (const t of [pp.odd, pp.even]) {
+    const area = t.downcomers.reduce((a, d) => a + d.area, 0);
+    const weir = t.panels.reduce((a, p) => a + p.weirLength, 0);
+    const name = t.outlets === 'side' ? 'trays draining to the side downcomers' : 'the other trays';
+    if (Math.abs(area / s.downcomerTopArea_m2 - 1) > 0.1)
+      mismatch.push(`downcomer top area ${formatNumber(area)} m² for ${name} (entered ${formatNumber(s.downcomerTopArea_m2)} m²)`);
+    if (Math.abs(weir / s.outletWeirLength_m - 1) > 0.1)
+      mismatch.push(`outlet weir length ${formatNumber(weir)} m for ${name} (entered ${formatNumber(s.outletWeirLength_m)} m)`);
+  }
+  if (mismatch.length > 0) {
+    w.push(warning(WARNING_CODES.passLayoutMismatch,
+      `the pass layout gives ${mismatch.join('; ')}, more than 10 % from the section totals: per-pass results use the layout, tray totals the entered values.`));
+  }
 }

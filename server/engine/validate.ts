@@ -4,7 +4,7 @@
  */
 import { Ajv, type ErrorObject } from 'ajv';
 import { ratingRequestSchema } from '../../shared/schemas/ratingRequest.js';
-import type { RatingRequest } from '../../shared/types/rating.js';
+import type { RatingRequest, SectionGeometry } from '../../shared/types/rating.js';
 
 export interface FieldError {
   path: string;
@@ -63,6 +63,7 @@ export function physicsErrors(req: RatingRequest): FieldError[] {
   if (s.outletWeirLength_m > s.passes * s.columnDiameter_m * 1.001) {
     add('/section/outletWeirLength_m', `outlet weir length (${s.outletWeirLength_m} m) exceeds ${s.passes} pass(es) × column diameter (${s.columnDiameter_m} m)`);
   }
+  passLayoutErrors(s, add);
   if (s.trayType === 'moving-valve' && !s.valves) add('/section/valves', 'is required for moving-valve trays (count, orifice diameter, valve thickness, material density, leg factor, orifice shape)');
   const seen = new Map<number, number>();
   req.trays.forEach((t, i) => {
@@ -76,6 +77,45 @@ export function physicsErrors(req: RatingRequest): FieldError[] {
   });
   return errors;
 }
+
+/** A pass layout must fit the column: every panel of positive width, one split entry per pass summing to 1. */
+function passLayoutErrors(s: SectionGeometry, add: (path: string, message: string) => void): void {
+  const l = s.passLayout;
+  if (!l) return;
+  const at = '/section/passLayout';
+  if (s.passes === 1) {
+    add(at, 'applies to two- and four-pass trays only (passes is 1)');
+    return;
+  }
+  const r = (s.columnDiameter_m * 1000) / 2;
+  const edge = r - l.sideDowncomerWidth_mm;
+  const half = l.centreDowncomerWidth_mm / 2;
+  if (edge <= half) {
+    add(`${at}/centreDowncomerWidth_mm`,
+      `side downcomers (${l.sideDowncomerWidth_mm} mm each) and the centre downcomer (${l.centreDowncomerWidth_mm} mm) leave no tray deck in a ${s.columnDiameter_m} m column`);
+  }
+  if (s.passes === 4) {
+    const w = l.offCentreDowncomerWidth_mm;
+    const x = l.offCentreDowncomerOffset_mm;
+    if (w === undefined) add(`${at}/offCentreDowncomerWidth_mm`, 'is required for four-pass trays');
+    if (x === undefined) add(`${at}/offCentreDowncomerOffset_mm`, 'is required for four-pass trays');
+    if (w !== undefined && x !== undefined && !(x - w / 2 > half && x + w / 2 < edge)) {
+      add(`${at}/offCentreDowncomerOffset_mm`,
+        `off-centre downcomers (${w} mm wide at ${x} mm from the axis) must lie between the centre downcomer (edge at ${half} mm) and the side downcomer (edge at ${formatMm(edge)} mm), with deck on both sides`);
+    }
+  } else {
+    if (l.offCentreDowncomerWidth_mm !== undefined) add(`${at}/offCentreDowncomerWidth_mm`, 'applies to four-pass trays only');
+    if (l.offCentreDowncomerOffset_mm !== undefined) add(`${at}/offCentreDowncomerOffset_mm`, 'applies to four-pass trays only');
+  }
+  const split = l.liquidSplit;
+  if (split) {
+    const sum = split.reduce((a, b) => a + b, 0);
+    if (split.length !== s.passes) add(`${at}/liquidSplit`, `needs one fraction per pass (${s.passes}), got ${split.length}`);
+    else if (Math.abs(sum - 1) > 0.001) add(`${at}/liquidSplit`, `fractions must add up to 1 (they add up to ${Number(sum.toPrecision(4))})`);
+  }
+}
+
+const formatMm = (x: number): string => String(Number(x.toPrecision(4)));
 
 /** Validate unknown JSON as a RatingRequest: schema (defaults filled in) then physics. Does not mutate its input. */
 export function validateRatingRequest(json: unknown): ValidationResult {

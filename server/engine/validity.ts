@@ -21,6 +21,10 @@ export const WARNING_CODES = {
   weirLoadingHigh: 'weir-loading-high',
   kisterHaasTransitionRecalled: 'kister-haas-transition-recalled',
   kisterHaasValveTray: 'kister-haas-valve-tray',
+  passesForDiameter: 'passes-for-diameter',
+  passImbalance: 'pass-imbalance',
+  passFlowPathShort: 'pass-flow-path-short',
+  passLayoutMismatch: 'pass-layout-mismatch',
 } as const;
 
 export function formatNumber(x: number): string {

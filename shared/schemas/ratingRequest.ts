@@ -23,6 +23,20 @@ export const valveDataSchema = {
   },
 } as const;
 
+export const passLayoutSchema = {
+  type: 'object',
+  additionalProperties: false,
+  required: ['sideDowncomerWidth_mm', 'centreDowncomerWidth_mm', 'oddTrayOutlets'],
+  properties: {
+    sideDowncomerWidth_mm: positive(10000),
+    centreDowncomerWidth_mm: positive(10000),
+    offCentreDowncomerWidth_mm: positive(10000),
+    offCentreDowncomerOffset_mm: positive(10000),
+    oddTrayOutlets: { type: 'string', enum: ['side', 'inner'] },
+    liquidSplit: { type: 'array', minItems: 2, maxItems: 4, items: { type: 'number', exclusiveMinimum: 0, maximum: 1 } },
+  },
+} as const;
+
 export const sectionGeometrySchema = {
   type: 'object',
   additionalProperties: false,
@@ -34,6 +48,7 @@ export const sectionGeometrySchema = {
   properties: {
     trayType: { type: 'string', enum: ['sieve', 'fixed-valve', 'moving-valve'] },
     passes: { type: 'integer', enum: [1, 2, 4] },
+    passLayout: passLayoutSchema,
     columnDiameter_m: { type: 'number', minimum: 0.1, maximum: 20 },
     traySpacing_mm: { type: 'number', minimum: 100, maximum: 1200 },
     activeArea_m2: positive(320),

@@ -18,9 +18,40 @@ export interface ValveData {
   orificeShape: 'flat' | 'venturi';
 }
 
+/**
+ * Where a multipass tray's passes drain. Two-pass: 'side' = to the two side downcomers, 'inner' = to the
+ * centre downcomer. Four-pass: 'side' = to the side downcomers and the centre downcomer, 'inner' = to the
+ * two off-centre downcomers. Trays alternate, so the other kind is the even-numbered trays.
+ */
+export type PassOutlets = 'side' | 'inner';
+
+/**
+ * Layout of a two- or four-pass tray, symmetric about the column axis, with vertical downcomers (the
+ * top widths bound the pass panels). Widths are measured across the flow direction at the tray deck.
+ */
+export interface PassLayout {
+  /** width of each side downcomer, shell to weir [mm] */
+  sideDowncomerWidth_mm: number;
+  /** full width of the centre downcomer [mm] */
+  centreDowncomerWidth_mm: number;
+  /** four-pass: full width of each off-centre downcomer [mm] */
+  offCentreDowncomerWidth_mm?: number;
+  /** four-pass: distance from the column axis to each off-centre downcomer's centre line [mm] */
+  offCentreDowncomerOffset_mm?: number;
+  /** where the odd-numbered trays drain (the even-numbered ones drain to the other downcomers) */
+  oddTrayOutlets: PassOutlets;
+  /**
+   * Fraction of the tray's liquid in each pass, across the tray from one shell wall to the other
+   * (one entry per pass, summing to 1). Absent: equal split.
+   */
+  liquidSplit?: number[];
+}
+
 export interface SectionGeometry {
   trayType: TrayType;
   passes: 1 | 2 | 4;
+  /** two- and four-pass trays: the pass layout; absent, passes are rated as equal shares of the totals */
+  passLayout?: PassLayout;
   columnDiameter_m: number;
   traySpacing_mm: number;
   activeArea_m2: number;

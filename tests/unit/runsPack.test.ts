@@ -38,6 +38,20 @@ describe('compressed storage of run results', () => {
     }
   });
 
+  it('round-trips per-pass details of a multipass section beside trays without them', () => {
+    const [snap] = demoSnapshots();
+    const s0 = snap!.sections[0]!;
+    s0.geometry = { ...s0.geometry, passLayout: { sideDowncomerWidth_mm: 900, centreDowncomerWidth_mm: 560, oddTrayOutlets: 'side', liquidSplit: [0.48, 0.52] } };
+    const r = rateSnapshot(snap!).results;
+    const withPasses = r.trays.find((t) => t.sectionId === s0.sectionId)!;
+    const without = r.trays.find((t) => t.sectionId !== s0.sectionId)!;
+    expect(withPasses.details.pass2LiquidFraction).toBe(0.52);
+    const back = decodeResults(encodeResults(r));
+    expect(back).toEqual(r);
+    expect('pass1WeirLength_m' in back.trays.find((t) => t.sectionId !== s0.sectionId)!.details).toBe(false);
+    expect(without.details.pass1WeirLength_m).toBeUndefined();
+  });
+
   it('keeps numbers bit-exact, absent details absent, and warnings with their text', () => {
     const [r] = demoResults();
     const t = r!.trays[0]!;
