@@ -6,6 +6,8 @@ import { method } from './meta.js';
  * (Perry 8th ed. Sec. 14, from memory; equals Kister's English 0.03 (gpm/(100 A_da))² in, derived;
  * Sinnott's 166 [L/(ρL A_m)]² is the same equation). A_da = the most restrictive area under the
  * apron: min(clearance × apron length, downcomer bottom area).
+ * Range: apron underflow velocity up to 0.45 m/s (common practice); Kister (1992 §6.5, seen) calls an
+ * apron loss of 1.25 in (32 mm) "quite high". Above the range the value is reported with a warning.
  * Example: Q 2.54/954 m³/s, A_da 0.024 m² → 2.04 mm (Sinnott: "2 mm", from memory).
  */
 export const apronHeadLoss = method(
@@ -19,7 +21,7 @@ export const apronHeadLoss = method(
     source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 [from memory]; Kister, Distillation Design (1992) Ch. 6; Sinnott C&R Vol. 6 4th ed.",
     equation: 'h_da = 165.2 (Q/A_da)^2',
     provenance: 'recalled',
-    ranges: {},
+    ranges: { underflowVelocity_m_s: [0, 0.45] },
   },
 );
 

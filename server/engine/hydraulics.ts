@@ -33,6 +33,11 @@ const FAIR = fairFloodCapacityLygerosMagoulas.meta;
 const KH = kisterHaasFloodCapacity.meta;
 const ENT = fairEntrainmentOwnFit.meta;
 const K2 = eduljeeK2OwnFit.meta;
+const SIGMA = fairSurfaceTensionCorrection.meta;
+const SB = floodVelocitySoudersBrown.meta;
+const APRON = apronHeadLoss.meta;
+/** surface tension above which some presentations of Kister & Haas use this value instead [mN/m] */
+const KH_SIGMA_NOTE = 25;
 const [ENT_LO, ENT_HI] = FAIR_ENTRAINMENT_DATA_SPAN;
 
 function allFinite(d: TrayDetails): boolean {
@@ -56,15 +61,24 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   const flv = V > 0 ? ((L / (V * p.passes)) * Math.sqrt(rhoV / rhoL)) : 0;
 
   // Jet flood: Fair (always, it also feeds the entrainment chart) and Kister & Haas.
-  const flvChart = flv < 0.01 ? 0.01 : flv > 1 ? 1 : flv;
-  if (out && V > 0) checkRange(out, FAIR, 'flowParameter', flv, tray, `capacity factor evaluated at the chart edge ${flvChart}`);
+  // Outside the chart the conservative side is taken: below F_LV 0.01 the value at the edge (the fit
+  // rises towards low F_LV), above 1 the fit's own trend (it keeps falling; the edge value would be up
+  // to 28 % higher). Either way the lower capacity, and a warning.
+  const flvChart = flv < 0.01 ? 0.01 : flv;
+  if (out && V > 0) {
+    checkRange(out, FAIR, 'flowParameter', flv, tray, flv < 0.01
+      ? `capacity factor evaluated at the chart edge ${flvChart}`
+      : "capacity factor extrapolated along the fit's trend (lower than at the chart edge F_LV 1: conservative)");
+    checkRange(out, SIGMA, 'surfaceTension_mN_m', sigma, tray);
+    checkRange(out, SB, 'vapourToLiquidDensityRatio', rhoV / rhoL, tray);
+  }
   const cFair =
     fairFloodCapacityLygerosMagoulas(flvChart, p.traySpacing_mm) * p.holeAreaCorrection * fairSurfaceTensionCorrection(sigma) * p.systemFactor;
   const uFloodFair = floodVelocitySoudersBrown(cFair, rhoL, rhoV);
   const pctFair = uN > 0 ? (100 * uN) / uFloodFair : 0;
   const weirLoad = weirLoadingVolumetric(qL, p.weirLength);
   const qKH = weirLoad < 3 ? 3 : weirLoad;
-  const hct = transitionClearLiquidHeightKisterHaas(p.holeDiameter_mm, p.holeAreaRatio, qKH, rhoL);
+  const hct = transitionClearLiquidHeightKisterHaas(p.holeDiameter_mm, p.openAreaRatio, qKH, rhoL);
   const cKH = kisterHaasFloodCapacity(p.holeDiameter_mm, sigma, rhoL, rhoV, p.traySpacing_mm, hct) * p.systemFactor;
   const uFloodKH = floodVelocitySoudersBrown(cKH, rhoL, rhoV);
   const pctKH = uN > 0 ? (100 * uN) / uFloodKH : 0;
@@ -74,6 +88,9 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     checkRange(out, KH, 'vapourDensity_kg_m3', rhoV, tray);
     checkRange(out, KH, 'liquidDensity_kg_m3', rhoL, tray);
     checkRange(out, KH, 'surfaceTension_mN_m', sigma, tray);
+    if (sigma > KH_SIGMA_NOTE)
+      out.push(warning(WARNING_CODES.kisterHaasSurfaceTension,
+        `Kister & Haas: surface tension ${formatNumber(sigma)} mN/m is above ${KH_SIGMA_NOTE} mN/m; some presentations of the correlation use ${KH_SIGMA_NOTE} mN/m above this value, which gives a lower capacity. Rated with the value given.`, tray));
     if (load.pressure_kPa !== undefined) checkRange(out, KH, 'pressure_kPa', load.pressure_kPa, tray);
     if (load.liquidViscosity_mPa_s !== undefined) checkRange(out, KH, 'liquidViscosity_mPa_s', load.liquidViscosity_mPa_s, tray);
   }
@@ -142,6 +159,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
 
   // Downcomer.
   const hda = apronHeadLoss(qL, p.apronArea);
+  if (out && L > 0) checkRange(out, APRON, 'underflowVelocity_m_s', qL / p.apronArea, tray);
   const clear = downcomerBackupClear(hT, p.weirHeight_mm, crest, hda);
   const aerated = clear / p.limits.aerationFactor;
   const residence = qL > 0 ? downcomerResidenceTimeApparent(p.downcomerTopArea, p.downcomerBottomArea, p.traySpacing_mm, qL) : REPORT_CAP;
@@ -153,7 +171,9 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
         `crest over the weir ${formatNumber(crest)} mm is below ${p.limits.liquidLoad} mm: risk of drying out and liquid maldistribution; consider a picket-fence (notched) weir.`, tray));
     if (V === 0) out.push(warning(WARNING_CODES.noVapour, 'zero vapour: the tray dumps its liquid through the deck (weeping).', tray));
     if (pctFlood >= 100) out.push(warning(WARNING_CODES.beyondFlood, `percent of jet flood ${formatNumber(pctFlood)} % is beyond flood; correlations are extrapolated.`, tray));
-    if (p.systemFactor === 1 && rhoV > 28.8)
+    // Kister (1992) §6.5 applied no high-pressure derating with Fair's correlation: its (σ/20)^0.2 term
+    // already derates the low-surface-tension systems of high pressure. Warn where that does not apply.
+    if (p.systemFactor === 1 && rhoV > 28.8 && (useKH || sigma >= 20))
       out.push(warning(WARNING_CODES.highPressureDerating,
         `vapour density ${formatNumber(rhoV)} kg/m³ > 28.8: Kister (1992) Table 6.7 suggests a system factor of ${formatNumber(highPressureSystemFactorKister(rhoV))}.`, tray));
   }

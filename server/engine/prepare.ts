@@ -27,6 +27,12 @@ export interface PreparedSection {
   readonly activeArea: number;
   readonly holeArea: number;
   readonly holeAreaRatio: number;
+  /**
+   * fractional open area A_f of the flood correlations (Fair's hole-area correction, Kister & Haas):
+   * hole area / bubbling area for sieve trays, open slot (curtain) area / bubbling area for valve trays
+   * (Perry's 8th ed. Sec. 14 definition); the orifice area when a valve tray has no slot area (warned)
+   */
+  readonly openAreaRatio: number;
   readonly downcomerTopArea: number;
   readonly downcomerBottomArea: number;
   readonly apronArea: number;
@@ -63,21 +69,25 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
   const ts = section.traySpacing_mm;
   const colArea = (Math.PI / 4) * section.columnDiameter_m * section.columnDiameter_m;
   const holeAreaRatio = section.holeArea_m2 / section.activeArea_m2;
+  const valveTray = section.trayType !== 'sieve';
+  const openAreaRatio = valveTray && section.slotArea_m2 !== undefined ? section.slotArea_m2 / section.activeArea_m2 : holeAreaRatio;
+  if (valveTray && section.slotArea_m2 === undefined) {
+    w.push(warning(WARNING_CODES.valveSlotAreaMissing,
+      "valve tray without its open slot area: the fractional open area of Fair's hole-area correction and of Kister & Haas is taken from the orifice area; Perry's 8th ed. defines it with the slot (curtain) area of the valves fully open. Enter the slot area for a rating on that basis."));
+  }
   const tOverD = section.deckThickness_mm / section.holeDiameter_mm;
 
   const fair = fairFloodCapacityLygerosMagoulas.meta;
   checkRange(w, fair, 'traySpacing_mm', ts, undefined);
-  checkRange(w, fair, 'holeAreaRatio', holeAreaRatio, undefined, 'hole-area correction extrapolated below 0.06');
+  checkRange(w, fair, 'holeAreaRatio', openAreaRatio, undefined, 'hole-area correction extrapolated below 0.06');
   checkRange(w, fair, 'weirHeightOverTraySpacing', section.weirHeight_mm / ts, undefined, 'Fair assumes weir height < 15 % of tray spacing');
   if (section.trayType === 'sieve') checkRange(w, fair, 'holeDiameter_mm', section.holeDiameter_mm, undefined, 'no hole-size correction applied');
   if (jetMethod === 'kister-haas') {
     const kh = kisterHaasFloodCapacity.meta;
     checkRange(w, kh, 'traySpacing_mm', ts, undefined);
     checkRange(w, kh, 'holeDiameter_mm', section.holeDiameter_mm, undefined);
-    checkRange(w, kh, 'fractionalHoleArea', holeAreaRatio, undefined);
+    checkRange(w, kh, 'fractionalHoleArea', openAreaRatio, undefined);
     checkRange(w, kh, 'weirHeight_mm', section.weirHeight_mm, undefined);
-    w.push(warning(WARNING_CODES.kisterHaasTransitionRecalled,
-      "Kister & Haas: the froth-to-spray transition height h_ct uses coefficients not yet confirmed against the printed source (Perry's 8th ed. eqs. 14-82 to 14-84); C_SB follows the printed eq. 14-81. Compare with Fair's correlation before relying on the result."));
     if (section.trayType !== 'sieve')
       w.push(warning(WARNING_CODES.kisterHaasValveTray,
         "Kister & Haas applied to a valve tray: Perry's 8th ed. presents eq. 14-81 for sieve trays; hole diameter and open area are taken from the valve orifices."));
@@ -144,13 +154,14 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
     activeArea: section.activeArea_m2,
     holeArea: section.holeArea_m2,
     holeAreaRatio,
+    openAreaRatio,
     downcomerTopArea: section.downcomerTopArea_m2,
     downcomerBottomArea: section.downcomerBottomArea_m2,
     apronArea: apron,
     weirLength: section.outletWeirLength_m,
     systemFactor,
     foaming,
-    holeAreaCorrection: fairHoleAreaCorrection(holeAreaRatio),
+    holeAreaCorrection: fairHoleAreaCorrection(openAreaRatio),
     orificeCoefficient,
     dryK,
     closedK,

@@ -64,6 +64,8 @@ export function physicsErrors(req: RatingRequest): FieldError[] {
     add('/section/outletWeirLength_m', `outlet weir length (${s.outletWeirLength_m} m) exceeds ${s.passes} pass(es) × column diameter (${s.columnDiameter_m} m)`);
   }
   passLayoutErrors(s, add);
+  if (s.slotArea_m2 !== undefined && s.trayType === 'sieve') add('/section/slotArea_m2', 'applies to valve trays only (a sieve tray\'s open area is its hole area)');
+  if (s.slotArea_m2 !== undefined && s.slotArea_m2 >= s.activeArea_m2) add('/section/slotArea_m2', `slot area (${s.slotArea_m2} m²) must be smaller than the active area (${s.activeArea_m2} m²)`);
   if (s.trayType === 'moving-valve' && !s.valves) add('/section/valves', 'is required for moving-valve trays (count, orifice diameter, valve thickness, material density, leg factor, orifice shape)');
   const seen = new Map<number, number>();
   req.trays.forEach((t, i) => {

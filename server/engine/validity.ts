@@ -19,7 +19,8 @@ export const WARNING_CODES = {
   fairRestriction: 'fair-restriction',
   downcomerBottomLarger: 'downcomer-bottom-larger',
   weirLoadingHigh: 'weir-loading-high',
-  kisterHaasTransitionRecalled: 'kister-haas-transition-recalled',
+  valveSlotAreaMissing: 'valve-slot-area-missing',
+  kisterHaasSurfaceTension: 'kister-haas-surface-tension',
   kisterHaasValveTray: 'kister-haas-valve-tray',
   passesForDiameter: 'passes-for-diameter',
   passImbalance: 'pass-imbalance',
@@ -58,6 +59,8 @@ const INPUT_LABELS: Record<string, string> = {
   pressure_kPa: 'pressure (kPa)',
   liquidViscosity_mPa_s: 'liquid viscosity (mPa·s)',
   headAboveDeck_mm: 'head above the deck (mm)',
+  vapourToLiquidDensityRatio: 'vapour / liquid density',
+  underflowVelocity_m_s: 'velocity under the downcomer apron (m/s)',
 };
 
 /**

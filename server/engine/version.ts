@@ -3,4 +3,8 @@
 // 0.3.0: Klein moving-valve balance with the eddy loss coefficient C_vw (Ludwig Example 8-41); all-open
 //        velocity and partly-open dry head reported
 // 0.4.0: multipass pass layouts (per-pass weir loading, crest, downcomer velocity and backup; pass imbalance)
-export const ENGINE_VERSION = '0.4.0';
+// 0.5.0: valve-tray A_f from the open slot area; Fair beyond F_LV 1 along the fit's trend (conservative);
+//        high-pressure derating warning only where it applies; range warnings for Fair's σ correction,
+//        ρV/ρL and apron underflow; Kister & Haas h_ct uncertainty stated in the method's source (no
+//        per-run warning), warning above σ 25 mN/m
+export const ENGINE_VERSION = '0.5.0';

@@ -63,6 +63,7 @@ export const sectionGeometrySchema = {
     systemFactor: { type: 'number', exclusiveMinimum: 0, maximum: 1.5, default: 1 },
     foaming: { type: 'string', enum: ['low', 'moderate', 'high', 'very-high'], default: 'moderate' },
     valves: valveDataSchema,
+    slotArea_m2: { type: 'number', minimum: 1e-6, maximum: 320 },
     orificeCoefficient: { type: 'number', minimum: 0.3, maximum: 1.2 },
   },
 } as const;

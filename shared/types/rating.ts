@@ -66,6 +66,11 @@ export interface SectionGeometry {
   systemFactor?: number;
   foaming?: FoamingClass;
   valves?: ValveData;
+  /**
+   * valve trays: open slot (curtain) area of all valves fully open [m²], the vertical opening through which
+   * vapour leaves the valves; gives the fractional open area A_f of the flood correlations (Perry's 8th ed.)
+   */
+  slotArea_m2?: number;
   /** optional measured or vendor dry-tray orifice coefficient C_v (sieve trays); overrides the Hughmark & O'Connell fit */
   orificeCoefficient?: number;
 }

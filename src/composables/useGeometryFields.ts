@@ -52,6 +52,10 @@ export const GEOMETRY_FIELDS: NumericField[] = [
   field(G, 'downcomerClearance_mm', 'Downcomer clearance', 'lengthSmall'),
   field(G, 'holeArea_m2', 'Hole (open) area', 'area'),
   field(G, 'holeDiameter_mm', 'Hole diameter', 'lengthSmall'),
+  field(G, 'slotArea_m2', 'Valve slot area, all open', 'area', {
+    hint: 'valve trays: curtain area of all valves fully open',
+    optional: true,
+  }),
   field(G, 'deckThickness_mm', 'Deck thickness', 'lengthSmall'),
   field(G, 'systemFactor', 'System factor', 'ratio', { hint: 'derating, 1 = none', optional: true }),
   field(G, 'orificeCoefficient', 'Dry-tray orifice coefficient', 'ratio', {

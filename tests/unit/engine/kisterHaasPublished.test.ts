@@ -11,7 +11,7 @@
  * Not seen: the h_ct coefficients of eqs. (14-82)–(14-84), and the numbers of Perry 8th Example 9.
  */
 import { describe, expect, it } from 'vitest';
-import { kisterHaasFloodCapacity } from '../../../server/engine/flooding.js';
+import { kisterHaasFloodCapacity, transitionClearLiquidHeightKisterHaas } from '../../../server/engine/flooding.js';
 import { FT_S, IN, LB_FT3, rel } from './fixtures.js';
 
 /** Kister (1992) §6.5.3, bottom section, printed inputs (English units). */
@@ -46,6 +46,15 @@ describe("Kister & Haas C_SB,flood as printed (Perry's 8th ed. eq. 14-81; Kister
     expect(kisterHaasFloodCapacity(d, s, 2 * rl, rv, ts, h) / base).toBeCloseTo(Math.pow(2, -0.225), 6); // ρL^(−0.125−0.1)
   });
 
+  it("h_ct reproduces Kister's (1992) sizing example as quoted with Perry's 8th ed. eqs. (14-82)–(14-84)", () => {
+    // A secondary transcription of Perry's 8th ed. eqs. 14-82 to 14-84 (seen; the printed page itself not seen)
+    // quotes Kister (1992): h_ct of water ≈ 0.94 in at d_H 0.5 in, A_f 0.1, Q_L 6.45 gpm/in. ±1 %.
+    const hct = transitionClearLiquidHeightKisterHaas(0.5 * IN, 0.1, 6.45 * 8.942, 996);
+    expect(Math.abs(rel(hct / IN, 0.94))).toBeLessThan(0.01);
+    // the transcription's English leading coefficient 0.294 is about 1.5 % (1.52 %) above ours in English
+    // units (0.497 × 25.4^−0.167 = 0.2896, derived)
+    expect(Math.abs(rel(0.294, 0.497 / Math.pow(25.4, 1 - 0.833)))).toBeLessThan(0.016);
+  });
   it.todo("h_ct, Perry's 8th ed. eqs. (14-82)–(14-84): compare coefficients with the printed page (not seen in the stored copies)");
   it.todo("Perry's 8th ed. Sec. 14 Example 9 (2.5-m ethylbenzene/styrene sieve tray): inputs and printed C_SB not legible in the stored copy");
 });

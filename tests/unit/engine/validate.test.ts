@@ -47,6 +47,18 @@ describe('validateRatingRequest', () => {
     expect(paths).toEqual(expect.arrayContaining(['/section/activeArea_m2', '/section/holeArea_m2', '/section/weirHeight_mm']));
   });
 
+  it('slot area: valve trays only, below the active area', () => {
+    const req = inventedRequest();
+    req.section.slotArea_m2 = 0.5;
+    expect(validateRatingRequest(req).ok).toBe(true);
+    req.section.slotArea_m2 = 6;
+    expect(errorsOf(req).map((e) => e.path)).toContain('/section/slotArea_m2');
+    const sieve = inventedRequest();
+    sieve.section = { ...sieve.section, trayType: 'sieve', slotArea_m2: 0.5 };
+    delete sieve.section.valves;
+    expect(errorsOf(sieve)).toContainEqual(expect.objectContaining({ path: '/section/slotArea_m2' }));
+  });
+
   it('moving valves need valve data; unknown fields and bad enums are rejected with the field named', () => {
     const req = inventedRequest();
     delete req.section.valves;
