@@ -51,5 +51,13 @@ describe('zone liquid question on a new study', () => {
     await p.waitForURL((u) => /\/studies\/[0-9a-f-]{36}$/.test(u.pathname));
     await p.getByText('What the sweep found').waitFor();
     expect(await p.locator('[data-test=recommended-duty]').innerText()).toMatch(/\d kW/);
+    // condenser duties are changes against the base case, never shown as if absolute
+    const slider = p.locator('[data-test=slider-condenser]');
+    expect(await slider.innerText()).toMatch(/^−[\d,]+ kW against the base case$/);
+    await p.getByRole('slider', { name: 'Pump-around duty' }).focus();
+    await p.getByRole('slider', { name: 'Pump-around duty' }).press('Home'); // the sweep starts at the base duty
+    await p.waitForFunction(() => document.querySelector('[data-test=slider-condenser]')?.textContent === 'none (the base case)');
+    expect(await p.locator('[data-test=recommended-condenser]').innerText()).toMatch(/^−[\d,]+ kW against the base case$/);
+    await p.getByText('Change in condenser duty there').waitFor();
   });
 });
