@@ -90,7 +90,7 @@ export async function rateAsFound(ds: DataSource, user: SessionUser, id: string,
     if (!Object.keys(override).length)
       throw new ValidationError('Nothing to rate as found', [{ path: 'trays', message: 'no recorded tray lies in a tray section of the column' }]);
     const base = { columnId: insp.columnId, loadCaseId: body.loadCaseId, sectionIds: Object.keys(override) };
-    const design = await createRatingRun(em, user, { ...base, label: `Design — for inspection ${insp.turnaround}`, kind: 'rating' });
+    const design = await createRatingRun(em, user, { ...base, label: `Design — for inspection ${insp.turnaround}`, kind: 'as-found-design' });
     const asFound = await createRatingRun(em, user, {
       ...base, geometryOverride: override, kind: 'as-found', asFoundDate: insp.startDate,
       label: `As ${state === 'asFound' ? 'found' : 'left'} ${insp.turnaround} (${body.combine})`,

@@ -76,8 +76,9 @@ const fromRow = (r: SummaryRow): RunSummary => ({
   version: r.version,
 });
 
+/** The column page's runs: ratings only (runs of ratings as found are listed from their inspection). */
 export async function listRunSummaries(em: EntityManager, columnId: string): Promise<RunSummary[]> {
-  const rows = (await em.query(`${SUMMARY_SQL} WHERE r.column_id = $1 ORDER BY r.created_at DESC LIMIT 200`, [
+  const rows = (await em.query(`${SUMMARY_SQL} WHERE r.column_id = $1 AND r.kind = 'rating' ORDER BY r.created_at DESC LIMIT 200`, [
     columnId,
   ])) as SummaryRow[];
   return rows.map(fromRow);
@@ -86,11 +87,12 @@ export async function listRunSummaries(em: EntityManager, columnId: string): Pro
 export async function listRuns(
   ds: DataSource,
   user: SessionUser,
-  q: { page: number; pageSize: number; columnId?: string; status?: ReviewStatus },
+  q: { page: number; pageSize: number; columnId?: string; status?: ReviewStatus; inspection?: boolean },
 ): Promise<Page<RunSummary>> {
   const f = siteFilterSql(user, 'u.site_id', 1);
   const params: unknown[] = [...f.params];
   let where = f.sql;
+  if (!q.inspection) where += ` AND r.kind = 'rating'`;
   if (q.columnId) {
     params.push(q.columnId);
     where += ` AND r.column_id = $${params.length}`;

@@ -55,5 +55,7 @@ export const runListQuery = {
     pageSize: { type: 'integer', minimum: 1, maximum: 200, default: 50 },
     columnId: uuid,
     status: { type: 'string', enum: ['draft', 'submitted', 'approved', 'returned'] },
+    /** also list the runs of ratings as found (the as-found runs and their design working copies) */
+    inspection: { type: 'boolean', default: false },
   },
 } as const;

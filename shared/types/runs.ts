@@ -20,8 +20,13 @@ export const REVIEW_STATUSES = ['draft', 'submitted', 'approved', 'returned'] as
 /** draft → submitted (author, ratings.run) → approved | returned (reviews.approve, with a comment); returned → submitted again. Approved is read-only. */
 export type ReviewStatus = (typeof REVIEW_STATUSES)[number];
 
-/** 'rating' from design/as-left geometry; 'as-found' with geometry measured at inspection (issue 6). */
-export type RunKind = 'rating' | 'as-found';
+/**
+ * 'rating' from design/as-left geometry; 'as-found' with geometry measured at inspection (issue 6);
+ * 'as-found-design' the design run rated beside an as-found run for its comparison (a working copy: run
+ * lists and the column profile leave both inspection kinds out unless asked).
+ */
+export type RunKind = 'rating' | 'as-found' | 'as-found-design';
+export const INSPECTION_RUN_KINDS: readonly RunKind[] = ['as-found', 'as-found-design'];
 
 export interface RunSnapshotSection {
   sectionId: string;

@@ -144,6 +144,19 @@ describe('rating as found', () => {
     const rec = await engineer.get(`/api/inspections/${inspectionId}`);
     expect(rec.body.asFoundRunIds).toContain(r.body.asFoundRunId);
   });
+
+  it('its two runs stay out of the column page and the run list unless asked for', async () => {
+    const col = await engineer.get(`/api/columns/${fx.columnId}`);
+    const ids = (xs: { id: string; kind: string }[]) => xs.map((x) => x.id);
+    const kinds = async (q: string) => (await engineer.get(`/api/runs?columnId=${fx.columnId}${q}`)).body.items as { id: string; kind: string }[];
+    const everything = await kinds('&inspection=true');
+    const design = everything.find((x) => x.kind === 'as-found-design');
+    const asFound = everything.find((x) => x.kind === 'as-found');
+    expect(design && asFound).toBeTruthy();
+    expect(ids(col.body.runs)).not.toContain(design!.id);
+    expect(ids(col.body.runs)).not.toContain(asFound!.id);
+    expect((await kinds('')).every((x) => x.kind === 'rating')).toBe(true);
+  });
 });
 
 describe('punch list and sign-off', () => {

@@ -107,6 +107,16 @@ describe('turnaround inspection on a tablet', () => {
     expect(Number(cells[2])).toBeGreaterThan(Number(cells[1]));
     await shot(p, 'inspection-as-found');
 
+    // the two runs it made do not clutter the column's run list or drive its profile
+    const cols = (await (await p.request.get(`${FROTHLINE_URL}/api/columns?q=T-701`)).json()) as { items: { id: string; tag: string }[] };
+    await p.goto(`${FROTHLINE_URL}/columns/${cols.items.find((c) => c.tag === 'T-701')!.id}`);
+    await p.getByText('Rating runs').waitFor();
+    const designLabel = `Design — for inspection ${turnaround}`;
+    expect(await p.getByText(/^Flags from /).innerText()).not.toMatch(/inspection|As found/);
+    expect(await p.getByText(designLabel).count()).toBe(0);
+    await p.locator('[data-test=runs-inspection-toggle]').click();
+    await p.getByRole('cell', { name: new RegExp(`^${designLabel} design copy for as found$`) }).waitFor();
+
     await b.context.clearCookies();
     await signInAs(p, 'admin');
     const subject = `Inspection of T-701 (${turnaround}) signed by the inspector — your sign-off is due`;
