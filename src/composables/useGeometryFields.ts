@@ -1,4 +1,4 @@
-import { sectionGeometrySchema, valveDataSchema } from '../../shared/schemas/ratingRequest';
+import { passLayoutSchema, sectionGeometrySchema, valveDataSchema } from '../../shared/schemas/ratingRequest';
 import type { QuantityId } from '../../shared/units';
 
 /** A numeric geometry field: its SI bounds come from the shared JSON schema (one source of truth). */
@@ -39,15 +39,16 @@ function field(
 
 const G = sectionGeometrySchema.properties as unknown as Record<string, Bound>;
 const V = valveDataSchema.properties as unknown as Record<string, Bound>;
+const P = passLayoutSchema.properties as unknown as Record<string, Bound>;
 
 /** Geometry fields in the order a tray data sheet lists them. */
 export const GEOMETRY_FIELDS: NumericField[] = [
   field(G, 'columnDiameter_m', 'Column diameter', 'lengthLarge'),
   field(G, 'traySpacing_mm', 'Tray spacing', 'lengthSmall'),
-  field(G, 'activeArea_m2', 'Active (bubbling) area', 'area', { hint: 'per tray, all passes' }),
-  field(G, 'downcomerTopArea_m2', 'Downcomer area, top', 'area'),
-  field(G, 'downcomerBottomArea_m2', 'Downcomer area, bottom', 'area'),
-  field(G, 'outletWeirLength_m', 'Outlet weir length', 'lengthLarge', { hint: 'all passes' }),
+  field(G, 'activeArea_m2', 'Active (bubbling) area, all passes', 'area', { hint: 'per tray' }),
+  field(G, 'downcomerTopArea_m2', 'Downcomer area, top, all passes', 'area', { hint: 'the downcomers one tray drains into' }),
+  field(G, 'downcomerBottomArea_m2', 'Downcomer area, bottom, all passes', 'area'),
+  field(G, 'outletWeirLength_m', 'Outlet weir length, all passes', 'lengthLarge', { hint: 'sum of one tray’s outlet weirs' }),
   field(G, 'weirHeight_mm', 'Outlet weir height', 'lengthSmall'),
   field(G, 'downcomerClearance_mm', 'Downcomer clearance', 'lengthSmall'),
   field(G, 'holeArea_m2', 'Hole (open) area', 'area'),
@@ -70,4 +71,16 @@ export const VALVE_FIELDS: NumericField[] = [
   field(V, 'valveThickness_mm', 'Valve thickness', 'lengthSmall'),
   field(V, 'materialDensity_kg_m3', 'Valve material density', 'density'),
   field(V, 'legFactor', 'Leg factor (with / without legs)', 'ratio'),
+];
+
+/** Pass layout of two- and four-pass trays (per downcomer; the four-pass fields only for four passes). */
+export const PASS_LAYOUT_FIELDS: NumericField[] = [
+  field(P, 'sideDowncomerWidth_mm', 'Side downcomer width, each', 'lengthSmall', { hint: 'shell to weir' }),
+  field(P, 'centreDowncomerWidth_mm', 'Centre downcomer width', 'lengthSmall', { hint: 'full width' }),
+];
+export const PASS_LAYOUT_FIELDS_FOUR: NumericField[] = [
+  field(P, 'offCentreDowncomerWidth_mm', 'Off-centre downcomer width, each', 'lengthSmall', { hint: 'full width' }),
+  field(P, 'offCentreDowncomerOffset_mm', 'Off-centre downcomer position', 'lengthSmall', {
+    hint: 'column axis to its centre line',
+  }),
 ];
