@@ -184,7 +184,7 @@ function passWarnings(w: EngineWarning[], s: SectionGeometry, pp: PreparedPasses
     w.push(warning(WARNING_CODES.passFlowPathShort,
       `shortest flow path ${formatNumber(shortest * 1000)} mm is under about ${MIN_FLOW_PATH_M * 1000} mm (Kister, Distillation Design, 1992, §6.5): consider fewer passes.`));
   }
-  if (pp.imbalance_percent > imbalanceLimit) {
+  if (pp.imbalance_percent > imbalanceLimit + 1e-9) { // 0.55/0.5 − 1 is 10.000000000000009 % in doubles
     w.push(warning(WARNING_CODES.passImbalance,
       `pass L/V imbalance ${formatNumber(pp.imbalance_percent)} % exceeds ${imbalanceLimit} % (vapour shared by bubbling area): the liquid split does not match the pass areas, which costs efficiency and loads one pass early.`));
   }

@@ -139,6 +139,10 @@ describe('four-pass layout', () => {
     const expected = 100 * Math.max(...a.map((x) => Math.abs(0.25 / x - 1)));
     expect(pp.imbalance_percent).toBeCloseTo(expected, 12);
     expect(passImbalancePercent([0.25, 0.25, 0.25, 0.25], [0.22, 0.28, 0.28, 0.22])).toBeCloseTo(13.636, 3);
+    // exactly at the 10 % limit (0.55 of the liquid on half the area) is not beyond it
+    const atLimit = rateTray({ ...twoPass(), passLayout: { ...twoPass().passLayout!, liquidSplit: [0.45, 0.55] } }, load(1, 140000));
+    expect(atLimit.details.passImbalance_percent).toBeCloseTo(10, 9);
+    expect(atLimit.warnings.some((w) => w.code === 'pass-imbalance')).toBe(false);
     expect(pp.imbalance_percent).toBeGreaterThan(10); // equal flow paths give unequal panel areas
     const warned = rateTray(fourPass(), load(1));
     expect(warned.warnings.find((w) => w.code === 'pass-imbalance')?.message).toMatch(/imbalance 16\.7 % exceeds 10 %/);

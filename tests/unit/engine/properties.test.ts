@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { rateSection, rateTray, validateRatingRequest } from '../../../server/engine/index.js';
-import type { RatingRequest, SectionGeometry, TrayLoad } from '../../../shared/types/rating.js';
+import type { PassLayout, RatingRequest, SectionGeometry, TrayLoad } from '../../../shared/types/rating.js';
 
 /** Physically consistent section geometry over the schema's valid space (all tray types). */
 const sectionArb: fc.Arbitrary<SectionGeometry> = fc
@@ -22,6 +22,16 @@ const sectionArb: fc.Arbitrary<SectionGeometry> = fc
     sf: fc.double({ min: 0.3, max: 1.2, noNaN: true }),
     foaming: fc.constantFrom('low' as const, 'moderate' as const, 'high' as const, 'very-high' as const),
     shape: fc.constantFrom('flat' as const, 'venturi' as const),
+    // pass layout (two and four passes): fractions of the room left, so that every panel has deck
+    layout: fc.option(fc.record({
+      fSide: fc.double({ min: 0.05, max: 0.4, noNaN: true }),
+      fCentre: fc.double({ min: 0.05, max: 0.6, noNaN: true }),
+      fOff: fc.double({ min: 0.05, max: 0.5, noNaN: true }),
+      fPos: fc.double({ min: 0.05, max: 0.95, noNaN: true }),
+      split: fc.array(fc.double({ min: 0.05, max: 1, noNaN: true }), { minLength: 4, maxLength: 4 }),
+      equal: fc.boolean(),
+      odd: fc.constantFrom('side' as const, 'inner' as const),
+    }), { nil: undefined }),
   })
   .map((g) => {
     const at = (Math.PI / 4) * g.d * g.d;
@@ -35,8 +45,32 @@ const sectionArb: fc.Arbitrary<SectionGeometry> = fc
       weirHeight_mm: hw, downcomerClearance_mm: Math.max(1, g.fClear * g.ts), holeArea_m2: Math.max(1e-6, g.fHole * active),
       holeDiameter_mm: g.dh, deckThickness_mm: g.deck, systemFactor: g.sf, foaming: g.foaming,
       valves: { count: 100, orificeDiameter_mm: 39, valveThickness_mm: 1.5, materialDensity_kg_m3: 8000, legFactor: 1.2, orificeShape: g.shape },
+      ...(g.layout && g.passes > 1 ? { passLayout: layoutOf(g.layout, g.passes as 2 | 4, g.d) } : {}),
     };
   });
+
+function layoutOf(
+  l: { fSide: number; fCentre: number; fOff: number; fPos: number; split: number[]; equal: boolean; odd: 'side' | 'inner' },
+  passes: 2 | 4,
+  d: number,
+): PassLayout {
+  const r = d * 500;
+  const ws = l.fSide * r;
+  const xc = l.fCentre * (r - ws);
+  const out: PassLayout = { sideDowncomerWidth_mm: ws, centreDowncomerWidth_mm: 2 * xc, oddTrayOutlets: l.odd };
+  if (passes === 4) {
+    const span = r - ws - xc;
+    const wo = l.fOff * span;
+    out.offCentreDowncomerWidth_mm = wo;
+    out.offCentreDowncomerOffset_mm = xc + wo / 2 + l.fPos * (span - wo);
+  }
+  if (!l.equal) {
+    const parts = l.split.slice(0, passes);
+    const sum = parts.reduce((a, b) => a + b, 0);
+    out.liquidSplit = parts.map((x) => x / sum);
+  }
+  return out;
+}
 
 const flowArb = fc.oneof(fc.constant(0), fc.double({ min: 0, max: 1e6, noNaN: true }), fc.double({ min: 0, max: 1e8, noNaN: true }));
 
