@@ -22,6 +22,15 @@ describe('cli rate', () => {
     expect(result.trays).toHaveLength(2);
     expect(c.err).toEqual([]);
   });
+  it('rates the four-pass example per pass (invented crude tray, examples/rate-four-pass.json)', async () => {
+    const c = capture();
+    expect(await main(['rate', 'examples/rate-four-pass.json'], c.io)).toBe(0);
+    const [odd, even] = JSON.parse(c.out.join('')).trays;
+    expect(odd.details.pass4OutletDowncomer).toBe(0); // side
+    expect(odd.details.pass2OutletDowncomer).toBe(1); // centre
+    expect(even.details.pass1OutletDowncomer).toBe(2); // off-centre
+    expect(odd.details.passImbalance_percent).toBeLessThan(1); // split chosen close to the panel areas
+  });
   it('exits 2 with field-named errors on stderr for invalid input', async () => {
     const file = join(dir, 'bad.json');
     const req = inventedRequest();
