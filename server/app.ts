@@ -8,7 +8,7 @@ import swaggerUi from 'swagger-ui-express';
 import type { DataSource } from 'typeorm';
 import { config } from './config.js';
 import { ForbiddenError, UnauthorizedError } from './errors.js';
-import { readSession, renewSessionIfOld } from './http/auth.js';
+import { readSession, renewSessionIfOld, type SessionClaims } from './http/auth.js';
 import { errorHandler, notFoundHandler } from './http/errorHandler.js';
 import { buildOpenApi } from './http/openapi.js';
 import type { RouteDef } from './http/route.js';
@@ -37,9 +37,12 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
     let user: SessionUser | null = null;
     if (r.access !== 'public') {
       const session = readSession(req);
-      user = session ? await activeSessionUser(ds, session.userId) : null;
+      user = session ? await activeSessionUser(ds, session) : null;
       if (!user || !session) throw new UnauthorizedError();
-      renewSessionIfOld(res, user, session.issuedAt);
+      renewSessionIfOld(res, user, session);
+      res.locals.session = session;
+      if (user.mustChangePassword && !r.whilePasswordChangeDue)
+        throw new ForbiddenError('Change the temporary password an administrator set before anything else (account menu, Change password)');
       if (r.access !== 'signed-in' && !can(user.role, r.access))
         throw new ForbiddenError(
           `Your role (${ROLE_LABELS[user.role]}) does not include “${PERMISSION_LABELS[r.access].toLowerCase()}”`,
@@ -51,7 +54,8 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
     const params = r.params ? validate(r.params, { ...req.params }, 'params') : req.params;
     const query = r.query ? validate(r.query, { ...(req.query as object) }, 'query') : {};
     const body = r.body ? validate(r.body, req.body ?? {}, 'body') : req.body;
-    const out = await r.handler({ user: res.locals.user as SessionUser, body, query, params, req, res, ds });
+    const session = (res.locals.session as SessionClaims | undefined) ?? null;
+    const out = await r.handler({ user: res.locals.user as SessionUser, session, body, query, params, req, res, ds });
     if (res.headersSent) return;
     if (out === undefined) res.status(204).end();
     else res.status(res.statusCode !== 200 ? res.statusCode : (r.status ?? 200)).json(out);

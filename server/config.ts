@@ -42,8 +42,12 @@ export const config = {
   jwtSecret: jwtSecretFromEnv ?? randomBytes(48).toString('base64url'),
   jwtSecretGenerated: jwtSecretFromEnv === undefined,
   sessionMinutes: num('SESSION_MINUTES', 30),
+  /** Absolute session lifetime: a session ends this long after sign-in however active it is. */
+  sessionMaxHours: num('SESSION_MAX_HOURS', 12),
   bcryptRounds: Math.max(10, num('BCRYPT_ROUNDS', 10)),
   loginRateLimit: num('LOGIN_RATE_LIMIT', 20),
+  /** Failed sign-ins (and current-password checks) allowed per account per 15 minutes. */
+  loginAccountLimit: num('LOGIN_ACCOUNT_LIMIT', 10),
   bodyLimit: env.BODY_LIMIT ?? '1mb',
   importMaxBytes: num('IMPORT_MAX_BYTES', 5 * 1024 * 1024),
   photoMaxBytes: num('PHOTO_MAX_BYTES', 8 * 1024 * 1024),

@@ -2,11 +2,14 @@ import type { Request, RequestHandler, Response } from 'express';
 import type { DataSource } from 'typeorm';
 import type { Permission } from '../../shared/permissions.js';
 import type { SessionUser } from '../../shared/types/api.js';
+import type { SessionClaims } from './auth.js';
 
 export type Access = Permission | 'public' | 'signed-in';
 
 export interface RouteContext<B = any, Q = any, P = any> {
   user: SessionUser;
+  /** the request's session (null on public routes) */
+  session: SessionClaims | null;
   body: B;
   query: Q;
   params: P;
@@ -31,6 +34,8 @@ export interface RouteDef {
   /** extra middleware run after the permission check (e.g. multer) */
   before?: RequestHandler[];
   status?: number;
+  /** open to a user who must first change a temporary password (the account routes) */
+  whilePasswordChangeDue?: boolean;
   handler: (ctx: RouteContext) => Promise<unknown> | unknown;
 }
 

@@ -1,9 +1,10 @@
 import { defineRoutes } from '../http/route.js';
 import { listSitesWithMembers, setUserSites } from '../services/siteAccess.js';
+import { resetPassword } from '../services/passwords.js';
 import { createUser, listUsers, updateUser } from '../services/users.js';
-import { createUserBody, updateUserBody, userSitesBody } from '../../shared/schemas/auth.js';
+import { createUserBody, resetPasswordBody, updateUserBody, userSitesBody } from '../../shared/schemas/auth.js';
 import { uuidParams } from '../../shared/schemas/common.js';
-import type { CreateUserBody, UpdateUserBody } from '../../shared/types/api.js';
+import type { CreateUserBody, ResetPasswordBody, UpdateUserBody } from '../../shared/types/api.js';
 
 export const userRoutes = defineRoutes([
   {
@@ -30,6 +31,16 @@ export const userRoutes = defineRoutes([
     params: uuidParams,
     body: updateUserBody,
     handler: async ({ ds, user, params, body }) => updateUser(ds, user.id, (params as { id: string }).id, body as UpdateUserBody),
+  },
+  {
+    method: 'post',
+    path: '/users/:id/password',
+    access: 'users.manage',
+    summary: 'Set a temporary password for a user: their sessions end and they change it at next sign-in',
+    params: uuidParams,
+    body: resetPasswordBody,
+    handler: async ({ ds, user, params, body }) =>
+      resetPassword(ds, user.id, (params as { id: string }).id, (body as ResetPasswordBody).password),
   },
   {
     method: 'get',

@@ -5,7 +5,10 @@ import { User } from '../db/entities/User.js';
 import { ConflictError, NotFoundError, UnauthorizedError } from '../errors.js';
 import { preparedQuery } from '../db/prepared.js';
 import { audit } from './audit.js';
+import { assertPasswordAcceptable } from './passwordPolicy.js';
 import { cachedSessionUser, forgetSessionUsers, rememberSessionUser } from './sessionCache.js';
+import { revokeUserSessions } from './sessions.js';
+import type { SessionClaims } from '../http/auth.js';
 import type { CreateUserBody, SessionUser, UpdateUserBody, UserRecord } from '../../shared/types/api.js';
 
 export const toSessionUser = (u: User): SessionUser => ({
@@ -14,6 +17,7 @@ export const toSessionUser = (u: User): SessionUser => ({
   name: u.name,
   role: u.role,
   unitSystem: u.unitSystem,
+  mustChangePassword: u.mustChangePassword,
 });
 
 export const toUserRecord = (u: User): UserRecord => ({
@@ -35,24 +39,26 @@ export async function signIn(ds: DataSource, email: string, password: string): P
 }
 
 /**
- * The signed-in user of a request, if still active: from the short-lived session cache, else one plain
- * query (services/sessionCache.ts).
+ * The signed-in user of a request, if the session is still open and the user still active: from the
+ * short-lived session cache, else one query that checks session and user together (services/sessions.ts).
  */
-export async function activeSessionUser(ds: DataSource, id: string): Promise<SessionUser | null> {
-  const hit = cachedSessionUser(id);
-  if (hit) return hit;
+export async function activeSessionUser(ds: DataSource, session: SessionClaims): Promise<SessionUser | null> {
+  const hit = cachedSessionUser(session.sessionId);
+  if (hit) return hit.id === session.userId ? hit : null;
   const rows = await preparedQuery<SessionUser>(
     ds,
-    'frothline-session-user',
-    `SELECT id, email, name, role, unit_system AS "unitSystem" FROM users WHERE id = $1 AND active`,
-    [id],
+    'frothline-session',
+    `SELECT u.id, u.email, u.name, u.role, u.unit_system AS "unitSystem", u.must_change_password AS "mustChangePassword"
+       FROM user_sessions s JOIN users u ON u.id = s.user_id
+      WHERE s.id = $1 AND s.user_id = $2 AND s.revoked_at IS NULL AND s.expires_at > now() AND u.active`,
+    [session.sessionId, session.userId],
   );
-  if (rows[0]) rememberSessionUser(rows[0]);
+  if (rows[0]) rememberSessionUser(session.sessionId, rows[0]);
   return rows[0] ?? null;
 }
 
 /** Run a write to users; the session cache is forgotten before it and again after its commit. */
-async function userWrite<T>(fn: () => Promise<T>): Promise<T> {
+export async function userWrite<T>(fn: () => Promise<T>): Promise<T> {
   forgetSessionUsers();
   try {
     return await fn();
@@ -71,6 +77,7 @@ export async function createUser(ds: DataSource, actorId: string | null, body: C
   return ds.transaction(async (em) => {
     if (await em.findOneBy(User, { email }))
       throw new ConflictError('A user with this e-mail already exists', [{ path: 'email', message: 'is already taken' }]);
+    assertPasswordAcceptable('password', body.password, [email, body.name]);
     const passwordHash = await bcrypt.hash(body.password, config.bcryptRounds);
     const saved = await em.save(User, em.create(User, { email, name: body.name, role: body.role, passwordHash }));
     await audit(em, actorId, 'create', 'user', saved.id, { email, name: body.name, role: body.role });
@@ -94,8 +101,11 @@ export async function updateUser(ds: DataSource, actorId: string, id: string, bo
       if (body.role !== undefined) changes.role = body.role;
       if (body.active !== undefined) changes.active = body.active;
       if (body.unitSystem !== undefined) changes.unitSystem = body.unitSystem;
+      const activeChanged = changes.active !== undefined && changes.active !== user.active;
       Object.assign(user, changes);
       const saved = await em.save(User, user);
+      // deactivation ends every session, so a later reactivation revives none of them
+      if (activeChanged) await revokeUserSessions(em, id);
       await audit(em, actorId, 'update', 'user', id, changes);
       return toUserRecord(saved);
     }),

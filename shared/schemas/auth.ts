@@ -16,7 +16,7 @@ export const createUserBody = {
     email: { type: 'string', format: 'email', maxLength: 254 },
     name: { type: 'string', minLength: 1, maxLength: 120 },
     role: roleSchema,
-    password: { type: 'string', minLength: 10, maxLength: 200 },
+    password: { type: 'string', minLength: 1, maxLength: 200 },
   },
   required: ['email', 'name', 'role', 'password'],
   additionalProperties: false,
@@ -46,5 +46,23 @@ export const userSitesBody = {
   type: 'object',
   properties: { siteIds: { type: 'array', items: { type: 'string', format: 'uuid' }, maxItems: 200 } },
   required: ['siteIds'],
+  additionalProperties: false,
+} as const;
+
+// lengths and strength are checked by the password policy (server/services/passwordPolicy.ts), which says why
+export const changePasswordBody = {
+  type: 'object',
+  properties: {
+    currentPassword: { type: 'string', minLength: 1, maxLength: 200 },
+    newPassword: { type: 'string', minLength: 1, maxLength: 200 },
+  },
+  required: ['currentPassword', 'newPassword'],
+  additionalProperties: false,
+} as const;
+
+export const resetPasswordBody = {
+  type: 'object',
+  properties: { password: { type: 'string', minLength: 1, maxLength: 200 } },
+  required: ['password'],
   additionalProperties: false,
 } as const;

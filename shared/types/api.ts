@@ -21,6 +21,8 @@ export interface SessionUser {
   name: string;
   role: Role;
   unitSystem: UnitSystem;
+  /** an administrator set a temporary password: the user changes it before anything else */
+  mustChangePassword: boolean;
 }
 
 export interface UserRecord extends SessionUser {
@@ -31,6 +33,17 @@ export interface UserRecord extends SessionUser {
 
 export interface SignInBody {
   email: string;
+  password: string;
+}
+
+/** The signed-in user changes their own password. */
+export interface ChangePasswordBody {
+  currentPassword: string;
+  newPassword: string;
+}
+
+/** An administrator sets a temporary password for another user. */
+export interface ResetPasswordBody {
   password: string;
 }
 

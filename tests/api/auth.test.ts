@@ -1,8 +1,7 @@
-import jwt from 'jsonwebtoken';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { config } from '../../server/config.js';
-import { makeUser, setupApp, signedIn, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
+import { makeUser, sessionCookie, setupApp, signedIn, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
 
 let ctx: TestContext;
 beforeAll(async () => {
@@ -64,36 +63,26 @@ describe('sign-in and sessions', () => {
 
   it('renews the cookie on a request made after half of the session life (sliding session); not before', async () => {
     const u = await makeUser(ctx.ds, 'viewer');
-    const now = Math.floor(Date.now() / 1000);
-    const token = (ageMin: number) =>
-      jwt.sign({ role: 'viewer', iat: now - ageMin * 60 }, config.jwtSecret, {
-        subject: u.id,
-        expiresIn: config.sessionMinutes * 60,
-        algorithm: 'HS256',
-      });
+    const life = config.sessionMinutes * 60;
     const old = await request(ctx.app)
       .get('/api/columns')
-      .set('Cookie', `frothline_session=${token(config.sessionMinutes * 0.6)}`);
+      .set('Cookie', await sessionCookie(ctx.ds, u, { ageSec: life * 0.6 }));
     expect(old.status).toBe(200);
     expect(String(old.headers['set-cookie'])).toMatch(/frothline_session=/);
     const young = await request(ctx.app)
       .get('/api/columns')
-      .set('Cookie', `frothline_session=${token(1)}`);
+      .set('Cookie', await sessionCookie(ctx.ds, u, { ageSec: 60 }));
     expect(young.status).toBe(200);
     expect(young.headers['set-cookie']).toBeUndefined();
     const expired = await request(ctx.app)
       .get('/api/columns')
-      .set('Cookie', `frothline_session=${token(config.sessionMinutes + 1)}`);
+      .set('Cookie', await sessionCookie(ctx.ds, u, { ageSec: life + 60 }));
     expect(expired.status).toBe(401);
   });
 
   it('refuses a session token once it has expired, though it was accepted before', async () => {
     const u = await makeUser(ctx.ds, 'viewer');
-    const cookie = `frothline_session=${jwt.sign({ role: 'viewer' }, config.jwtSecret, {
-      subject: u.id,
-      expiresIn: 120,
-      algorithm: 'HS256',
-    })}`;
+    const cookie = await sessionCookie(ctx.ds, u, { lifeSec: 120 });
     expect((await request(ctx.app).get('/api/auth/me').set('Cookie', cookie)).status).toBe(200);
     vi.useFakeTimers({ toFake: ['Date'], now: Date.now() + 121_000 });
     try {

@@ -1,10 +1,12 @@
 import 'reflect-metadata';
 import bcrypt from 'bcryptjs';
+import jwt from 'jsonwebtoken';
 import type { Express } from 'express';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { createApp } from '../../server/app.js';
+import { config } from '../../server/config.js';
 import { makeDataSource } from '../../server/db/data-source.js';
 import { SiteMember } from '../../server/db/entities/SiteMember.js';
 import { User } from '../../server/db/entities/User.js';
@@ -44,4 +46,24 @@ export async function signedIn(ctx: TestContext, role: Role, siteIds: string[] =
   const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
   if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
   return { agent, user };
+}
+
+/**
+ * A session cookie made by hand: a user_sessions row ending `endsInSec` from now and a token issued
+ * `ageSec` ago that expires `lifeSec` after issue (for tests of expiry and renewal).
+ */
+export async function sessionCookie(
+  ds: DataSource,
+  user: { id: string; role: Role },
+  { ageSec = 0, lifeSec = config.sessionMinutes * 60, endsInSec = config.sessionMaxHours * 3600 } = {},
+): Promise<string> {
+  const sessionId = randomUUID();
+  const now = Math.floor(Date.now() / 1000);
+  await ds.query(`INSERT INTO user_sessions (id, user_id, expires_at) VALUES ($1, $2, to_timestamp($3))`, [sessionId, user.id, now + endsInSec]);
+  const token = jwt.sign({ role: user.role, end: now + endsInSec, iat: now - ageSec, exp: now - ageSec + lifeSec }, config.jwtSecret, {
+    subject: user.id,
+    jwtid: sessionId,
+    algorithm: 'HS256',
+  });
+  return `frothline_session=${token}`;
 }

@@ -10,6 +10,8 @@ export class User {
   @Column({ type: 'text' }) role: Role;
   @Column({ type: 'text', name: 'password_hash' }) passwordHash: string;
   @Column({ type: 'boolean', default: true }) active: boolean;
+  /** Set by an administrator's password reset: the user changes the temporary password before anything else. */
+  @Column({ type: 'boolean', name: 'must_change_password', default: false }) mustChangePassword: boolean;
   @Column({ type: 'text', name: 'unit_system', default: 'SI' }) unitSystem: UnitSystem;
   @CreateDateColumn({ type: 'timestamptz', name: 'created_at' }) createdAt: Date;
   @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' }) updatedAt: Date;
