@@ -70,6 +70,6 @@ export const entrainedLiquidRate = method(
     source: 'Seader & Henley, Separation Process Principles (1998), definition psi = e/(L + e)',
     equation: 'e = psi L/(1 - psi)',
     provenance: 'seen',
-    ranges: {},
+    ranges: { psi: [0, 0.999] },
   },
 );

@@ -36,6 +36,8 @@ const K2 = eduljeeK2OwnFit.meta;
 const SIGMA = fairSurfaceTensionCorrection.meta;
 const SB = floodVelocitySoudersBrown.meta;
 const APRON = apronHeadLoss.meta;
+const BENNETT = clearLiquidHeightBennett.meta;
+const ENT_RATE = entrainedLiquidRate.meta;
 /** surface tension above which some presentations of Kister & Haas use this value instead [mN/m] */
 const KH_SIGMA_NOTE = 25;
 const [ENT_LO, ENT_HI] = FAIR_ENTRAINMENT_DATA_SPAN;
@@ -104,6 +106,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   }
   const psi = fairEntrainmentOwnFit(flvEnt, pctFair / 100);
   const entrained = entrainedLiquidRate(psi, load.liquidMassFlow_kg_h);
+  if (out && psi > 0.999) checkRange(out, ENT_RATE, 'psi', psi, tray, 'entrained liquid computed at 0.999 (the rate grows without bound as the fraction approaches 1)');
 
   // Pressure drop.
   let hd: number;
@@ -122,6 +125,8 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   }
   const hL = clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, p.weirLength);
   const hSigma = residualHeadBennett(sigma, rhoL, p.holeDiameter_mm);
+  // Bennett is a froth-regime correlation: warn in the spray regime (clear liquid below h_ct)
+  if (out && V > 0 && hL > 0) checkRange(out, BENNETT, 'transitionOverClearLiquid', hct / hL, tray, 'spray regime: the froth-regime clear liquid height and residual head are extrapolated');
   const hT = hd + hL + hSigma;
 
   // Weir.

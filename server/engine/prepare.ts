@@ -71,6 +71,10 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
   const holeAreaRatio = section.holeArea_m2 / section.activeArea_m2;
   const valveTray = section.trayType !== 'sieve';
   const openAreaRatio = valveTray && section.slotArea_m2 !== undefined ? section.slotArea_m2 / section.activeArea_m2 : holeAreaRatio;
+  if (valveTray) {
+    w.push(warning(WARNING_CODES.bennettValveTray,
+      "tray pressure drop: the clear liquid height and residual head use Bennett et al. (1983), a sieve-tray correlation, applied here to a valve tray; Perry's 8th ed. rates the liquid on valve trays with an aeration factor (Fig. 14-37), which may give a different head."));
+  }
   if (valveTray && section.slotArea_m2 === undefined) {
     w.push(warning(WARNING_CODES.valveSlotAreaMissing,
       "valve tray without its open slot area: the fractional open area of Fair's hole-area correction and of Kister & Haas is taken from the orifice area; Perry's 8th ed. defines it with the slot (curtain) area of the valves fully open. Enter the slot area for a rating on that basis."));

@@ -282,6 +282,9 @@ export function bennettWeirConstant(weirHeight_mm: number): number {
  * @param liquid_m3_s q [m³/s]; @param weirLength_m L_w [m]
  * @returns h_L [mm liquid]. Example: Seader & Henley 7.48 bottom (U_a 7.5 ft/s, h_w 2 in, 97.9 gpm,
  * L_w 42.5 in, ρ 0.0408/59.5 lb/ft³) → 30.9 mm = 1.217 in (solution: 1.22 in).
+ * Validity: sieve trays in the froth regime; Kister (1992, Ch. 6) notes it is not applicable to the spray
+ * regime. The engine takes the spray regime as a clear liquid height below the Kister & Haas froth-to-spray
+ * transition height h_ct (range h_ct/h_L ≤ 1) and warns there; on valve trays the section warns.
  */
 export const clearLiquidHeightBennett = method(
   'clearLiquidHeightBennett',
@@ -299,10 +302,10 @@ export const clearLiquidHeightBennett = method(
   },
   {
     label: 'Bennett et al. (1983) clear liquid height',
-    source: 'Bennett, Agrawal & Cook, AIChE J. 29(3) 434 (1983) [citation from memory]; form as used in Seader & Henley (1998) solutions',
+    source: 'Bennett, Agrawal & Cook, AIChE J. 29(3) 434 (1983), form as used in Seader & Henley (1998) solutions; a sieve-tray, froth-regime correlation (Kister, Distillation Design 1992 Ch. 6: not applicable to the spray regime)',
     equation: 'h_L = phi_e [h_w + C_l (q/(L_w phi_e))^(2/3)]',
     provenance: 'seen',
-    ranges: {},
+    ranges: { transitionOverClearLiquid: [0, 1] },
   },
 );
 
@@ -321,7 +324,7 @@ export const residualHeadBennett = method(
     source: 'Seader & Henley, Separation Process Principles (1998), h_sigma = 6 sigma/(g rhoL dH); Bennett et al. (1983)',
     equation: 'h_sigma = 6 sigma/(g rhoL dH)',
     provenance: 'seen',
-    ranges: {},
+    ranges: { transitionOverClearLiquid: [0, 1] },
   },
 );
 

@@ -21,6 +21,7 @@ export const WARNING_CODES = {
   weirLoadingHigh: 'weir-loading-high',
   valveSlotAreaMissing: 'valve-slot-area-missing',
   kisterHaasSurfaceTension: 'kister-haas-surface-tension',
+  bennettValveTray: 'bennett-valve-tray',
   kisterHaasValveTray: 'kister-haas-valve-tray',
   passesForDiameter: 'passes-for-diameter',
   passImbalance: 'pass-imbalance',
@@ -61,6 +62,8 @@ const INPUT_LABELS: Record<string, string> = {
   headAboveDeck_mm: 'head above the deck (mm)',
   vapourToLiquidDensityRatio: 'vapour / liquid density',
   underflowVelocity_m_s: 'velocity under the downcomer apron (m/s)',
+  psi: 'fractional entrainment',
+  transitionOverClearLiquid: 'froth-to-spray transition height / clear liquid height',
 };
 
 /**

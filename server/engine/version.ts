@@ -7,4 +7,6 @@
 //        high-pressure derating warning only where it applies; range warnings for Fair's σ correction,
 //        ρV/ρL and apron underflow; Kister & Haas h_ct uncertainty stated in the method's source (no
 //        per-run warning), warning above σ 25 mN/m
-export const ENGINE_VERSION = '0.5.0';
+// 0.6.0: Bennett's validity as data (froth regime: warned when the clear liquid is below the Kister & Haas
+//        transition height; valve trays warned); the entrained-liquid rate at ψ past 0.999 is warned
+export const ENGINE_VERSION = '0.6.0';

@@ -104,3 +104,14 @@ describe("valve trays: fractional open area A_f = slot area / bubbling area (Per
     expect(withSlot.details.weepPointHoleVelocity_m_s).toBe(orifice.details.weepPointHoleVelocity_m_s);
   });
 });
+
+describe('no silent cap on the entrained liquid', () => {
+  it('warns when the fractional entrainment is past 0.999 and the entrained rate is computed at 0.999', () => {
+    // Seader & Henley (1998) definition e = ψ L/(1 − ψ): unbounded as ψ → 1; far beyond flood the fit passes 0.999
+    const t = rateTray(seaderTray, { ...seader748Bottom, vapourMassFlow_kg_h: seader748Bottom.vapourMassFlow_kg_h * 4 });
+    expect(t.details.entrainmentFraction).toBeGreaterThan(0.999);
+    expect(codes(t.warnings)).toContain('range:entrainedLiquidRate:psi');
+    expect(t.details.entrainedLiquid_kg_h).toBeCloseTo((0.999 * seader748Bottom.liquidMassFlow_kg_h) / 0.001, 3);
+    expect(codes(rateTray(seaderTray, seader748Bottom).warnings)).not.toContain('range:entrainedLiquidRate:psi');
+  });
+});

@@ -4,7 +4,8 @@ import {
   bennettEffectiveDensity, clearLiquidHeightBennett, dryTrayHeadKleinValve, dryTrayHeadOrifice, headToPascal,
   kleinBalanceHead, kleinClosedValveK, kleinOpenValveK, orificeCoefficientHughmarkOConnell, residualHeadBennett,
 } from '../../../server/engine/pressureDrop.js';
-import { IN, LB_FT3, rel } from './fixtures.js';
+import { rateTray } from '../../../server/engine/index.js';
+import { IN, LB_FT3, inventedRequest, rel, seader748Bottom, seader749Top, seaderTray } from './fixtures.js';
 
 const FT = 0.3048;
 
@@ -76,5 +77,24 @@ describe('Klein moving-valve dry pressure drop', () => {
     // balance points 1.72 × 1.3^0.5 = 1.965 m/s and 4.43 × 1.3^0.5 = 5.047 m/s (derived)
     expect(Math.abs(h(1.9646) - h(1.9644))).toBeLessThan(0.05);
     expect(Math.abs(h(5.0473) - h(5.0471))).toBeLessThan(0.05);
+  });
+});
+
+describe('Bennett validity: froth regime, sieve trays (Kister, Distillation Design 1992 Ch. 6)', () => {
+  const codes = (w: { code: string }[]) => w.map((x) => x.code);
+  it('no range warning on the printed froth-regime cases (Seader & Henley 1998, 7.48 bottom and 7.49 top)', () => {
+    for (const load of [seader748Bottom, seader749Top]) {
+      const t = rateTray(seaderTray, load);
+      expect(codes(t.warnings)).not.toContain('range:clearLiquidHeightBennett:transitionOverClearLiquid');
+      expect(codes(t.warnings)).not.toContain('bennett-valve-tray');
+    }
+  });
+  it('warns in the spray regime (clear liquid below the Kister & Haas transition height) and on valve trays', () => {
+    // same tray, a tenth of the liquid and 1.6 × the vapour: clear liquid falls below h_ct
+    const spray = rateTray(seaderTray, { ...seader749Top, liquidMassFlow_kg_h: seader749Top.liquidMassFlow_kg_h / 10, vapourMassFlow_kg_h: seader749Top.vapourMassFlow_kg_h * 1.6 });
+    expect(codes(spray.warnings)).toContain('range:clearLiquidHeightBennett:transitionOverClearLiquid');
+    expect(spray.details.clearLiquidHeight_mm).toBeGreaterThan(0); // the value is still reported
+    const valve = inventedRequest();
+    expect(codes(rateTray(valve.section, valve.trays[0]!).warnings)).toContain('bennett-valve-tray');
   });
 });
