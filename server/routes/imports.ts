@@ -36,7 +36,8 @@ export const importRoutes = defineRoutes([
     method: 'post',
     path: '/columns/:id/imports/commit',
     access: 'loads.edit',
-    summary: 'Store the confirmed import as a new load case, all or nothing (any row error → 400 with rowErrors, nothing stored)',
+    summary:
+      'Store the confirmed import as a new load case, all or nothing (any row error → 400 with the first rowErrors and errorCount, nothing stored)',
     params: uuidParams,
     body: importCommitBody,
     status: 201,
@@ -46,7 +47,7 @@ export const importRoutes = defineRoutes([
       } catch (e) {
         if (!(e instanceof ImportRowsError)) throw e;
         res.status(400);
-        return { error: e.message, details: e.details, rowErrors: e.rowErrors };
+        return { error: e.message, details: e.details, rowErrors: e.rowErrors, errorCount: e.errorCount };
       }
     },
   },

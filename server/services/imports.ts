@@ -2,15 +2,16 @@
  * Tray-profile import: preview (parse, detect header/units/numbering, convert, every row's errors) and
  * commit (all-or-nothing in one transaction: any row error stores nothing).
  */
-import { randomUUID } from 'node:crypto';
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import { ValidationError } from '../errors.js';
 import { visibleColumn } from './columnsCommon.js';
 import { detectHeader, detectNumbering } from './importsDetect.js';
 import { parseUpload } from './importsParse.js';
 import { convertRows } from './importsRows.js';
+import { keepPreview, previewRows } from './importsStash.js';
 import { insertLoadCase } from './loads.js';
 import { toLoadCaseRecord } from './loadsRead.js';
+import { IMPORT_LIMITS } from '../../shared/importLimits.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type {
   ImportCheckBody,
@@ -21,35 +22,28 @@ import type {
 } from '../../shared/types/imports.js';
 import type { LoadCaseRecord } from '../../shared/types/loads.js';
 
-/** A commit refused for row errors: the route answers 400 with every row error. */
+/** A commit refused for row errors: the route answers 400 with the row errors (the first ones listed). */
 export class ImportRowsError extends ValidationError {
-  constructor(public readonly rowErrors: ImportRowError[]) {
+  public readonly rowErrors: ImportRowError[];
+  public readonly errorCount: number;
+  constructor(all: ImportRowError[]) {
+    const rowErrors = listed(all);
     super(
-      `The file has ${rowErrors.length} error${rowErrors.length === 1 ? '' : 's'}; nothing was stored — fix the rows and import again`,
+      `The file has ${all.length} error${all.length === 1 ? '' : 's'}; nothing was stored — fix the rows and import again`,
       rowErrors.map((e) => ({ path: `row ${e.row}, ${e.column}`, message: e.message })),
     );
+    this.rowErrors = rowErrors;
+    this.errorCount = all.length;
   }
 }
 
-interface Stash {
-  userId: string;
-  columnId: string;
-  headers: string[];
-  rows: string[][];
-  firstDataRow: number;
-  fileName: string;
-  expires: number;
-}
-const TOKEN_MS = 30 * 60 * 1000;
-const stash = new Map<string, Stash>();
+const clip = (s: string, n: number): string => (s.length > n ? `${s.slice(0, n - 1)}…` : s);
 
-function keep(s: Stash): string {
-  const now = Date.now();
-  for (const [k, v] of stash) if (v.expires < now) stash.delete(k);
-  while (stash.size >= 200) stash.delete(stash.keys().next().value!);
-  const token = randomUUID();
-  stash.set(token, s);
-  return token;
+/** The errors an answer lists (IMPORT_LIMITS.listedErrors, texts clipped); the answer gives the count. */
+function listed(errors: ImportRowError[]): ImportRowError[] {
+  return errors
+    .slice(0, IMPORT_LIMITS.listedErrors)
+    .map((e) => ({ row: e.row, column: clip(e.column, 120), message: clip(e.message, 300) }));
 }
 
 export async function previewImport(
@@ -79,6 +73,10 @@ export async function previewImport(
   const rows = parsed.cells.slice(start);
   const numbering = detectNumbering(rows, det.mapping, col.numbering, det.notes);
   const firstDataRow = start + 1;
+  const cutNote =
+    parsed.cutAfterRow === null
+      ? null
+      : `Only the first ${parsed.cutAfterRow} rows were read; the file continues after row ${parsed.cutAfterRow} (at most ${IMPORT_LIMITS.rows} rows or ${IMPORT_LIMITS.totalChars.toLocaleString('en-GB')} characters are read)`;
   const { loads, errors } = convertRows({
     headers,
     rows,
@@ -89,46 +87,37 @@ export async function previewImport(
     trayCount: col.trayCount,
     columnDirection: col.numbering,
   });
-  const token = keep({
-    userId: user.id,
-    columnId,
-    headers,
-    rows,
-    firstDataRow,
-    fileName: file.originalname,
-    expires: Date.now() + TOKEN_MS,
-  });
+  const token = await keepPreview(ds.manager, user.id, columnId, { headers, rows, firstDataRow, fileName: file.originalname });
+  const short = (r: string[]) => r.map((c) => clip(c, IMPORT_LIMITS.previewCellChars));
   return {
     token,
     fileName: file.originalname,
     format: parsed.format,
     sheet: parsed.sheet,
     headerRow: det.headerIndex + 1,
-    headers,
-    rows,
+    headers: short(headers),
+    rows: rows.slice(0, IMPORT_LIMITS.previewRows).map(short),
+    rowCount: rows.length,
+    cutAfterRow: parsed.cutAfterRow,
     mapping: det.mapping,
     units: det.units,
     numbering,
     loads,
-    errors,
-    notes: det.notes,
+    errors: listed(errors),
+    errorCount: errors.length,
+    notes: cutNote ? [cutNote, ...det.notes] : det.notes,
   };
 }
 
-/** The rows to convert: from the preview token (same user and column, 30 minutes) or sent back by the client. */
-function source(
+/** The rows to convert: from the preview token (same user and column, not expired) or sent back by the client. */
+async function source(
+  em: EntityManager,
   user: SessionUser,
   columnId: string,
   body: ImportCheckBody,
-): { headers: string[]; rows: string[][]; firstDataRow: number } {
-  if (body.token) {
-    const s = stash.get(body.token);
-    if (!s || s.expires < Date.now() || s.userId !== user.id || s.columnId !== columnId)
-      throw new ValidationError('Import token expired or unknown', [
-        { path: 'token', message: 'upload the file again (a preview is kept for 30 minutes)' },
-      ]);
-    return s;
-  }
+  take = false,
+): Promise<{ headers: string[]; rows: string[][]; firstDataRow: number }> {
+  if (body.token) return previewRows(em, user.id, columnId, body.token, take);
   if (!body.headers || !body.rows)
     throw new ValidationError('Nothing to import', [{ path: 'rows', message: 'send the preview token, or headers and rows' }]);
   return { headers: body.headers, rows: body.rows, firstDataRow: body.firstDataRow ?? 2 };
@@ -142,9 +131,9 @@ export async function checkImport(
   body: ImportCheckBody,
 ): Promise<ImportCheckResult> {
   const col = await visibleColumn(ds.manager, user, columnId);
-  const { headers, rows, firstDataRow } = source(user, columnId, body);
+  const { headers, rows, firstDataRow } = await source(ds.manager, user, columnId, body);
   const { mapping, units, numbering } = body;
-  return convertRows({
+  const { loads, errors } = convertRows({
     headers,
     rows,
     firstDataRow,
@@ -154,6 +143,7 @@ export async function checkImport(
     trayCount: col.trayCount,
     columnDirection: col.numbering,
   });
+  return { loads, errors: listed(errors), errorCount: errors.length };
 }
 
 export async function commitImport(
@@ -162,9 +152,10 @@ export async function commitImport(
   columnId: string,
   body: ImportCommitBody,
 ): Promise<LoadCaseRecord> {
-  const { headers: h, rows: r, firstDataRow } = source(user, columnId, body);
   return ds.transaction(async (em) => {
     const col = await visibleColumn(em, user, columnId, true);
+    // taken from the stash in this transaction: stored with the load case, or kept when the commit fails
+    const { headers: h, rows: r, firstDataRow } = await source(em, user, columnId, body, true);
     const { loads, errors } = convertRows({
       headers: h,
       rows: r,
@@ -185,7 +176,6 @@ export async function commitImport(
       loads,
       stageMap: body.numbering.key === 'stage' && body.numbering.stageMap?.length ? body.numbering.stageMap : null,
     });
-    if (body.token) stash.delete(body.token);
     return toLoadCaseRecord(em, lc);
   });
 }

@@ -10,8 +10,10 @@ import {
   VISCOSITY_UNITS,
 } from '../types/imports.js';
 import { stageMapSchema } from './loads.js';
+import { IMPORT_LIMITS } from '../importLimits.js';
 
 const col = { type: 'integer', minimum: 0, maximum: 1000 } as const;
+const cell = { type: 'string', maxLength: IMPORT_LIMITS.cellChars } as const;
 const unit = (u: readonly string[]) => ({ type: 'string', enum: [...u] }) as const;
 
 export const importMappingSchema = {
@@ -53,8 +55,8 @@ export const importCommitBody = {
   required: ['mapping', 'units', 'numbering', 'name', 'basis', 'fileName'],
   properties: {
     token: { type: 'string', maxLength: 100 },
-    headers: { type: 'array', maxItems: 200, items: { type: 'string', maxLength: 200 } },
-    rows: { type: 'array', maxItems: 5000, items: { type: 'array', maxItems: 200, items: { type: 'string', maxLength: 200 } } },
+    headers: { type: 'array', maxItems: IMPORT_LIMITS.columns, items: cell },
+    rows: { type: 'array', maxItems: IMPORT_LIMITS.rows, items: { type: 'array', maxItems: IMPORT_LIMITS.columns, items: cell } },
     firstDataRow: { type: 'integer', minimum: 1 },
     mapping: importMappingSchema,
     units: importUnitsSchema,

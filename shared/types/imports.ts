@@ -63,7 +63,7 @@ export interface ImportRowError {
 }
 
 export interface ImportPreview {
-  /** pass back to commit instead of re-sending the rows; valid for 30 minutes, same user and column */
+  /** pass back to check and commit instead of re-sending the rows; valid for 30 minutes, same user and column */
   token: string;
   fileName: string;
   format: 'csv' | 'xlsx';
@@ -71,15 +71,22 @@ export interface ImportPreview {
   /** 1-based row of the detected header */
   headerRow: number;
   headers: string[];
-  /** data rows as read (cells as text), after the header */
+  /** the first data rows as read (cells as text, long ones clipped), after the header: IMPORT_LIMITS.previewRows */
   rows: string[][];
+  /** data rows read (the token keeps them all) */
+  rowCount: number;
+  /** set when the file was cut at the row limit: the last row read (the file continues after it) */
+  cutAfterRow: number | null;
   mapping: ImportMapping;
   units: ImportUnits;
   numbering: ImportNumbering;
   /** loads converted to SI with stored tray numbers (rows with errors left out) */
   loads: TrayLoad[];
+  /** the first row errors (IMPORT_LIMITS.listedErrors) */
   errors: ImportRowError[];
-  /** notes on detection (unmapped columns, assumed units, guessed direction) */
+  /** how many row errors there are */
+  errorCount: number;
+  /** notes on reading and detection (rows cut, unmapped columns, assumed units, guessed direction) */
   notes: string[];
 }
 
@@ -103,8 +110,9 @@ export interface ImportCommitBody {
 /** POST /columns/:id/imports/check: the commit body without name, basis and file name; stores nothing. */
 export type ImportCheckBody = Omit<ImportCommitBody, 'name' | 'basis' | 'fileName' | 'notes'>;
 
-/** Answer of the check: the converted loads (SI, stored tray numbers) and every row error. */
+/** Answer of the check: the converted loads (SI, stored tray numbers), the first row errors and their count. */
 export interface ImportCheckResult {
   loads: TrayLoad[];
   errors: ImportRowError[];
+  errorCount: number;
 }

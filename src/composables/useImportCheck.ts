@@ -36,6 +36,8 @@ export function useImportCheck(
     numbering: refs.numbering.value,
   });
   const errors = ref<ImportRowError[]>([]);
+  /** all row errors (the server lists the first ones) */
+  const errorCount = ref(0);
   const trays = ref(0);
   const checking = ref(false);
   const failure = ref<string | null>(null);
@@ -73,7 +75,13 @@ export function useImportCheck(
         { quiet: true },
       );
       if (n !== seq) return;
-      [checkedKey, errors.value, trays.value, failure.value] = [key, r.errors, r.loads.length, null];
+      [checkedKey, errors.value, errorCount.value, trays.value, failure.value] = [
+        key,
+        r.errors,
+        r.errorCount,
+        r.loads.length,
+        null,
+      ];
     } catch (e) {
       if (n !== seq) return;
       if (!(e instanceof ApiError)) throw e;
@@ -88,7 +96,13 @@ export function useImportCheck(
     clearTimeout(timer);
     seq++;
     checkedKey = keyOf(p);
-    [errors.value, trays.value, failure.value, checking.value] = [p.errors, p.loads.length, null, false];
+    [errors.value, errorCount.value, trays.value, failure.value, checking.value] = [
+      p.errors,
+      p.errorCount,
+      p.loads.length,
+      null,
+      false,
+    ];
   }
 
   /** Stop a pending check (the commit answers with the rows' errors itself). */
@@ -109,5 +123,5 @@ export function useImportCheck(
 
   /** storing waits until the map is right */
   const blocked = computed(() => mapFaults.value.length > 0);
-  return { errors, trays, checking, failure, blocked, run, reset, cancel };
+  return { errors, errorCount, trays, checking, failure, blocked, run, reset, cancel };
 }

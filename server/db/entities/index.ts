@@ -1,4 +1,5 @@
 import { AuditEntry } from './AuditEntry.js';
+import { ImportPreviewEntity } from './ImportPreview.js';
 import { LoadCase } from './LoadCase.js';
 import { PumpAround } from './PumpAround.js';
 import { RatingRun } from './RatingRun.js';
@@ -16,10 +17,11 @@ import { TowerColumn } from './TowerColumn.js';
 import { User } from './User.js';
 
 export { MailOutbox };
+export { ImportPreviewEntity };
 export { Inspection, InspectionPhoto, InspectionTray, PunchItemEntity };
 export { LoadCase, PumpAround, RatingRun, TraySection };
 export { PumpAroundStudy };
 export { AuditEntry, ProcessUnit, Site, SiteMember, TowerColumn, User };
 
 /** Every entity; add new ones here. */
-export const entities = [User, Site, SiteMember, ProcessUnit, TowerColumn, AuditEntry, MailOutbox, PumpAroundStudy, TraySection, PumpAround, LoadCase, RatingRun, Inspection, InspectionTray, InspectionPhoto, PunchItemEntity];
+export const entities = [User, Site, SiteMember, ProcessUnit, TowerColumn, AuditEntry, MailOutbox, PumpAroundStudy, TraySection, PumpAround, LoadCase, RatingRun, Inspection, InspectionTray, InspectionPhoto, PunchItemEntity, ImportPreviewEntity];

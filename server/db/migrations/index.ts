@@ -6,6 +6,7 @@ import { PumpAroundStudies1764660000000 } from './1764660000000-PumpAroundStudie
 import { RunResultsCompressed1764670000000 } from './1764670000000-RunResultsCompressed.js';
 import { AsFoundDesignRuns1764740000000 } from './1764740000000-AsFoundDesignRuns.js';
 import { UserSessions1764680000000 } from './1764680000000-UserSessions.js';
+import { ImportPreviews1764690000000 } from './1764690000000-ImportPreviews.js';
 
 /** Every migration in order; add new ones at the end. */
-export const migrations = [Foundation1764633600000, MailOutbox1764650000000, PumpAroundStudies1764660000000, ColumnsLoadsRuns1764640000000, Inspections1764650000001, RunResultsCompressed1764670000000, AsFoundDesignRuns1764740000000, UserSessions1764680000000];
+export const migrations = [Foundation1764633600000, MailOutbox1764650000000, PumpAroundStudies1764660000000, ColumnsLoadsRuns1764640000000, Inspections1764650000001, RunResultsCompressed1764670000000, AsFoundDesignRuns1764740000000, UserSessions1764680000000, ImportPreviews1764690000000];
