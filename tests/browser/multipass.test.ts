@@ -77,5 +77,12 @@ describe('multipass trays in Chromium', () => {
     expect(await table.locator('tbody tr').nth(0).textContent()).toContain('side downcomer');
     expect(await table.locator('tbody tr').nth(2).textContent()).toContain('centre downcomer');
     await shot(b.page, 'run-per-pass');
+    // the printable report carries the same per-pass table, and the imbalance limit in its limits list
+    await b.page.goto(`${FROTHLINE_URL}/runs/${run.id}/report`);
+    await b.page.locator('[data-test="tray-passes"]').waitFor();
+    expect(await b.page.locator('[data-test="tray-passes"] tbody tr').count()).toBe(12);
+    await b.page.getByRole('cell', { name: 'Pass L/V imbalance (multipass layouts)' }).waitFor();
+    await b.page.locator('[data-test="tray-passes"]').scrollIntoViewIfNeeded();
+    await shot(b.page, 'run-report-per-pass');
   });
 });
