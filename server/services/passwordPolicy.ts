@@ -8,10 +8,9 @@ import { ZxcvbnFactory } from '@zxcvbn-ts/core';
 import * as common from '@zxcvbn-ts/language-common';
 import * as en from '@zxcvbn-ts/language-en';
 import { ValidationError } from '../errors.js';
+import { PASSWORD_RULES } from '../../shared/schemas/auth.js';
 
-export const PASSWORD_MIN_LENGTH = 12;
-export const PASSWORD_MAX_BYTES = 72;
-export const PASSWORD_MIN_SCORE = 3;
+const { minLength: PASSWORD_MIN_LENGTH, maxBytes: PASSWORD_MAX_BYTES, minScore: PASSWORD_MIN_SCORE } = PASSWORD_RULES;
 
 let checker: ZxcvbnFactory | null = null;
 // built on first use: the dictionaries take a moment to load and most requests never need them

@@ -1,5 +1,11 @@
 import { roleSchema } from './common.js';
 
+/**
+ * What a new password must meet (server/services/passwordPolicy.ts applies it; the client repeats the
+ * length checks as hints): bcrypt uses only the first 72 bytes of a password, so longer ones are refused.
+ */
+export const PASSWORD_RULES = { minLength: 12, maxBytes: 72, minScore: 3 } as const;
+
 export const signInBody = {
   type: 'object',
   properties: {

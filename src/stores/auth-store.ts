@@ -2,7 +2,7 @@ import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { api, setUnauthorizedHandler } from '../boot/api';
 import { can, type Permission } from '../../shared/permissions';
-import type { SessionUser, SignInBody, UnitSystem } from '../../shared/types/api';
+import type { ChangePasswordBody, SessionUser, SignInBody, UnitSystem } from '../../shared/types/api';
 
 export const useAuthStore = defineStore('auth', () => {
   const user = ref<SessionUser | null>(null);
@@ -32,8 +32,13 @@ export const useAuthStore = defineStore('auth', () => {
     await api.post('/auth/sign-out');
     user.value = null;
   }
+  /** Change the signed-in user's password; the server signs out their other sessions. */
+  async function changePassword(currentPassword: string, newPassword: string): Promise<void> {
+    const body: ChangePasswordBody = { currentPassword, newPassword };
+    user.value = (await api.post<{ user: SessionUser }>('/auth/password', body, { quiet: true })).user;
+  }
   async function setUnitSystem(u: UnitSystem): Promise<void> {
     user.value = (await api.put<{ user: SessionUser }>('/auth/preferences', { unitSystem: u })).user;
   }
-  return { user, loaded, signedIn, unitSystem, allows, load, signIn, signOut, setUnitSystem };
+  return { user, loaded, signedIn, unitSystem, allows, load, signIn, signOut, changePassword, setUnitSystem };
 });
