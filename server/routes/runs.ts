@@ -4,6 +4,7 @@ import { relabelRun, reviewRun } from '../services/review.js';
 import { createRunFromBody } from '../services/runs.js';
 import { compareRuns } from '../services/runsCompare.js';
 import { getRun, listRuns, runWindow } from '../services/runsRead.js';
+import { runReportPdf } from '../services/runReportPdf.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import { exportQuery } from '../../shared/schemas/loads.js';
 import {
@@ -60,6 +61,19 @@ export const runRoutes = defineRoutes([
     summary: 'A rating run with snapshot, results and review history',
     params: uuidParams,
     handler: async ({ ds, user, params }) => getRun(ds, user, (params as Id).id),
+  },
+  {
+    method: 'get',
+    path: '/runs/:id/report.pdf',
+    access: 'read',
+    summary: 'Printable rating report (PDF, A4 landscape): review record, cautions, charts, per-tray table, methods',
+    params: uuidParams,
+    handler: async ({ ds, user, params, res }) => {
+      const { pdf, filename } = await runReportPdf(ds, user, (params as Id).id);
+      res.setHeader('Content-Type', 'application/pdf');
+      res.setHeader('Content-Disposition', `inline; filename="${filename}"`);
+      res.end(pdf);
+    },
   },
   {
     method: 'patch',

@@ -2,34 +2,25 @@
  * PDF report of an inspection (pdfmake 0.3, Noto Sans shipped with @expo-google-fonts/noto-sans):
  * cover with safety cautions, per-tray sheets, tolerance table, photo log, punch list, signatures.
  */
-import { createRequire } from 'node:module';
-import path from 'node:path';
 import type { DataSource } from 'typeorm';
 import { InspectionPhoto } from '../db/entities/InspectionPhoto.js';
 import { getObjectBuffer } from '../storage/s3.js';
 import { getInspection } from './inspections.js';
+import { pdfDateTime, pdfFileName, plainText, renderPdf, type Content } from './pdfEngine.js';
+import { ROLE_LABELS, type Role } from '../../shared/permissions.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { InspectionRecord, InspectionTrayRecord, MeasurementCheck } from '../../shared/types/inspections.js';
+import type { InspectionRecord, InspectionStatus, InspectionTrayRecord, MeasurementCheck, PunchPriority, ToleranceItem } from '../../shared/types/inspections.js';
 
-type Content = Record<string, unknown> | string | Content[];
-interface PdfMake {
-  setFonts(f: Record<string, Record<string, string>>): void;
-  setUrlAccessPolicy(fn: (url: string) => boolean): void;
-  setLocalAccessPolicy(fn: (p: string) => boolean): void;
-  createPdf(doc: Record<string, unknown>): { getBuffer(): Promise<Buffer> };
-}
-const require = createRequire(import.meta.url);
-const fontDir = path.dirname(require.resolve('@expo-google-fonts/noto-sans/package.json'));
-let pdfmake: PdfMake | null = null;
-function engine(): PdfMake {
-  if (pdfmake) return pdfmake;
-  pdfmake = require('pdfmake') as PdfMake;
-  const f = (dir: string) => path.join(fontDir, dir, `NotoSans_${dir}.ttf`);
-  pdfmake.setFonts({ NotoSans: { normal: f('400Regular'), bold: f('700Bold'), italics: f('400Regular_Italic'), bolditalics: f('700Bold_Italic') } });
-  pdfmake.setUrlAccessPolicy(() => false);
-  pdfmake.setLocalAccessPolicy((p) => path.resolve(p).startsWith(fontDir));
-  return pdfmake;
-}
+/** Words for what the record stores as codes. */
+const ITEM_WORDS: Record<ToleranceItem, string> = {
+  weirHeight: 'Outlet weir height',
+  downcomerClearance: 'Downcomer clearance',
+  traySpacing: 'Tray spacing',
+  levelness: 'Levelness (high − low)',
+};
+const STATUS_WORDS: Record<InspectionStatus, string> = { draft: 'draft', 'inspector-signed': 'signed by the inspector', 'engineer-signed': 'signed off' };
+const PRIORITY_WORDS: Record<PunchPriority, string> = { 'before-box-up': 'Before box-up', 'if-time-allows': 'If time allows', 'next-turnaround': 'Next turnaround' };
+const itemText = (c: MeasurementCheck) => `${ITEM_WORDS[c.item]}${c.point !== null ? `, point ${c.point + 1}` : ''}`;
 
 export const SAFETY_CAUTIONS = [
   'Column entry is permit-required confined-space work (OSHA 29 CFR 1910.146): atmosphere testing (O2, LEL, H2S, CO), an attendant (hole watch) with tested radio contact, and a rescue plan.',
@@ -81,7 +72,7 @@ function toleranceTable(r: InspectionRecord): Content {
   for (const t of r.trays)
     for (const [state, cs] of [['as found', t.checks.asFound], ['as left', t.checks.asLeft]] as const)
       for (const c of cs)
-        body.push([String(t.tray), String(t.pass), state, c.item + (c.point !== null ? ` #${c.point + 1}` : ''), String(c.measured), c.message,
+        body.push([String(t.tray), String(t.pass), state, itemText(c), `${c.measured} mm`, c.message,
           { text: verdict(c), color: c.pass === false ? '#b00020' : c.pass ? '#1b5e20' : '#555555', bold: c.pass === false }]);
   return { table: { headerRows: 1, widths: ['auto', 'auto', 'auto', 'auto', 'auto', '*', 'auto'], body }, fontSize: 8 };
 }
@@ -95,22 +86,20 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
     photos.push({
       columns: [
         img ? { image: `data:image/jpeg;base64,${img.toString('base64')}`, width: 160 } : { text: '(photo unavailable)', width: 160 },
-        { text: `Tray ${p.tray ?? '—'}${p.pass ? ` pass ${p.pass}` : ''} · ${p.finding || 'general'}\n${p.caption}\n${p.uploadedAt.toISOString()}`, margin: [8, 0, 0, 0] },
+        { text: `Tray ${p.tray ?? '—'}${p.pass ? ` pass ${p.pass}` : ''} · ${p.finding || 'general'}\n${p.caption}\nTaken or uploaded ${pdfDateTime(p.uploadedAt)}`, margin: [8, 0, 0, 0] },
       ],
       margin: [0, 0, 0, 8],
     });
   }
-  const sig = (label: string, s: InspectionRecord['inspectorSignature']) => [label, s ? `${s.name} (${s.role}), ${s.at}` : 'not signed'];
-  const doc = {
-    pageSize: 'A4',
-    defaultStyle: { font: 'NotoSans', fontSize: 9 },
-    styles: { h1: { fontSize: 16, bold: true }, h2: { fontSize: 12, bold: true, margin: [0, 8, 0, 4] } },
-    footer: (page: number, pages: number) => ({ text: `${r.columnTag} · ${r.turnaround} · page ${page} of ${pages}`, alignment: 'center', fontSize: 7 }),
+  const sig = (label: string, s: InspectionRecord['inspectorSignature']) => [label, s ? `${s.name} (${ROLE_LABELS[s.role as Role] ?? s.role}), ${pdfDateTime(s.at)}` : 'not signed'];
+  const pdf = await renderPdf({
+    header: `${r.columnTag} · ${r.turnaround} · turnaround inspection`,
+    footer: `Inspection record · ${STATUS_WORDS[r.status]} · printed ${pdfDateTime(new Date())}`,
     content: [
       { text: `Turnaround inspection — ${r.columnTag}`, style: 'h1' },
-      { text: `${r.turnaround} · ${r.startDate}${r.endDate ? ` – ${r.endDate}` : ''} · status ${r.status}` },
+      { text: `${r.turnaround} · ${r.startDate}${r.endDate ? ` – ${r.endDate}` : ''} · ${STATUS_WORDS[r.status]}` },
       { text: `Inspector ${r.inspectorName ?? '—'} · entry permit ${r.permitRef || '—'} · gas test ${r.gasTestRef || '—'} (references recorded, not issued)` },
-      { text: `Tolerances: ${r.ruleSet.name}; levelness class ${r.rules.levelnessClass}. Source: ${r.ruleSet.source}` },
+      { text: `Tolerances: ${r.ruleSet.name}; levelness class ${r.rules.levelnessClass}. Source: ${plainText(r.ruleSet.source)}` },
       { text: 'Safety cautions', style: 'h2' },
       { ul: SAFETY_CAUTIONS },
       { text: 'Signatures', style: 'h2' },
@@ -119,8 +108,8 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
       r.punch.length
         ? { table: { headerRows: 1, widths: ['auto', 'auto', 'auto', '*', '*', 'auto', 'auto', 'auto'], body: [
             ['#', 'Tray', 'Pass', 'Finding', 'Action', 'Priority', 'Owner', 'Status'].map((h) => ({ text: h, bold: true })),
-            ...r.punch.map((p) => [String(p.itemNo), String(p.tray ?? '—'), String(p.pass ?? '—'), p.finding, p.action, p.priority, p.owner,
-              p.status === 'closed' ? `closed ${p.closedByName ?? ''} ${p.closedAt ?? ''}` : 'open']),
+            ...r.punch.map((p) => [String(p.itemNo), String(p.tray ?? '—'), String(p.pass ?? '—'), p.finding, p.action, PRIORITY_WORDS[p.priority], p.owner,
+              p.status === 'closed' ? `closed by ${p.closedByName ?? '—'}${p.closedAt ? `, ${pdfDateTime(p.closedAt)}` : ''}` : 'open']),
           ] }, fontSize: 8 }
         : { text: 'No punch items.' },
       { text: 'Tolerance checks', style: 'h2' },
@@ -130,7 +119,6 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
       ...r.trays.flatMap(traySheet),
       { text: 'Screening record: hydraulic consequences need confirmation by the internals vendor and licensed engineers; site permits and local codes govern.', italics: true, margin: [0, 12, 0, 0] },
     ],
-  };
-  const pdf = await engine().createPdf(doc).getBuffer();
-  return { pdf, filename: `inspection-${r.columnTag}-${r.turnaround}`.replace(/[^A-Za-z0-9._-]+/g, '_') + '.pdf' };
+  });
+  return { pdf, filename: pdfFileName('inspection', r.columnTag, r.turnaround) };
 }

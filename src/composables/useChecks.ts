@@ -1,37 +1,8 @@
-import type { CheckName, CheckStatus } from '../../shared/types/rating';
+import type { CheckStatus } from '../../shared/types/rating';
 import type { ReviewStatus } from '../../shared/types/runs';
 import { quantityOfEngineUnit, type QuantityId } from '../../shared/units';
 
-/** Our own names for the checks (trade terms). */
-export const CHECK_LABELS: Record<CheckName, string> = {
-  jetFlood: 'Jet flood',
-  entrainment: 'Entrainment',
-  weeping: 'Weep margin',
-  pressureDrop: 'Tray ΔP',
-  weirLoading: 'Weir loading',
-  liquidLoad: 'Weir crest',
-  downcomerBackup: 'Downcomer backup',
-  downcomerInletVelocity: 'Downcomer inlet velocity',
-  downcomerResidenceTime: 'Downcomer residence',
-  downcomerSeal: 'Downcomer seal',
-};
-
-/** Short column headers for dense tables. */
-export const CHECK_SHORT: Record<CheckName, string> = {
-  jetFlood: 'Flood',
-  entrainment: 'Entr.',
-  weeping: 'Weep',
-  pressureDrop: 'ΔP',
-  weirLoading: 'Weir load',
-  liquidLoad: 'Crest',
-  downcomerBackup: 'DC backup',
-  downcomerInletVelocity: 'DC inlet',
-  downcomerResidenceTime: 'DC resid.',
-  downcomerSeal: 'DC seal',
-};
-
-/** Status words of our own: within the limit, close to it, beyond it. */
-export const STATUS_LABELS: Record<CheckStatus, string> = { ok: 'within', near: 'close', over: 'beyond' };
+export { CHECK_LABELS, CHECK_SHORT, REVIEW_LABELS, STATUS_LABELS } from '../../shared/checkLabels';
 /** CSS class per status (colours in src/css/app.scss). */
 export const statusClass = (s: CheckStatus): string => `fl-status-${s}`;
 /** Quasar colour per status for chips and bars. */
@@ -39,12 +10,6 @@ export const STATUS_COLORS: Record<CheckStatus, string> = { ok: 'primary', near:
 /** Hex colours per status for charts (same as app.scss). */
 export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#b26a12', over: '#b3261e' };
 
-export const REVIEW_LABELS: Record<ReviewStatus, string> = {
-  draft: 'Working copy',
-  submitted: 'Awaiting review',
-  approved: 'Approved',
-  returned: 'Returned',
-};
 export const REVIEW_COLORS: Record<ReviewStatus, string> = {
   draft: 'grey-7',
   submitted: 'info',
