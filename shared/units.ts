@@ -27,6 +27,12 @@ export const N_PER_LBF = 4.4482216152605;
 export const PA_PER_PSI = N_PER_LBF / (M_PER_IN * M_PER_IN);
 /** 1 lb/ft³ = 16.018 46 kg/m³ (NIST SP 811 B.9 gives 1.601 846 E+01; derived from the exact lb and ft) */
 export const KG_M3_PER_LB_FT3 = KG_PER_LB / M_PER_FT ** 3;
+/** 1 in = 25.4 mm exactly */
+export const MM_PER_IN = M_PER_IN * 1000;
+/** 1 ft² = 0.092 903 04 m² exactly */
+export const M2_PER_FT2 = M_PER_FT ** 2;
+/** 1 US gal/min = 6.309 020 E−05 m³/s (NIST SP 811 B.9; derived from the exact US gallon) */
+export const M3_S_PER_USGPM = M3_PER_USGAL / 60;
 
 export type QuantityId =
   | 'massFlow'

@@ -3,10 +3,10 @@
  * method options, the engine version) and the engine results, rated section by section and merged by tray.
  */
 import type { DataSource, EntityManager } from 'typeorm';
+import { encodeJson, encodeResults } from '../db/codec/index.js';
 import { RatingRun } from '../db/entities/RatingRun.js';
 import { ENGINE_VERSION, rateSection, summarise, validateRatingRequest } from '../engine/index.js';
 import { ConflictError, NotFoundError, ValidationError, type ErrorDetail } from '../errors.js';
-import { encodeJson, encodeResults } from './runsPack.js';
 import { forgetRunInputs, guardOf, insertRunWithAudit, runInputsCache, runInputsMemo, type NewRun } from './runsStore.js';
 import { toRunSummary } from './runsRead.js';
 import type { SessionUser } from '../../shared/types/api.js';

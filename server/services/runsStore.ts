@@ -3,7 +3,7 @@
  * round trip) and one write (the run and its audit row in one statement, so it is atomic without an
  * explicit transaction; runs created at the same moment share that statement, db/writeBatcher.ts). Run
  * creation is the busiest write of the API (bench/api.ts); snapshot and results are sent compressed
- * (services/runsPack.ts).
+ * (db/codec).
  *
  * The read is kept in a small cache keyed by column and load case (runInputsCache below). The write then
  * carries a guard: it inserts only if the column, the load case and every section of the column still
@@ -17,7 +17,7 @@ import { driverPool, preparedQuery } from '../db/prepared.js';
 import { WriteBatcher } from '../db/writeBatcher.js';
 import { NotFoundError } from '../errors.js';
 import { siteFilterSql } from './access.js';
-import { encodeJson } from './runsPack.js';
+import { encodeJson } from '../db/codec/index.js';
 import type { RatingRun } from '../db/entities/RatingRun.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { RatingRequest, TrayLoad } from '../../shared/types/rating.js';
@@ -75,7 +75,7 @@ export async function readRunInputs(
   return rows[0];
 }
 
-/** A run to insert; its results go in packed (services/runsPack.ts). */
+/** A run to insert; its results go in packed (db/codec). */
 export type NewRun = Omit<RatingRun, 'id' | 'createdAt' | 'updatedAt' | 'version' | 'loadCaseName' | 'results'>;
 
 /**

@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import {
+  KG_M3_PER_LB_FT3,
+  M2_PER_FT2,
+  M3_S_PER_USGPM,
+  MM_PER_IN,
   QUANTITIES,
   convert,
   detectUnit,
@@ -29,6 +33,13 @@ describe('conversions against published factors', () => {
     expect(rel(convert('density', 1, 'lb/ft³', 'kg/m³'), 16.01846)).toBeLessThan(5e-7);
     // field-practice.md §7 [D]: 1 lb/ft³ = 16.018 kg/m³
     expect(convert('density', 1, 'lb/ft3', 'kg/m3')).toBeCloseTo(16.018, 3);
+  });
+  it('one table of factors: the constants the engine tests use are the ones conversions use', () => {
+    expect(KG_M3_PER_LB_FT3).toBe(convert('density', 1, 'lb/ft³', 'kg/m³'));
+    expect(MM_PER_IN).toBe(25.4); // exact: 1 in = 2.54 cm (NIST SP 811 B.8)
+    expect(M2_PER_FT2).toBeCloseTo(0.09290304, 15); // exact: 1 ft² = 9.290 304 E−02 m² (NIST SP 811 B.8)
+    // NIST SP 811 B.8: gallon (U.S.) per minute → m³/s 6.309 020 E−05
+    expect(rel(M3_S_PER_USGPM, 6.30902e-5)).toBeLessThan(5e-7);
   });
   it('surface tension and viscosity are numerically equal between their systems', () => {
     expect(convert('surfaceTension', 21.7, 'dyn/cm', 'mN/m')).toBe(21.7); // exact: 1 dyn/cm = 1e-3 N/m (NIST SP 811 B.8)

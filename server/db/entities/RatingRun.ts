@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
 import type { ReviewEntry, ReviewStatus, RunKind, RunResults, RunSnapshot } from '../../../shared/types/runs.js';
 import type { CheckName } from '../../../shared/types/rating.js';
-import { resultsTransformer, snapshotTransformer } from '../../services/runsPack.js';
+import { resultsTransformer, snapshotTransformer } from '../codec/index.js';
 
 export interface RunSummaryColumns {
   controllingCheck: CheckName;
@@ -21,11 +21,11 @@ export class RatingRun {
   @Column({ type: 'text' }) kind: RunKind;
   @Column({ type: 'text', default: 'draft' }) status: ReviewStatus;
   @Column({ type: 'text', name: 'engine_version' }) engineVersion: string;
-  /** stored as compressed JSON in a bytea (services/runsPack.ts) */
+  /** stored as compressed JSON in a bytea (db/codec) */
   @Column({ type: 'bytea', transformer: snapshotTransformer }) snapshot: RunSnapshot;
   /** the snapshot's load-case name, for lists (the snapshot itself is compressed) */
   @Column({ type: 'text', name: 'load_case_name', default: '' }) loadCaseName: string;
-  /** stored packed and compressed as bytea (services/runsPack.ts), read back as RunResults */
+  /** stored packed and compressed as bytea (db/codec), read back as RunResults */
   @Column({ type: 'bytea', transformer: resultsTransformer }) results: RunResults;
   @Column({ type: 'jsonb' }) summary: RunSummaryColumns;
   @Column({ type: 'jsonb', default: () => `'[]'::jsonb` }) reviews: ReviewEntry[];

@@ -6,7 +6,7 @@
  * A_B = A_T − 2 A_d = 22.6 ft²; derived, not published).
  */
 import type { RatingRequest, SectionGeometry, TrayLoad } from '../../../shared/types/rating.js';
-import { KG_M3_PER_LB_FT3, KG_PER_LB, M2_PER_FT2, M3_S_PER_GPM, MM_PER_IN } from '../../../server/engine/units.js';
+import { KG_M3_PER_LB_FT3, KG_PER_LB, M2_PER_FT2, M3_S_PER_USGPM, MM_PER_IN } from '../../../shared/units.js';
 
 export const IN = MM_PER_IN;
 export const FT_S = 0.3048;
@@ -37,7 +37,7 @@ export const seaderTray: SectionGeometry = {
 export const seader748Bottom: TrayLoad = {
   tray: 1,
   vapourMassFlow_kg_h: 1376 * 18.1 * KG_PER_LB,
-  liquidMassFlow_kg_h: 97.9 * M3_S_PER_GPM * 3600 * 59.5 * LB_FT3,
+  liquidMassFlow_kg_h: 97.9 * M3_S_PER_USGPM * 3600 * 59.5 * LB_FT3,
   vapourDensity_kg_m3: 0.0408 * LB_FT3,
   liquidDensity_kg_m3: 59.5 * LB_FT3,
   surfaceTension_mN_m: 58,
@@ -47,7 +47,7 @@ export const seader748Bottom: TrayLoad = {
 export const seader749Top: TrayLoad = {
   tray: 2,
   vapourMassFlow_kg_h: 1944 * 30.9 * KG_PER_LB,
-  liquidMassFlow_kg_h: 77.2 * M3_S_PER_GPM * 3600 * 47.2 * LB_FT3,
+  liquidMassFlow_kg_h: 77.2 * M3_S_PER_USGPM * 3600 * 47.2 * LB_FT3,
   vapourDensity_kg_m3: 0.0703 * LB_FT3,
   liquidDensity_kg_m3: 47.2 * LB_FT3,
   surfaceTension_mN_m: 20,
