@@ -1,9 +1,11 @@
 /**
  * Stored runs keep the engine version that rated them: a run stored by an earlier engine (0.2.0, in the
- * FRB2 results layout of that time) still opens, exports, and says which engine version rated it.
+ * FRB2 results layout of that time, re-encoded by migration 1764750000000 as every such row is) still
+ * opens, exports, and says which engine version rated it.
  */
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { RunResultsByName1764750000000 } from '../../server/db/migrations/1764750000000-RunResultsByName.js';
 import { ENGINE_VERSION } from '../../server/engine/index.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { loads, makePlant, section, type Plant } from './columnsFixture.js';
@@ -37,6 +39,12 @@ describe('runs rated by an earlier engine version', () => {
     await ctx.ds.query('UPDATE rating_runs SET engine_version = $1, results = $2 WHERE id = $3', [
       '0.2.0', Buffer.from(frb2.stored, 'base64'), old.id,
     ]);
+    const q = ctx.ds.createQueryRunner();
+    try {
+      await new RunResultsByName1764750000000().up(q);
+    } finally {
+      await q.release();
+    }
 
     const a = await engineer.get(`/api/runs/${current.id}`);
     expect(a.status).toBe(200);
