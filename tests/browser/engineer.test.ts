@@ -164,6 +164,14 @@ describe('engineer path in Chromium', () => {
     expect(await b.page.locator('[data-test="tray-table"] tr.fl-row-over').count()).toBe(over);
     await shot(b.page, 'engineer-run-trays');
 
+    // the demo top section has moving valves: Klein's balance points and the valve state per tray
+    await b.page.getByRole('tab', { name: 'Moving valves' }).click();
+    const valveRows = b.page.locator('[data-test="tray-valves"] tbody tr');
+    await valveRows.first().waitFor();
+    expect(await valveRows.count()).toBeGreaterThan(0);
+    expect(await valveRows.first().locator('td').nth(4).textContent()).toMatch(/^(closed|partly open|all open)$/);
+    await shot(b.page, 'engineer-run-valves');
+
     await b.page.getByRole('tab', { name: 'Charts' }).click();
     await b.page.locator('[data-test="chart-percent"] .main-svg').first().waitFor({ timeout: 30000 });
     await b.page.locator('[data-test="chart-traffic"] .main-svg').first().waitFor();
