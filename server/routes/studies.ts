@@ -3,6 +3,8 @@ import { estimateLatentHeat } from '../engine/pumpAround/index.js';
 import { ValidationError } from '../errors.js';
 import { createStudy, getStudy, listStudies } from '../services/studies.js';
 import { reviewStudy, type StudyAction } from '../services/studyReview.js';
+import { exportStudy, studyReportPdf } from '../services/studyReportFiles.js';
+import { exportQuery } from '../../shared/schemas/loads.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import { createStudySchema, latentHeatSchema, studyReviewSchema } from '../../shared/schemas/studies.js';
 import type { CreateStudyBody, LatentHeatAnswer, LatentHeatBody, StudyReviewBody } from '../../shared/types/studies.js';
@@ -44,6 +46,31 @@ export const studyRoutes = defineRoutes([
     summary: 'One pump-around duty study: inputs snapshot, result per duty, review state',
     params: uuidParams,
     handler: ({ ds, user, params }) => getStudy(ds, user, (params as { id: string }).id),
+  },
+  {
+    method: 'get',
+    path: '/studies/:id/report.pdf',
+    access: 'read',
+    summary: 'Printable study report (PDF): inputs, duties found, traffic at the base duty, review record, cautions',
+    params: uuidParams,
+    handler: async ({ ds, user, params, res }) => {
+      const { pdf, filename } = await studyReportPdf(ds, user, (params as { id: string }).id);
+      res.setHeader('Content-Type', 'application/pdf');
+      res.setHeader('Content-Disposition', `inline; filename="${filename}"`);
+      res.end(pdf);
+    },
+  },
+  {
+    method: 'get',
+    path: '/studies/:id/export',
+    access: 'read',
+    summary: 'Download the study (inputs, duties found, traffic at the base duty, cautions) as CSV or XLSX (?format=csv|xlsx)',
+    params: uuidParams,
+    query: exportQuery,
+    handler: async ({ ds, user, params, query, res }) => {
+      const file = await exportStudy(ds, user, (params as { id: string }).id, (query as { format: 'csv' | 'xlsx' }).format);
+      res.attachment(file.fileName).type(file.contentType).send(file.body);
+    },
   },
   review('submit', 'ratings.run', 'Submit a draft or returned study for review (author)'),
   review('approve', 'reviews.approve', 'Approve a submitted study (reviewer, not the author); it becomes read-only'),

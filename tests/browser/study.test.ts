@@ -161,7 +161,10 @@ describe('pump-around study page in Chromium', () => {
 
   it('the author submits the copy for review; a specialist returns it, then approves it', async () => {
     await b.page.getByRole('button', { name: 'Submit for review' }).click();
+    await b.page.getByRole('dialog').getByLabel('Note for the reviewer (optional)').fill('Copy on the summer case; see tray 3');
+    await b.page.getByRole('dialog').getByRole('button', { name: 'Submit', exact: true }).click();
     await b.page.locator('[data-test=review-submitted]').waitFor();
+    expect(await b.page.locator('[data-test=study-reviews]').innerText()).toMatch(/Submitted by[\s\S]*summer case; see tray 3/);
     await b.context.clearCookies();
     await signInAs(b.page, 'internals-specialist');
     await b.page.goto(copyUrl);
@@ -176,6 +179,7 @@ describe('pump-around study page in Chromium', () => {
     await signInAs(b.page, 'process-engineer');
     await b.page.goto(copyUrl);
     await b.page.getByRole('button', { name: 'Submit for review' }).click();
+    await b.page.getByRole('dialog').getByRole('button', { name: 'Submit', exact: true }).click();
     await b.page.locator('[data-test=review-submitted]').waitFor();
     await b.context.clearCookies();
     await signInAs(b.page, 'internals-specialist');
