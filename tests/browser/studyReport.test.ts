@@ -50,7 +50,8 @@ describe('study report and exports', () => {
 
   it('the XLSX has one sheet per part', async () => {
     const wb = new ExcelJS.Workbook();
-    await wb.xlsx.load(await (await fetchLink('XLSX')).body());
+    const body = await (await fetchLink('XLSX')).body();
+    await wb.xlsx.load(body.buffer.slice(body.byteOffset, body.byteOffset + body.byteLength) as ArrayBuffer);
     expect(wb.worksheets.map((w) => w.name)).toEqual(['Inputs', 'Duties found', 'Traffic at base', 'Cautions']);
     expect(wb.getWorksheet('Traffic at base')!.rowCount).toBeGreaterThan(10);
   });
