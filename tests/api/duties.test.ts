@@ -115,7 +115,9 @@ describe('inspection countersignature', () => {
 
 describe('review approval is never given by the author', () => {
   it('rating run: the author cannot approve or return it; another reviewer can', async () => {
-    const created = await specialist.post('/api/runs').send({ columnId: fx.columnId, loadCaseId: fx.loadCaseId });
+    // a label of its own: other tests find their notices by run label
+    const label = `Duties check ${Date.now().toString(36)}`;
+    const created = await specialist.post('/api/runs').send({ columnId: fx.columnId, loadCaseId: fx.loadCaseId, label });
     expect(created.status, JSON.stringify(created.body)).toBe(201);
     const sub = await specialist.post(`/api/runs/${created.body.id}/submit`).send({ version: created.body.version });
     expect(sub.status).toBe(200);
@@ -133,7 +135,7 @@ describe('review approval is never given by the author', () => {
   it('pump-around study: the author cannot approve it; another reviewer can', async () => {
     const sfx = await makeStudyColumn(ctx.ds);
     const author = (await signedIn(ctx, 'internals-specialist', [sfx.siteId])).agent;
-    const s = await author.post(`/api/columns/${sfx.columnId}/studies`).send(exampleBody(sfx));
+    const s = await author.post(`/api/columns/${sfx.columnId}/studies`).send({ ...exampleBody(sfx), label: `Duties study ${Date.now().toString(36)}` });
     expect(s.status, JSON.stringify(s.body)).toBe(201);
     const sub = await author.post(`/api/studies/${s.body.id}/submit`).send({ version: s.body.version });
     expect(sub.status).toBe(200);
