@@ -28,7 +28,7 @@ export const fairFloodCapacityLygerosMagoulas = method(
   },
   {
     label: 'Fair (1961) jet flood, Lygeros & Magoulas fit',
-    source: "Perry's Chemical Engineers' Handbook 8th ed. eq. (14-90); Lygeros & Magoulas, Hydrocarbon Process. 65(12) 43 (1986); Fair, Petro/Chem Eng. 33(10) 45 (1961)",
+    source: "Perry's Chemical Engineers' Handbook 8th ed. eq. (14-90); Lygeros & Magoulas, Hydrocarbon Process. 65(12) 43 (1986); Fair, Petro/Chem Eng. 33(10) 45 (1961). Beyond the chart's flow parameter 1 the fit is followed (lower capacity than at the chart edge). Hole-area correction (Ludwig Vol. 2 3rd ed. p. 189) on the open slot area for valve trays (Perry's definition)",
     equation: 'C_sbf = 0.0105 + 8.127e-4 TS^0.755 exp(-1.463 F_LV^0.842)',
     provenance: 'seen',
     ranges: {

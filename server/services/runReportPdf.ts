@@ -5,7 +5,7 @@
  * once, with the trays it concerns) and the methods with their sources. Header and footer on every page.
  */
 import type { DataSource } from 'typeorm';
-import { METHOD_METADATA } from '../engine/index.js';
+import { ENGINE_VERSION, METHOD_METADATA } from '../engine/index.js';
 import { RATING_CAUTIONS } from '../routes/methods.js';
 import { STATUS_HEX, runCharts } from './runReportCharts.js';
 import { pdfDateTime, pdfFileName, plainText, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
@@ -105,11 +105,37 @@ function trayTable(run: RunRecord, sys: SessionUser['unitSystem']): Content[] {
   ];
 }
 
+/** Moving-valve trays (Klein): hole velocity against the balance points, valve state, dry ΔP. Empty when none. */
+export function valveTable(run: RunRecord, sys: SessionUser['unitSystem']): Content[] {
+  const trays = run.results.trays.filter((t) => (t.details.valvesStartOpenVelocity_m_s ?? 0) > 0);
+  if (!trays.length) return [];
+  const v = unitLabel('velocity', sys);
+  const mm = unitLabel('lengthSmall', sys);
+  const body: Content[] = [[th('Tray'), th(`Hole velocity (${v})`), th(`Valves start to open (${v})`), th(`All valves open (${v})`), th('Valves'),
+    th(`Dry ΔP (${mm} of liquid)`), th(`Dry ΔP partly open (${mm} of liquid)`)]];
+  for (const t of trays) {
+    const d = t.details;
+    const uA = d.valvesStartOpenVelocity_m_s!;
+    const uB = d.valvesAllOpenVelocity_m_s ?? NaN;
+    const state = d.holeVelocity_m_s < uA ? 'closed' : d.holeVelocity_m_s < uB ? 'partly open' : 'all open';
+    body.push([String(t.tray), { text: formatQuantity('velocity', d.holeVelocity_m_s, sys), color: STATUS_HEX[t.checks.weeping.status] },
+      formatQuantity('velocity', uA, sys), formatQuantity('velocity', uB, sys), state,
+      formatQuantity('lengthSmall', d.dryPressureDrop_mm, sys), formatQuantity('lengthSmall', d.valvePartlyOpenDryHead_mm, sys)]);
+  }
+  return [
+    { text: 'Moving valves (Klein): hole velocity against the velocities at which the valves start to open and are all open', style: 'h2' },
+    { table: { headerRows: 1, dontBreakRows: true, widths: ['auto', '*', '*', '*', 'auto', '*', '*'], body }, fontSize: 7 },
+  ];
+}
+
 function methodsBlock(run: RunRecord): Content[] {
   const ids = new Set(run.results.trays.flatMap((t) => Object.values(t.checks).map((c) => c.method)));
   const used = Object.values(METHOD_METADATA).filter((m) => ids.has(m.id)).sort((a, b) => a.label.localeCompare(b.label));
   return [
     { text: 'Methods and sources', style: 'h2' },
+    run.engineVersion !== ENGINE_VERSION
+      ? { text: `This run was rated by engine ${run.engineVersion}; the methods below are described as in engine ${ENGINE_VERSION}, whose correlations may differ from those that rated it.`, italics: true, margin: [0, 0, 0, 4] }
+      : '',
     { table: { headerRows: 1, widths: ['auto', '*', '*'], body: [['Correlation', 'Equation', 'Source'].map(th), ...used.map((m) => [m.label, m.equation, plainText(m.source)])] }, fontSize: 7 },
   ];
 }
@@ -134,6 +160,7 @@ export function runReportDoc(run: RunRecord, w: RunWindow | null, sys: SessionUs
       { text: 'Section results', style: 'h2', pageBreak: 'before' },
       sectionTable(run, sys),
       ...trayTable(run, sys),
+      ...valveTable(run, sys),
       ...methodsBlock(run),
     ],
   };

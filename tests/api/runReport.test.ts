@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runReportDoc, trayRanges } from '../../server/services/runReportPdf.js';
+import { runReportDoc, trayRanges, valveTable } from '../../server/services/runReportPdf.js';
 import { pageFrame } from '../../server/services/pdfEngine.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { loads, makePlant, section, type Plant } from './columnsFixture.js';
@@ -65,6 +65,18 @@ describe('rating report PDF', () => {
     const text = JSON.stringify(runReportDoc(run, w, 'US').content);
     expect(text).toContain(`Operating window of the controlling tray ${run.results.controllingTray}`);
     expect(text).toContain('Liquid (lb/h)');
+  });
+
+  it("lists the moving-valve trays with Klein's balance points and the valve state", () => {
+    // the fixture section is the demo's moving-valve geometry
+    const text = JSON.stringify(runReportDoc(run, null, 'SI').content);
+    expect(text).toContain('Moving valves (Klein)');
+    const t = run.results.trays[0]!;
+    expect(t.details.valvesStartOpenVelocity_m_s).toBeGreaterThan(0);
+    expect(t.details.valvesAllOpenVelocity_m_s).toBeGreaterThan(t.details.valvesStartOpenVelocity_m_s!);
+    const rows = valveTable(run, 'SI')[1] as { table: { body: unknown[][] } };
+    expect(rows.table.body).toHaveLength(run.results.trays.length + 1);
+    expect(rows.table.body[1]![4]).toMatch(/^(closed|partly open|all open)$/);
   });
 
   it('tray ranges read as people write them', () => {

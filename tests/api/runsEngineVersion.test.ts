@@ -7,6 +7,7 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { RunResultsByName1764750000000 } from '../../server/db/migrations/1764750000000-RunResultsByName.js';
 import { ENGINE_VERSION } from '../../server/engine/index.js';
+import { runReportDoc } from '../../server/services/runReportPdf.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { loads, makePlant, section, type Plant } from './columnsFixture.js';
 
@@ -56,6 +57,11 @@ describe('runs rated by an earlier engine version', () => {
     const csv = await engineer.get(`/api/runs/${old.id}/export?format=csv`);
     expect(csv.status).toBe(200);
     expect(csv.text).toMatch(/engine 0\.2\.0/);
+    // the printed report names the engine that rated it, and says the methods list is the current engine's
+    const oldText = JSON.stringify(runReportDoc(b.body, null, 'SI'));
+    expect(oldText).toContain('engine 0.2.0');
+    expect(oldText).toContain(`This run was rated by engine 0.2.0; the methods below are described as in engine ${ENGINE_VERSION}`);
+    expect(JSON.stringify(runReportDoc(a.body, null, 'SI'))).not.toContain('This run was rated by engine');
     const list = await engineer.get(`/api/columns/${plant.columnId}`);
     expect(list.status).toBe(200);
     expect(list.body.runs.map((r: { id: string }) => r.id)).toEqual(expect.arrayContaining([current.id, old.id]));
