@@ -11,6 +11,7 @@ import { ForbiddenError, UnauthorizedError } from './errors.js';
 import { readSession, renewSessionIfOld, type SessionClaims } from './http/auth.js';
 import { errorHandler, notFoundHandler } from './http/errorHandler.js';
 import { buildOpenApi } from './http/openapi.js';
+import { clientStatic } from './http/staticClient.js';
 import type { RouteDef } from './http/route.js';
 import { validate } from './http/validation.js';
 import { logger } from './logger.js';
@@ -98,6 +99,11 @@ export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOpt
     }),
   );
   app.use(cookieParser());
+  // API answers (records, exports, photos, errors) are never stored by browsers or proxies
+  app.use('/api', (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
   app.use('/api', express.json({ limit: config.bodyLimit }));
 
   const api = express.Router();
@@ -111,12 +117,7 @@ export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOpt
   app.use('/api', notFoundHandler);
 
   const dist = config.clientDist;
-  if (serveClient && existsSync(path.join(dist, 'index.html'))) {
-    app.use(express.static(dist, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => {
-      res.sendFile(path.join(dist, 'index.html'));
-    });
-  }
+  if (serveClient && existsSync(path.join(dist, 'index.html'))) app.use(...clientStatic(dist));
   app.use(errorHandler);
   return app;
 }

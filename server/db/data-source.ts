@@ -14,7 +14,8 @@ export function makeDataSource(url = config.databaseUrl): DataSource {
     synchronize: false,
     migrationsRun: false,
     logging: false,
-    extra: { max: 20 },
+    // a database host that does not answer fails a request after 5 s (503) instead of holding it forever
+    extra: { max: 20, connectionTimeoutMillis: 5000 },
   });
 }
 

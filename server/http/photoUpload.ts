@@ -5,7 +5,7 @@ import { DomainError, ValidationError } from '../errors.js';
 
 const mb = (n: number): string => `${(n / 1024 / 1024).toFixed(1)} MB`;
 
-/** multer (memory storage) for one photo in the field "photo"; its errors become clear 400/413 answers naming the field. */
+/** multer (memory storage) for one photo in the field "photo"; a missing or too large photo is answered here naming the field. */
 export function photoUpload() {
   const m = multer({ storage: multer.memoryStorage(), limits: { fileSize: config.photoMaxBytes, files: 1, fields: 10 } }).single('photo');
   return (req: Request, res: Response, next: NextFunction): void => {
@@ -14,16 +14,13 @@ export function photoUpload() {
         if (!req.file) return next(new ValidationError('No photo', [{ path: 'photo', message: 'is required (multipart field "photo")' }]));
         return next();
       }
-      if (err instanceof multer.MulterError) {
-        if (err.code === 'LIMIT_FILE_SIZE')
-          return next(
-            new DomainError(413, `Photo too large: the field "photo" is limited to ${mb(config.photoMaxBytes)}`, [
-              { path: 'photo', message: `exceeds ${mb(config.photoMaxBytes)}` },
-            ]),
-          );
-        return next(new ValidationError('Invalid upload', [{ path: err.field ?? 'photo', message: err.message }]));
-      }
-      next(err);
+      if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE')
+        return next(
+          new DomainError(413, `Photo too large: the field "photo" is limited to ${mb(config.photoMaxBytes)}`, [
+            { path: 'photo', message: `exceeds ${mb(config.photoMaxBytes)}` },
+          ]),
+        );
+      next(err); // other multer and parser errors: uploadFault in the error middleware
     });
   };
 }

@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
-import { PERMISSION_MATRIX, ROLES } from '../../shared/permissions.js';
+import { canSeeColumn } from '../services/access.js';
+import { PERMISSION_MATRIX, ROLES, type Role } from '../../shared/permissions.js';
 
 export interface Notice {
   /** what triggered it, e.g. 'run.submitted', 'inspection.signed' */
@@ -30,17 +31,27 @@ export function rolesWith(permission: (typeof PERMISSION_MATRIX)[keyof typeof PE
   return ROLES.filter((r) => PERMISSION_MATRIX[r].includes(permission));
 }
 
-/** E-mail addresses of active users whose role may approve reviews ('reviews.approve'). */
-export async function reviewerEmails(em: EntityManager): Promise<string[]> {
-  const rows = (await em.query(`SELECT email FROM users WHERE active AND role = ANY($1) ORDER BY email`, [
+/**
+ * E-mail addresses of active users whose role may approve reviews ('reviews.approve') and who may see
+ * the column (its site): a notice names the column and its results, so it goes to no one else.
+ */
+export async function reviewerEmails(em: EntityManager, columnId: string): Promise<string[]> {
+  const rows = (await em.query(`SELECT id, role, email FROM users WHERE active AND role = ANY($1) ORDER BY email`, [
     rolesWith('reviews.approve'),
-  ])) as { email: string }[];
-  return rows.map((r) => r.email);
+  ])) as { id: string; role: Role; email: string }[];
+  const out: string[] = [];
+  for (const r of rows) if (await canSeeColumn(em, r, columnId)) out.push(r.email);
+  return out;
 }
 
-/** E-mail address of an active user, or null (unknown or deactivated user → no mail). */
-export async function userEmail(em: EntityManager, userId: string | null | undefined): Promise<string | null> {
+/**
+ * E-mail address of an active user, or null (unknown or deactivated user → no mail); with `columnId`,
+ * also null when the user may no longer see that column's site.
+ */
+export async function userEmail(em: EntityManager, userId: string | null | undefined, columnId?: string): Promise<string | null> {
   if (!userId) return null;
-  const rows = (await em.query(`SELECT email FROM users WHERE id = $1 AND active`, [userId])) as { email: string }[];
-  return rows[0]?.email ?? null;
+  const rows = (await em.query(`SELECT id, role, email FROM users WHERE id = $1 AND active`, [userId])) as { id: string; role: Role; email: string }[];
+  const u = rows[0];
+  if (!u || (columnId && !(await canSeeColumn(em, u, columnId)))) return null;
+  return u.email;
 }

@@ -2,7 +2,7 @@ import { defineRoutes } from '../http/route.js';
 import { photoUpload } from '../http/photoUpload.js';
 import { streamPhoto, uploadPhoto } from '../services/photos.js';
 import { uuidParams } from '../../shared/schemas/common.js';
-import { photoParams, photoQuery } from '../../shared/schemas/inspections.js';
+import { photoFieldsBody, photoParams, photoQuery } from '../../shared/schemas/inspections.js';
 
 export const photoRoutes = defineRoutes([
   {
@@ -11,6 +11,7 @@ export const photoRoutes = defineRoutes([
     access: 'inspections.record',
     summary: 'Upload a photo (multipart field "photo": JPEG, PNG or WebP, checked by content; fields tray, pass, finding, caption)',
     params: uuidParams,
+    body: photoFieldsBody,
     before: [photoUpload()],
     status: 201,
     handler: async ({ ds, user, params, req }) =>

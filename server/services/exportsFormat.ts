@@ -1,4 +1,5 @@
-/** Table → CSV (RFC 4180 quoting) or XLSX (exceljs) file. */
+/** Table → CSV (csv-stringify: RFC 4180 quoting, formula escaping) or XLSX (exceljs) file. */
+import { stringify } from 'csv-stringify/sync';
 import ExcelJS from 'exceljs';
 
 export interface Table {
@@ -15,27 +16,24 @@ export interface ExportFile {
   body: Buffer;
 }
 
-const cell = (v: string | number | null): string => {
-  if (v === null || v === undefined) return '';
-  let s = typeof v === 'number' ? (Number.isFinite(v) ? String(+v.toPrecision(8)) : '') : v;
-  // a text cell starting like a formula is prefixed so spreadsheets show it as text
-  if (typeof v === 'string' && /^[=+\-@]/.test(s)) s = `'${s}`;
-  return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-};
+/** Numbers to 8 significant digits; a non-finite number is an empty cell. */
+const number = (v: number): string => (Number.isFinite(v) ? String(+v.toPrecision(8)) : '');
 
+/**
+ * CSV for spreadsheets: a text cell starting with = + - @, a tab or a carriage return (or their full-width
+ * forms) is prefixed with ' so a spreadsheet shows it as text instead of running it as a formula
+ * (csv-stringify's escape_formulas); numbers, negative ones included, stay numbers.
+ */
 export function toCsv(t: Table): Buffer {
-  const lines = [
-    ...(t.notes ?? []).map((n) => cell(`# ${n}`)),
-    t.headers.map(cell).join(','),
-    ...t.rows.map((r) => r.map(cell).join(',')),
-  ];
-  return Buffer.from(`${lines.join('\r\n')}\r\n`, 'utf8');
+  const records = [...(t.notes ?? []).map((n) => [`# ${n}`]), t.headers, ...t.rows];
+  return Buffer.from(stringify(records, { escape_formulas: true, record_delimiter: 'windows', cast: { number } }), 'utf8');
 }
 
 export async function toXlsx(t: Table): Promise<Buffer> {
   const wb = new ExcelJS.Workbook();
   wb.creator = 'Frothline';
   const ws = wb.addWorksheet(t.sheet.slice(0, 31));
+  // cells are plain values: exceljs writes a string as text (never a formula), whatever it starts with
   ws.addRow(t.headers).font = { bold: true };
   for (const r of t.rows) ws.addRow(r.map((v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v)));
   ws.columns.forEach((c) => (c.width = 16));

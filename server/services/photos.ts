@@ -80,7 +80,6 @@ export async function streamPhoto(ds: DataSource, user: SessionUser, id: string,
   const { stream, length } = await getObjectStream(size === 'thumb' ? p.thumbKey : p.objectKey);
   res.setHeader('Content-Type', size === 'thumb' ? 'image/jpeg' : p.contentType);
   if (length !== undefined) res.setHeader('Content-Length', String(length));
-  res.setHeader('Cache-Control', 'private, max-age=3600');
   res.setHeader('X-Content-Type-Options', 'nosniff');
   await new Promise<void>((resolve, reject) => {
     stream.on('error', reject);

@@ -24,13 +24,13 @@ async function notify(em: EntityManager, run: RatingRun, action: Action, user: S
   if (action === 'submit') {
     await queueNotice(em, {
       kind: 'run.submitted',
-      to: await reviewerEmails(em),
+      to: await reviewerEmails(em, run.columnId),
       subject: `Review requested: ${run.label}`,
       text: `${user.name} submitted ${what} for review.${comment ? `\n\nComment: ${comment}` : ''}${tail}`,
     });
     return;
   }
-  const to = await userEmail(em, run.authorId);
+  const to = await userEmail(em, run.authorId, run.columnId);
   const verb = action === 'approve' ? 'approved' : 'returned';
   await queueNotice(em, {
     kind: `run.${verb}`,

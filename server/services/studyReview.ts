@@ -72,12 +72,12 @@ export async function reviewStudy(
     if (action === 'submit') {
       await queueNotice(em, {
         kind: 'study.submitted',
-        to: await reviewerEmails(em),
+        to: await reviewerEmails(em, current.columnId),
         subject: `Review requested: ${what}`,
         text: `${user.name} submitted the ${what} for review.\nOpen /studies/${id} to approve it or return it with a comment.\nScreening estimate: a duty change still needs management-of-change review.`,
       });
     } else {
-      const to = await userEmail(em, current.authorId);
+      const to = await userEmail(em, current.authorId, current.columnId);
       await queueNotice(em, {
         kind: action === 'approve' ? 'study.approved' : 'study.returned',
         to: to ? [to] : [],

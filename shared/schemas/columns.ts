@@ -67,7 +67,7 @@ export const columnListQuery = {
   type: 'object',
   additionalProperties: false,
   properties: {
-    page: { type: 'integer', minimum: 1, default: 1 },
+    page: { type: 'integer', minimum: 1, maximum: 1000000, default: 1 },
     pageSize: { type: 'integer', minimum: 1, maximum: 200, default: 50 },
     q: { type: 'string', maxLength: 200 },
     siteId: uuid,
@@ -82,7 +82,7 @@ const sectionProps = {
   geometry: sectionGeometrySchema,
   provenance: { type: 'string', enum: ['design', 'as-left', 'as-found'] },
   provenanceDate: { anyOf: [{ type: 'string', format: 'date' }, { type: 'null' }] },
-  notes: { type: 'string', maxLength: 2000 },
+  notes: { type: 'string', maxLength: 2000, 'x-text': 'multiline' },
 } as const;
 
 export const sectionBody = {

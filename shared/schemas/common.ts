@@ -10,7 +10,7 @@ export const uuidParams = {
 export const pageQuery = {
   type: 'object',
   properties: {
-    page: { type: 'integer', minimum: 1, default: 1 },
+    page: { type: 'integer', minimum: 1, maximum: 1000000, default: 1 },
     pageSize: { type: 'integer', minimum: 1, maximum: 200, default: 50 },
     q: { type: 'string', maxLength: 200 },
   },

@@ -13,7 +13,8 @@ import { stageMapSchema } from './loads.js';
 import { IMPORT_LIMITS } from '../importLimits.js';
 
 const col = { type: 'integer', minimum: 0, maximum: 1000 } as const;
-const cell = { type: 'string', maxLength: IMPORT_LIMITS.cellChars } as const;
+/** a cell read from the uploaded file: a quoted CSV cell may hold tabs or line breaks */
+const cell = { type: 'string', maxLength: IMPORT_LIMITS.cellChars, 'x-text': 'multiline' } as const;
 const unit = (u: readonly string[]) => ({ type: 'string', enum: [...u] }) as const;
 
 export const importMappingSchema = {
@@ -64,7 +65,7 @@ export const importCommitBody = {
     name: { type: 'string', minLength: 1, maxLength: 120 },
     basis: { type: 'string', enum: [...LOAD_BASES] },
     fileName: { type: 'string', minLength: 1, maxLength: 255 },
-    notes: { type: 'string', maxLength: 4000 },
+    notes: { type: 'string', maxLength: 4000, 'x-text': 'multiline' },
   },
 } as const;
 

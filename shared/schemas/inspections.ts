@@ -2,6 +2,8 @@ import { DAMAGE_KINDS, PUNCH_PRIORITIES } from '../types/inspections.js';
 
 const date = { type: 'string', format: 'date' } as const;
 const text = (max: number) => ({ type: 'string', maxLength: max }) as const;
+/** free text that may span lines (notes, findings, actions) */
+const lines = (max: number, minLength = 0) => ({ type: 'string', minLength, maxLength: max, 'x-text': 'multiline' }) as const;
 const mm = { type: 'number', minimum: 0, maximum: 5000 } as const;
 const points = { type: 'array', items: mm, maxItems: 12 } as const;
 
@@ -30,7 +32,7 @@ export const findingsSchema = {
     manwayInstalled: { type: 'boolean' },
     closureWitnessed: { type: 'boolean' },
     debris: { type: 'boolean' },
-    notes: text(2000),
+    notes: lines(2000),
   },
   required: ['fouling', 'blockedPercent', 'corrosion', 'damage', 'valvesMissing', 'valvesStuck', 'looseFasteners', 'manwayInstalled', 'closureWitnessed', 'debris'],
   additionalProperties: false,
@@ -56,7 +58,7 @@ export const rulesSchema = {
     levelnessClass: { type: 'string', enum: ['A', 'B'] },
     project: {
       type: 'object',
-      properties: { id: text(60), name: { type: 'string', minLength: 1, maxLength: 200 }, source: { type: 'string', minLength: 1, maxLength: 300 }, note: text(1000), rules: { type: 'array', items: ruleSchema, maxItems: 10 } },
+      properties: { id: text(60), name: { type: 'string', minLength: 1, maxLength: 200 }, source: { type: 'string', minLength: 1, maxLength: 300 }, note: lines(1000), rules: { type: 'array', items: ruleSchema, maxItems: 10 } },
       required: ['id', 'name', 'source', 'rules'],
       additionalProperties: false,
     },
@@ -75,7 +77,7 @@ export const createInspectionBody = {
     permitRef: text(200),
     gasTestRef: text(200),
     rules: rulesSchema,
-    notes: text(5000),
+    notes: lines(5000),
   },
   required: ['columnId', 'turnaround', 'startDate'],
   additionalProperties: false,
@@ -104,8 +106,8 @@ export const createPunchBody = {
   properties: {
     tray: nullableInt(1, 500),
     pass: nullableInt(1, 4),
-    finding: { type: 'string', minLength: 1, maxLength: 1000 },
-    action: { type: 'string', minLength: 1, maxLength: 1000 },
+    finding: lines(1000, 1),
+    action: lines(1000, 1),
     priority: { type: 'string', enum: [...PUNCH_PRIORITIES] },
     owner: text(200),
   },
@@ -116,8 +118,8 @@ export const createPunchBody = {
 export const updatePunchBody = {
   type: 'object',
   properties: {
-    finding: { type: 'string', minLength: 1, maxLength: 1000 },
-    action: { type: 'string', minLength: 1, maxLength: 1000 },
+    finding: lines(1000, 1),
+    action: lines(1000, 1),
     priority: { type: 'string', enum: [...PUNCH_PRIORITIES] },
     owner: text(200),
     status: { type: 'string', enum: ['open', 'closed'] },
@@ -158,5 +160,17 @@ export const photoParams = { type: 'object', properties: { id: uuid, photoId: uu
 export const photoQuery = {
   type: 'object',
   properties: { size: { type: 'string', enum: ['original', 'thumb'], default: 'original' } },
+  additionalProperties: false,
+} as const;
+
+/** The text fields sent with a photo (multipart form fields arrive as text; the service reads the numbers). */
+export const photoFieldsBody = {
+  type: 'object',
+  properties: {
+    tray: { type: 'string', maxLength: 10 },
+    pass: { type: 'string', maxLength: 10 },
+    finding: lines(1000),
+    caption: lines(2000),
+  },
   additionalProperties: false,
 } as const;

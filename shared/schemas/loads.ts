@@ -30,7 +30,7 @@ export const createLoadCaseBody = {
     basis: { type: 'string', enum: [...LOAD_BASES] },
     source: { type: 'string', enum: [...LOAD_SOURCES] },
     sourceFile: { anyOf: [{ type: 'string', maxLength: 255 }, { type: 'null' }] },
-    notes: { type: 'string', maxLength: 4000 },
+    notes: { type: 'string', maxLength: 4000, 'x-text': 'multiline' },
     loads: loadsArraySchema,
     stageMap: { anyOf: [stageMapSchema, { type: 'null' }] },
   },
@@ -43,7 +43,7 @@ export const updateLoadCaseBody = {
   properties: {
     name: { type: 'string', minLength: 1, maxLength: 120 },
     basis: { type: 'string', enum: [...LOAD_BASES] },
-    notes: { type: 'string', maxLength: 4000 },
+    notes: { type: 'string', maxLength: 4000, 'x-text': 'multiline' },
     version,
   },
 } as const;

@@ -21,7 +21,7 @@ export const reviewActionBody = {
   additionalProperties: false,
   required: ['version'],
   properties: {
-    comment: { type: 'string', maxLength: 4000 },
+    comment: { type: 'string', maxLength: 4000, 'x-text': 'multiline' },
     version: { type: 'integer', minimum: 1 },
   },
 } as const;
@@ -30,7 +30,7 @@ export const reviewActionBody = {
 export const reviewDecisionBody = {
   ...reviewActionBody,
   required: ['version', 'comment'],
-  properties: { ...reviewActionBody.properties, comment: { type: 'string', minLength: 1, maxLength: 4000 } },
+  properties: { ...reviewActionBody.properties, comment: { type: 'string', minLength: 1, maxLength: 4000, 'x-text': 'multiline' } },
 } as const;
 
 export const runWindowParams = {
@@ -51,7 +51,7 @@ export const runListQuery = {
   type: 'object',
   additionalProperties: false,
   properties: {
-    page: { type: 'integer', minimum: 1, default: 1 },
+    page: { type: 'integer', minimum: 1, maximum: 1000000, default: 1 },
     pageSize: { type: 'integer', minimum: 1, maximum: 200, default: 50 },
     columnId: uuid,
     status: { type: 'string', enum: ['draft', 'submitted', 'approved', 'returned'] },

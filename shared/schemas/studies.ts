@@ -38,7 +38,7 @@ export const createStudySchema = {
 export const studyReviewSchema = {
   type: 'object',
   properties: {
-    comment: { type: 'string', maxLength: 4000 },
+    comment: { type: 'string', maxLength: 4000, 'x-text': 'multiline' },
     version: { type: 'integer', minimum: 1 },
   },
   required: ['version'],

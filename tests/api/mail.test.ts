@@ -6,6 +6,7 @@ import { config } from '../../server/config.js';
 import { queueNotice, reviewerEmails, userEmail } from '../../server/mail/outbox.js';
 import { deliverPending } from '../../server/mail/sender.js';
 import { makeUser, setupApp, signedIn, type TestContext } from '../helpers/app.js';
+import { makePlant } from './columnsFixture.js';
 
 let ctx: TestContext;
 beforeAll(async () => {
@@ -84,17 +85,23 @@ describe('mail outbox', () => {
     await waitForMail(subject);
   });
 
-  it('reviewerEmails lists active users whose role may approve; userEmail skips inactive users', async () => {
-    const reviewer = await makeUser(ctx.ds, 'internals-specialist');
-    const inspector = await makeUser(ctx.ds, 'inspector');
-    const gone = await makeUser(ctx.ds, 'internals-specialist');
+  it('reviewerEmails lists active users whose role may approve and who see the column\'s site; userEmail skips inactive users', async () => {
+    const plant = await makePlant(ctx.ds);
+    const elsewhere = await makePlant(ctx.ds);
+    const reviewer = await makeUser(ctx.ds, 'internals-specialist', [plant.siteId]);
+    const otherSite = await makeUser(ctx.ds, 'internals-specialist', [elsewhere.siteId]);
+    const inspector = await makeUser(ctx.ds, 'inspector', [plant.siteId]);
+    const gone = await makeUser(ctx.ds, 'internals-specialist', [plant.siteId]);
     await ctx.ds.query(`UPDATE users SET active = false WHERE id = $1`, [gone.id]);
-    const list = await reviewerEmails(ctx.ds.manager);
+    const list = await reviewerEmails(ctx.ds.manager, plant.columnId);
     expect(list).toContain(reviewer.email);
+    expect(list).not.toContain(otherSite.email);
     expect(list).not.toContain(inspector.email);
     expect(list).not.toContain(gone.email);
     expect(await userEmail(ctx.ds.manager, inspector.id)).toBe(inspector.email);
     expect(await userEmail(ctx.ds.manager, gone.id)).toBeNull();
+    expect(await userEmail(ctx.ds.manager, otherSite.id, plant.columnId)).toBeNull();
+    expect(await userEmail(ctx.ds.manager, reviewer.id, plant.columnId)).toBe(reviewer.email);
   });
 
   it('the outbox and the development mailbox are for admins only', async () => {

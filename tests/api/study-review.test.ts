@@ -13,6 +13,8 @@ let colleague: Agent;
 let reviewer: Agent;
 let outsider: Agent;
 let viewer: Agent;
+let reviewerEmail: string;
+let outsiderEmail: string;
 
 beforeAll(async () => {
   ctx = await setupApp();
@@ -22,8 +24,12 @@ beforeAll(async () => {
   author = a.agent;
   authorEmail = a.user.email;
   colleague = (await signedIn(ctx, 'process-engineer', [fx.siteId])).agent;
-  reviewer = (await signedIn(ctx, 'internals-specialist', [fx.siteId])).agent;
-  outsider = (await signedIn(ctx, 'internals-specialist', [other.siteId])).agent;
+  const r = await signedIn(ctx, 'internals-specialist', [fx.siteId]);
+  reviewer = r.agent;
+  reviewerEmail = r.user.email;
+  const o = await signedIn(ctx, 'internals-specialist', [other.siteId]);
+  outsider = o.agent;
+  outsiderEmail = o.user.email;
   viewer = (await signedIn(ctx, 'viewer', [fx.siteId])).agent;
 });
 afterAll(() => ctx.close());
@@ -105,7 +111,7 @@ describe('review: draft → submitted → returned → submitted → approved (r
     s = (await create(author, exampleBody(fx))).body as StudyRecord;
   });
 
-  it('only the author submits; the reviewers are notified', async () => {
+  it('only the author submits; the reviewers who can see the site are notified, no others', async () => {
     expect((await colleague.post(`/api/studies/${s.id}/submit`).send({ version: s.version })).status).toBe(403);
     const res = await author.post(`/api/studies/${s.id}/submit`).send({ version: s.version });
     expect(res.status).toBe(200);
@@ -113,7 +119,8 @@ describe('review: draft → submitted → returned → submitted → approved (r
     s = res.body;
     const mails = await outbox('study.submitted');
     expect(mails).toHaveLength(1);
-    expect(mails[0]!.recipients.length).toBeGreaterThan(0);
+    expect(mails[0]!.recipients).toContain(reviewerEmail);
+    expect(mails[0]!.recipients).not.toContain(outsiderEmail);
   });
 
   it('the author may not approve (role), a stale version is 409, returning needs a comment', async () => {
