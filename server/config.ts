@@ -63,6 +63,8 @@ export const config = {
   devMailbox: (env.DEV_MAILBOX ?? 'true') === 'true',
   logLevel: env.LOG_LEVEL ?? 'info',
   clientDist: path.resolve(env.CLIENT_DIST ?? 'dist'),
+  /** the address people open Frothline at, for links in e-mail notices (APP_URL; default: this server) */
+  appUrl: (env.APP_URL ?? `http://${env.HOST ?? '127.0.0.1'}:${num('PORT', 5180)}`).replace(/\/+$/, ''),
   dataDir,
   isTest: env.NODE_ENV === 'test',
   isProduction: env.NODE_ENV === 'production',

@@ -1,4 +1,5 @@
 import type { EntityManager } from 'typeorm';
+import { config } from '../config.js';
 import { canSeeColumn } from '../services/access.js';
 import { PERMISSION_MATRIX, ROLES, type Role } from '../../shared/permissions.js';
 
@@ -8,7 +9,12 @@ export interface Notice {
   to: string[];
   subject: string;
   text: string;
+  /** the page the notice is about, e.g. '/runs/<id>'; the mail ends with its full address (config.appUrl) */
+  link?: string;
 }
+
+/** The body as sent: the text, then the address of the item it is about. */
+export const noticeBody = (n: Pick<Notice, 'text' | 'link'>): string => (n.link ? `${n.text}\n\nOpen it in Frothline: ${config.appUrl}${n.link}` : n.text);
 
 /**
  * Queue an e-mail notice inside the caller's transaction: the notice is stored with the action that
@@ -22,7 +28,7 @@ export async function queueNotice(em: EntityManager, n: Notice): Promise<void> {
     n.kind,
     to,
     n.subject,
-    n.text,
+    noticeBody(n),
   ]);
 }
 

@@ -70,6 +70,7 @@ export async function signAsInspector(ds: DataSource, user: SessionUser, id: str
       text: `${user.name} signed the turnaround inspection of ${col.tag} (${insp.turnaround}, from ${insp.startDate}).\n` +
         `Please review the tray records, tolerance checks and punch list and countersign in Frothline.\n\n` +
         `Column entry and any repair work remain under the site's permits and procedures.`,
+      link: `/inspections/${id}`,
     });
     return toInspectionRecord(em, insp);
   });
@@ -97,6 +98,7 @@ export async function signAsEngineer(ds: DataSource, user: SessionUser, id: stri
       to,
       subject: `Inspection of ${col.tag} (${insp.turnaround}) signed off`,
       text: `${user.name} countersigned the turnaround inspection of ${col.tag} (${insp.turnaround}). The record is now read-only.`,
+      link: `/inspections/${id}`,
     });
     return toInspectionRecord(em, insp);
   });

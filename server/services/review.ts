@@ -27,6 +27,7 @@ async function notify(em: EntityManager, run: RatingRun, action: Action, user: S
       to: await reviewerEmails(em, run.columnId),
       subject: `Review requested: ${run.label}`,
       text: `${user.name} submitted ${what} for review.${comment ? `\n\nComment: ${comment}` : ''}${tail}`,
+      link: `/runs/${run.id}`,
     });
     return;
   }
@@ -37,6 +38,7 @@ async function notify(em: EntityManager, run: RatingRun, action: Action, user: S
     to: to ? [to] : [],
     subject: `Rating run ${verb}: ${run.label}`,
     text: `${user.name} ${verb} ${what}.\n\nComment: ${comment}${tail}`,
+    link: `/runs/${run.id}`,
   });
 }
 

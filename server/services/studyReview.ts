@@ -74,7 +74,8 @@ export async function reviewStudy(
         kind: 'study.submitted',
         to: await reviewerEmails(em, current.columnId),
         subject: `Review requested: ${what}`,
-        text: `${user.name} submitted the ${what} for review.\nOpen /studies/${id} to approve it or return it with a comment.\nScreening estimate: a duty change still needs management-of-change review.`,
+        text: `${user.name} submitted the ${what} for review.${comment ? `\nNote: ${comment}` : ''}\nApprove it or return it with a comment.\nScreening estimate: a duty change still needs management-of-change review.`,
+        link: `/studies/${id}`,
       });
     } else {
       const to = await userEmail(em, current.authorId, current.columnId);
@@ -82,7 +83,8 @@ export async function reviewStudy(
         kind: action === 'approve' ? 'study.approved' : 'study.returned',
         to: to ? [to] : [],
         subject: `${action === 'approve' ? 'Approved' : 'Returned'}: ${what}`,
-        text: `${user.name} ${action === 'approve' ? 'approved' : 'returned'} the ${what}.${comment ? `\nComment: ${comment}` : ''}\nOpen /studies/${id}.`,
+        text: `${user.name} ${action === 'approve' ? 'approved' : 'returned'} the ${what}.${comment ? `\nComment: ${comment}` : ''}`,
+        link: `/studies/${id}`,
       });
     }
   });

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runReportDoc, trayRanges, valveTable } from '../../server/services/runReportPdf.js';
 import { pageFrame } from '../../server/services/pdfEngine.js';
+import { config } from '../../server/config.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { loads, makePlant, section, type Plant } from './columnsFixture.js';
 import type { RunRecord, RunWindow } from '../../shared/types/runs.js';
@@ -77,6 +78,13 @@ describe('rating report PDF', () => {
     const rows = valveTable(run, 'SI')[1] as { table: { body: unknown[][] } };
     expect(rows.table.body).toHaveLength(run.results.trays.length + 1);
     expect(rows.table.body[1]![4]).toMatch(/^(closed|partly open|all open)$/);
+  });
+
+  it('the review notices end with the full address of the run', async () => {
+    const rows = (await ctx.ds.query(`SELECT kind, body FROM mail_outbox WHERE body LIKE $1 ORDER BY created_at`, [`%${run.id}%`])) as { kind: string; body: string }[];
+    expect(rows.map((r) => r.kind)).toEqual(['run.submitted', 'run.approved']);
+    for (const r of rows) expect(r.body).toMatch(new RegExp(`Open it in Frothline: ${config.appUrl}/runs/${run.id}$`));
+    expect(config.appUrl).toMatch(/^https?:\/\/[^/]+(\/.*[^/])?$/);
   });
 
   it('tray ranges read as people write them', () => {
