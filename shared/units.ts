@@ -19,6 +19,11 @@ export const KG_PER_LB = 0.45359237;
 export const M3_PER_USGAL = 3.785411784e-3;
 /** 1 bar = 10⁵ Pa exactly (NIST SP 811 B.9) */
 export const PA_PER_BAR = 1e5;
+/**
+ * Standard atmosphere, 101 325 Pa exactly (NIST SP 811 B.9): gauge pressures are made absolute with it. The
+ * site's actual barometric pressure differs (about 1.2 kPa less per 100 m of altitude), which the import says.
+ */
+export const PA_STANDARD_ATMOSPHERE = 101325;
 /** 1 Btu (International Table) = 1 055.055 852 62 J exactly (NIST SP 811 B.9, footnote on Btu_IT) */
 export const J_PER_BTU_IT = 1055.05585262;
 /** 1 lbf = 4.448 221 615 260 5 N exactly (lb × standard gravity 9.806 65 m/s², NIST SP 811 B.9) */
@@ -149,6 +154,9 @@ const SPECS: Record<QuantityId, QuantitySpec> = {
       u('kPa', 1000, ['kpa', 'kpa(a)', 'kpaa']),
       u('psia', PA_PER_PSI, ['psi', 'psi(a)']),
       u('bar', PA_PER_BAR, ['bara', 'bar(a)']),
+      u('kPag', 1000, ['kpa(g)', 'kpa g'], PA_STANDARD_ATMOSPHERE, 'kPa(g)'),
+      u('barg', PA_PER_BAR, ['bar(g)', 'bar g'], PA_STANDARD_ATMOSPHERE, 'bar(g)'),
+      u('psig', PA_PER_PSI, ['psi(g)', 'psi g'], PA_STANDARD_ATMOSPHERE),
     ],
   },
   lengthSmall: {

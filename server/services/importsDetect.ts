@@ -78,9 +78,12 @@ export function detectHeader(cells: string[][]): Detection | null {
     for (const [f, c] of Object.entries(mapping) as [ImportField, number][]) {
       const q = FIELD_QUANTITY[f];
       if (!q) continue;
-      const u = unitOf(f, splitHeader(row[c] ?? '').unit) ?? (unitRow ? unitOf(f, next[c] ?? null) : null);
-      if (u) units[f] = u;
-      else notes.push(`No unit recognised for "${row[c]}"; assumed ${defaultUnit(f)} — confirm or change it`);
+      const text = unitOf(f, splitHeader(row[c] ?? '').unit) ? splitHeader(row[c] ?? '').unit : unitRow ? next[c] : null;
+      const u = unitOf(f, text ?? null);
+      if (!u) notes.push(`No unit recognised for "${row[c]}"; assumed ${defaultUnit(f)} — confirm or change it`);
+      else units[f] = u;
+      if (u && f === 'pressure' && /^[[(]?(psi|bar|kpa)[\])]?$/i.test(text!.trim()))
+        notes.push(`"${row[c]}" does not say gauge or absolute; read as absolute (${u}) — choose Gauge if it is gauge`);
     }
     row.forEach((h, c) => {
       if (h && !Object.values(mapping).includes(c)) notes.push(`Column "${h}" is not used`);

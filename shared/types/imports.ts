@@ -27,7 +27,9 @@ export const DENSITY_UNITS = ['kg/m3', 'lb/ft3'] as const;
 export const SURFACE_TENSION_UNITS = ['mN/m', 'dyn/cm'] as const;
 export const VISCOSITY_UNITS = ['mPa.s', 'cP'] as const;
 export const TEMPERATURE_UNITS = ['C', 'F'] as const;
-export const PRESSURE_UNITS = ['kPa', 'bar', 'psia'] as const;
+/** absolute, then gauge (made absolute with the standard atmosphere) */
+export const PRESSURE_UNITS = ['kPa', 'bar', 'psia', 'kPag', 'barg', 'psig'] as const;
+export const GAUGE_PRESSURE_UNITS: readonly ImportUnit[] = ['kPag', 'barg', 'psig'];
 export type ImportUnit =
   | (typeof MASS_FLOW_UNITS)[number]
   | (typeof DENSITY_UNITS)[number]

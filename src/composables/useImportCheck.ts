@@ -10,6 +10,7 @@ import type {
   ImportRowError,
   ImportUnits,
 } from '../../shared/types/imports';
+import type { TrayLoad } from '../../shared/types/rating';
 
 export interface ImportChoices {
   mapping: ImportMapping;
@@ -39,9 +40,11 @@ export function useImportCheck(
   /** all row errors (the server lists the first ones) */
   const errorCount = ref(0);
   const trays = ref(0);
+  /** the converted loads (SI, stored tray numbers) of the last check */
+  const loads = ref<TrayLoad[]>([]);
   const checking = ref(false);
   const failure = ref<string | null>(null);
-  let checkedKey = '';
+  const checkedKey = ref('');
   let timer: ReturnType<typeof setTimeout> | undefined;
   let seq = 0;
 
@@ -58,7 +61,7 @@ export function useImportCheck(
     const c = choices();
     const key = keyOf(c);
     const n = ++seq; // answers to any earlier request are now dropped
-    if (!p || key === checkedKey) {
+    if (!p || key === checkedKey.value) {
       [checking.value, failure.value] = [false, null]; // errors already belong to these choices
       return;
     }
@@ -75,10 +78,11 @@ export function useImportCheck(
         { quiet: true },
       );
       if (n !== seq) return;
-      [checkedKey, errors.value, errorCount.value, trays.value, failure.value] = [
+      [checkedKey.value, errors.value, errorCount.value, loads.value, trays.value, failure.value] = [
         key,
         r.errors,
         r.errorCount,
+        r.loads,
         r.loads.length,
         null,
       ];
@@ -95,7 +99,8 @@ export function useImportCheck(
   function reset(p: ImportPreview): void {
     clearTimeout(timer);
     seq++;
-    checkedKey = keyOf(p);
+    checkedKey.value = keyOf(p);
+    loads.value = p.loads;
     [errors.value, errorCount.value, trays.value, failure.value, checking.value] = [
       p.errors,
       p.errorCount,
@@ -121,7 +126,15 @@ export function useImportCheck(
     { deep: true },
   );
 
-  /** storing waits until the map is right */
-  const blocked = computed(() => mapFaults.value.length > 0);
-  return { errors, errorCount, trays, checking, failure, blocked, run, reset, cancel };
+  /** Why "Store" is not offered now (null when it is): storing waits for a clean check of the current choices. */
+  const blockReason = computed((): string | null => {
+    if (mapFaults.value.length) return 'The stage-to-tray map has faults: fix them first.';
+    if (checking.value || keyOf(choices()) !== checkedKey.value) return 'The rows are being checked with these choices…';
+    if (failure.value) return `The rows could not be checked: ${failure.value}`;
+    if (errorCount.value) return `Fix the ${errorCount.value} problem(s) listed first: nothing is stored while any row is wrong.`;
+    if (!trays.value) return 'No tray was read from the file.';
+    return null;
+  });
+  const blocked = computed(() => blockReason.value !== null);
+  return { errors, errorCount, loads, trays, checking, failure, blocked, blockReason, run, reset, cancel };
 }

@@ -88,8 +88,12 @@ describe('engineer path in Chromium', () => {
     expect(cells.map((c) => c[0])).toEqual(['6', '13', '21']);
     expect(cells[0]![1]).toBe('Vapour flow (lb/h)');
     expect(cells[1]![2]).toMatch(/vapour density .* below the liquid density/i);
-    await b.page.getByRole('button', { name: 'Store load case' }).click();
-    expect(await b.page.locator('[data-test="import-refused"]').textContent()).toMatch(/nothing was stored/i);
+    // storing is not offered while any row is wrong, and the page says why beside the button
+    expect(await b.page.getByRole('button', { name: 'Store load case' }).isDisabled()).toBe(true);
+    expect(await b.page.locator('[data-test="import-store-blocked"]').textContent()).toBe(
+      'Fix the 3 problem(s) listed first: nothing is stored while any row is wrong.',
+    );
+    expect(await b.page.locator('[data-test="import-converted"]').count()).toBe(0);
     await shot(b.page, 'engineer-import-refused');
     expect(await countLoadCases()).toBe(before);
   });
@@ -98,8 +102,30 @@ describe('engineer path in Chromium', () => {
     await b.page.getByRole('link', { name: 'T-701' }).first().click();
     await b.page.waitForURL(/\/columns\/[^/]+$/);
     await importFile(goodFile, `Spring test profile ${Date.now().toString(36)}`);
+    // the file says psia: absolute; read as gauge, a standard atmosphere would be added
+    const basis = b.page.locator('[data-test="import-pressure-basis"]');
+    await basis.getByRole('button', { name: 'Gauge' }).click();
+    await b.page.getByRole('button', { name: 'Check the rows' }).click();
+    const converted = b.page.locator('[data-test="import-converted"]');
+    await converted.waitFor();
+    await b.page.locator('[data-test="import-gauge-note"]').waitFor();
+    await converted.getByRole('button', { name: 'US customary' }).click();
+    const firstRow = async () => (await converted.locator('tbody tr').first().innerText()).split('\t').map((c) => c.trim());
+    // tray 1: 557,000 lb/h; 24.48 psig + 14.696 psi (NIST SP 811: 101.325 kPa) = 39.18 psia
+    expect(await converted.locator('thead').innerText()).toContain('Pressure, absolute (psia)');
+    expect((await firstRow())[1]).toBe('557,000');
+    expect((await firstRow())[8]).toBe('39.18');
+    await shot(b.page, 'engineer-import-converted');
+    await b.page.getByRole('button', { name: 'Change the mapping' }).click();
+    await basis.getByRole('button', { name: 'Absolute' }).click();
     await b.page.getByRole('button', { name: 'Check the rows' }).click();
     await b.page.locator('[data-test="import-clean"]').waitFor();
+    await converted.getByRole('button', { name: 'SI' }).click();
+    // 557,000 lb/h × 0.453 592 37 kg/lb = 252,651 kg/h; 24.48 psia × 6.894 757 kPa/psi = 168.8 kPa
+    expect((await firstRow())[1]).toBe('252,651');
+    expect((await firstRow())[8]).toBe('168.8');
+    expect(await b.page.locator('[data-test="import-gauge-note"]').count()).toBe(0);
+    expect(await b.page.locator('[data-test="import-store-blocked"]').count()).toBe(0);
     await b.page.getByRole('button', { name: 'Store load case' }).click();
     await b.page.waitForURL(/\/load-cases\//);
     await b.page.locator('[data-test="load-grid"]').waitFor();

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { detectHeader, detectNumbering, fieldOfHeader, splitHeader, unitOf } from '../../server/services/importsDetect.js';
 import { convertRows, parseNumber } from '../../server/services/importsRows.js';
+import { toSI } from '../../shared/units.js';
 
 describe('import header and unit detection', () => {
   it('splits a header into name and unit in the usual spellings', () => {
@@ -140,5 +141,22 @@ describe('import header and unit detection', () => {
     });
     expect(r.loads).toEqual([]);
     expect(r.errors.map((e) => e.column)).toEqual(['liquidMassFlow', 'vapourDensity', 'liquidDensity', 'surfaceTension']);
+  });
+
+  it('reads gauge pressure units, makes them absolute with the standard atmosphere, and asks when a unit says neither', () => {
+    const head = (unit: string) => ['Tray', 'Vapour flow (kg/h)', 'Liquid flow (kg/h)', `Pressure (${unit})`];
+    expect(detectHeader([head('psig')])!.units.pressure).toBe('psig');
+    expect(detectHeader([head('barg')])!.units.pressure).toBe('barg');
+    expect(detectHeader([head('kPag')])!.units.pressure).toBe('kPag');
+    expect(detectHeader([head('bara')])!.notes.join(' ')).not.toMatch(/gauge or absolute/);
+    const plain = detectHeader([head('bar')])!;
+    expect(plain.units.pressure).toBe('bar');
+    expect(plain.notes).toContain(
+      '"Pressure (bar)" does not say gauge or absolute; read as absolute (bar) — choose Gauge if it is gauge',
+    );
+    // 1 psi = 6.894 757 kPa; standard atmosphere 101.325 kPa exactly (NIST SP 811, App. B.9)
+    expect(toSI('pressure', 10, 'psig')).toBeCloseTo(10 * 6.894757 + 101.325, 4);
+    expect(toSI('pressure', 2, 'barg')).toBeCloseTo(301.325, 9);
+    expect(toSI('pressure', 0, 'kPag')).toBeCloseTo(101.325, 9);
   });
 });
