@@ -43,17 +43,20 @@ export async function exportLoadCase(ds: DataSource, user: SessionUser, id: stri
 export async function exportRun(ds: DataSource, user: SessionUser, id: string, format: 'csv' | 'xlsx'): Promise<ExportFile> {
   const r = await visibleChild(ds.manager, user, RatingRun, id, 'Rating run');
   const names = new Map(r.snapshot.sections.map((s) => [s.sectionId, s.name]));
-  const first = r.results.trays[0];
   const headers = ['Tray', 'Section', 'Controlling check'];
   for (const c of CHECK_NAMES) {
-    const unit = first?.checks[c].unit ?? '';
+    // a check added to the engine after the run was rated is absent from it: its cells stay empty
+    const unit = r.results.trays.find((t) => t.checks[c])?.checks[c]?.unit ?? '';
     headers.push(`${c} (${unit})`, `${c} limit (${unit})`, `${c} % of limit`, `${c} status`);
   }
   const rows = r.results.trays.map((t) => [
     t.tray,
     names.get(t.sectionId) ?? '',
     t.controllingCheck,
-    ...CHECK_NAMES.flatMap((c) => [t.checks[c].value, t.checks[c].limit, t.checks[c].percentOfLimit, t.checks[c].status]),
+    ...CHECK_NAMES.flatMap((c) => {
+      const k = t.checks[c];
+      return k ? [k.value, k.limit, k.percentOfLimit, k.status] : [null, null, null, null];
+    }),
   ]);
   const notes = [
     `Run "${r.label}", column ${r.snapshot.column.tag} (trays numbered ${r.snapshot.column.numbering}), load case "${r.snapshot.loadCase.name}", status ${r.status}, engine ${r.engineVersion}, created ${r.createdAt.toISOString()}`,

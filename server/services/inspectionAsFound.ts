@@ -106,9 +106,11 @@ function compareDesignAsFound(design: RatingRun, asFound: RatingRun, geometry: A
   const trays: AsFoundTrayChange[] = compareResults(design.results.trays, asFound.results.trays).map((d) => {
     const a = da.get(d.tray);
     const b = db.get(d.tray);
-    const moved = CHECK_NAMES.filter((c) => a && b && a.checks[c].status !== b.checks[c].status).map((c) => ({
-      check: c, design: a!.checks[c].percentOfLimit, asFound: b!.checks[c].percentOfLimit, designStatus: a!.checks[c].status, asFoundStatus: b!.checks[c].status,
-    }));
+    const moved = CHECK_NAMES.flatMap((c) => {
+      const x = a?.checks[c];
+      const y = b?.checks[c];
+      return x && y && x.status !== y.status ? [{ check: c, design: x.percentOfLimit, asFound: y.percentOfLimit, designStatus: x.status, asFoundStatus: y.status }] : [];
+    });
     return {
       tray: d.tray, designControlling: d.controllingA, asFoundControlling: d.controllingB, controllingChanged: d.controllingChanged, movedChecks: moved,
       dryPressureDrop_mm: { design: a?.details.dryPressureDrop_mm ?? 0, asFound: b?.details.dryPressureDrop_mm ?? 0 },

@@ -14,8 +14,8 @@ export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser[
   const trays = run.results.trays;
   const pct = chartSvg({
     width: 780, height: 210, xTitle: 'Tray', yTitle: 'Highest percent of limit on the tray (%)', xIntegers: true, yMin: 0,
-    series: [{ name: 'controlling', color: STATUS_HEX.ok, kind: 'bar', points: trays.map((t) => [t.tray, t.checks[t.controllingCheck].percentOfLimit]),
-      colors: trays.map((t) => STATUS_HEX[t.checks[t.controllingCheck].status]) }],
+    series: [{ name: 'controlling', color: STATUS_HEX.ok, kind: 'bar', points: trays.map((t) => [t.tray, t.checks[t.controllingCheck]?.percentOfLimit ?? 0]),
+      colors: trays.map((t) => STATUS_HEX[t.checks[t.controllingCheck]?.status ?? 'ok']) }],
     yLines: [{ y: 100, label: 'limit', color: STATUS_HEX.over }],
     xLines: run.results.sections.slice(1).map((s) => ({ x: Math.min(s.firstTray, s.lastTray) - 0.5, label: s.name })),
   });

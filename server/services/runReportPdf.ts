@@ -85,7 +85,10 @@ function trayTable(run: RunRecord, sys: SessionUser['unitSystem']): Content[] {
     const refs = t.warnings.map((w) => keys.indexOf(w.code) + 1);
     body.push([
       String(t.tray), formatQuantity('massFlow', load.get(t.tray)?.vapourMassFlow_kg_h, sys), formatQuantity('massFlow', load.get(t.tray)?.liquidMassFlow_kg_h, sys),
-      ...CHECK_NAMES.map((c) => ({ text: t.checks[c].percentOfLimit.toFixed(0), color: STATUS_HEX[t.checks[c].status], bold: t.checks[c].status === 'over', alignment: 'right' })),
+      ...CHECK_NAMES.map((c) => {
+        const k = t.checks[c]; // absent from runs rated before the engine had the check
+        return k ? { text: k.percentOfLimit.toFixed(0), color: STATUS_HEX[k.status], bold: k.status === 'over', alignment: 'right' } : { text: '—', alignment: 'right' };
+      }),
       CHECK_SHORT[t.controllingCheck], [...new Set(refs)].join(', '),
     ]);
   }

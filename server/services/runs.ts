@@ -10,7 +10,7 @@ import { ConflictError, NotFoundError, ValidationError, type ErrorDetail } from 
 import { forgetRunInputs, guardOf, insertRunWithAudit, runInputsCache, runInputsMemo, type NewRun } from './runsStore.js';
 import { toRunSummary } from './runsRead.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { MethodOptions, RatingRequest, TrayLoad } from '../../shared/types/rating.js';
+import type { MethodOptions, RatingRequest, TrayLoad, TrayResult } from '../../shared/types/rating.js';
 import type {
   CreateRatingRunInput,
   CreateRunBody,
@@ -18,7 +18,6 @@ import type {
   RunResults,
   RunSnapshot,
   RunSnapshotSection,
-  RunTrayResult,
 } from '../../shared/types/runs.js';
 
 /** Rate the snapshot: one engine call per section, trays merged and ordered by tray number. */
@@ -27,7 +26,7 @@ export function rateSnapshot(
   /** validated requests by section id, filled here; only for sections whose geometry and loads are fixed for the map's life */
   validated?: Map<string, RatingRequest>,
 ): { results: RunResults; methods: MethodOptions } {
-  const trays: RunTrayResult[] = [];
+  const trays: (TrayResult & { sectionId: string })[] = [];
   const sections: RunResults['sections'] = [];
   const errors: ErrorDetail[] = [];
   let methods: MethodOptions = snapshot.methods;

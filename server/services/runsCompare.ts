@@ -3,17 +3,20 @@ import type { DataSource } from 'typeorm';
 import { RatingRun } from '../db/entities/RatingRun.js';
 import { visibleChild } from './columnsCommon.js';
 import { toRunSummary } from './runsRead.js';
-import { CHECK_NAMES, type CheckName, type TrayResult } from '../../shared/types/rating.js';
+import { CHECK_NAMES, type CheckName } from '../../shared/types/rating.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { CheckDiff, RunComparison, TrayDiff } from '../../shared/types/runs.js';
+import type { CheckDiff, RunComparison, RunTrayResult, TrayDiff } from '../../shared/types/runs.js';
+
+/** What a comparison reads of a tray; checks absent from a run (added to the engine since) compare as null. */
+type ComparedTray = Pick<RunTrayResult, 'tray' | 'checks' | 'controllingCheck'>;
 import { User } from '../db/entities/User.js';
 
-const worstStatus = (t: TrayResult): TrayDiff['statusA'] => {
-  const s = CHECK_NAMES.map((c) => t.checks[c].status);
+const worstStatus = (t: ComparedTray): TrayDiff['statusA'] => {
+  const s = CHECK_NAMES.map((c) => t.checks[c]?.status);
   return s.includes('over') ? 'over' : s.includes('near') ? 'near' : 'ok';
 };
 
-export function compareResults(a: TrayResult[], b: TrayResult[]): TrayDiff[] {
+export function compareResults(a: ComparedTray[], b: ComparedTray[]): TrayDiff[] {
   const ma = new Map(a.map((t) => [t.tray, t]));
   const mb = new Map(b.map((t) => [t.tray, t]));
   const trays = [...new Set([...ma.keys(), ...mb.keys()])].sort((x, y) => x - y);
@@ -22,8 +25,8 @@ export function compareResults(a: TrayResult[], b: TrayResult[]): TrayDiff[] {
     const tb = mb.get(tray);
     const checks = Object.fromEntries(
       CHECK_NAMES.map((c): [CheckName, CheckDiff] => {
-        const va = ta ? ta.checks[c].percentOfLimit : null;
-        const vb = tb ? tb.checks[c].percentOfLimit : null;
+        const va = ta?.checks[c]?.percentOfLimit ?? null;
+        const vb = tb?.checks[c]?.percentOfLimit ?? null;
         return [c, { a: va, b: vb, delta: va !== null && vb !== null ? vb - va : null }];
       }),
     ) as Record<CheckName, CheckDiff>;

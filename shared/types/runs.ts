@@ -50,8 +50,13 @@ export interface RunSnapshot {
   engineVersion: string;
 }
 
-export interface RunTrayResult extends TrayResult {
+/**
+ * A stored tray result. Its checks are those the engine computed when the run was rated: a check added
+ * since is absent from older runs (stored runs decode by name, DEVELOPERS.md "Stored runs").
+ */
+export interface RunTrayResult extends Omit<TrayResult, 'checks'> {
   sectionId: string;
+  checks: Partial<Record<CheckName, CheckResult>>;
 }
 
 export interface RunSectionResult {

@@ -35,7 +35,7 @@ describe('demo scenario on T-701', () => {
 
   it('Winter maximum: the top trays flood (jet flood above 100 %)', () => {
     const r = rate('Winter maximum');
-    const flooding = r.trays.filter((t) => t.checks.jetFlood.value > 100).map((t) => t.tray);
+    const flooding = r.trays.filter((t) => t.checks.jetFlood!.value > 100).map((t) => t.tray);
     expect(flooding.length).toBeGreaterThan(0);
     expect(Math.max(...flooding)).toBeLessThanOrEqual(8);
   });
@@ -43,7 +43,7 @@ describe('demo scenario on T-701', () => {
   it('High top-PA duty: tray 1 above the top PA is near dry-out (crest under 6 mm), and only tray 1 is over', () => {
     const r = rate('High top-PA duty');
     const t1 = r.trays[0]!;
-    expect(t1.checks.liquidLoad.value).toBeLessThan(6);
+    expect(t1.checks.liquidLoad!.value).toBeLessThan(6);
     expect(t1.controllingCheck).toBe('liquidLoad');
     expect(r.traysOver).toEqual([1]);
   });

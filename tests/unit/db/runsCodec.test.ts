@@ -72,9 +72,9 @@ describe('stored run results (FRB4: checks and fields by name)', () => {
   it('keeps numbers bit-exact (NaN, infinities and −0 too), absent details absent and warnings with their text', () => {
     const [r] = demoResults();
     const t = r!.trays[0]!;
-    t.checks.jetFlood.value = 0.1 + 0.2;
-    t.checks.weeping.value = -0;
-    t.checks.entrainment.percentOfLimit = Infinity;
+    t.checks.jetFlood!.value = 0.1 + 0.2;
+    t.checks.weeping!.value = -0;
+    t.checks.entrainment!.percentOfLimit = Infinity;
     t.details.flowParameter = NaN;
     delete (t.details as Record<string, number>).entrainedLiquid_kg_h;
     t.warnings = [
@@ -83,9 +83,9 @@ describe('stored run results (FRB4: checks and fields by name)', () => {
     ];
     const back = decodeResults(encodeResults(r!));
     const b = back.trays[0]!;
-    expect(Object.is(b.checks.jetFlood.value, 0.1 + 0.2)).toBe(true);
-    expect(Object.is(b.checks.weeping.value, -0)).toBe(true);
-    expect(b.checks.entrainment.percentOfLimit).toBe(Infinity);
+    expect(Object.is(b.checks.jetFlood!.value, 0.1 + 0.2)).toBe(true);
+    expect(Object.is(b.checks.weeping!.value, -0)).toBe(true);
+    expect(b.checks.entrainment!.percentOfLimit).toBe(Infinity);
     expect(b.details.flowParameter).toBeNaN();
     expect('entrainedLiquid_kg_h' in b.details).toBe(false);
     expect(b.warnings).toEqual(t.warnings);
@@ -171,7 +171,7 @@ describe('stored run results (FRB4: checks and fields by name)', () => {
     const all = demoResults();
     const one = { ...all[0]!, trays: all[0]!.trays.slice(0, 1) };
     const other = all[2]!;
-    other.trays[5]!.checks.weeping.method = 'aMethodSeenOnlyHere';
+    other.trays[5]!.checks.weeping!.method = 'aMethodSeenOnlyHere';
     const stored = [encodeResults(all[1]!), encodeResults(one), encodeResults(other), encodeResults(one), encodeResults(all[1]!)];
     expect(stored.map(decodeResults)).toEqual([all[1], one, other, one, all[1]]);
     expect(header(stored[1]!).strings).not.toContain('aMethodSeenOnlyHere');
