@@ -121,7 +121,7 @@ export function valveTable(run: RunRecord, sys: SessionUser['unitSystem']): Cont
     const uA = d.valvesStartOpenVelocity_m_s!;
     const uB = d.valvesAllOpenVelocity_m_s ?? NaN;
     const state = d.holeVelocity_m_s < uA ? 'closed' : d.holeVelocity_m_s < uB ? 'partly open' : 'all open';
-    body.push([String(t.tray), { text: formatQuantity('velocity', d.holeVelocity_m_s, sys), color: STATUS_HEX[t.checks.weeping.status] },
+    body.push([String(t.tray), { text: formatQuantity('velocity', d.holeVelocity_m_s, sys), color: STATUS_HEX[t.checks.weeping?.status ?? 'ok'] },
       formatQuantity('velocity', uA, sys), formatQuantity('velocity', uB, sys), state,
       formatQuantity('lengthSmall', d.dryPressureDrop_mm, sys), formatQuantity('lengthSmall', d.valvePartlyOpenDryHead_mm, sys)]);
   }
