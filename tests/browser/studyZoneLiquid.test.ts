@@ -15,6 +15,8 @@ beforeAll(async () => {
   b = await launch({ width: 1280, height: 900 });
   b.page.setDefaultTimeout(20000);
   await signInAs(b.page, 'process-engineer');
+  // the checks below read kW and kg/h: SI, whatever another test left the demo user on
+  await b.page.request.put(`${FROTHLINE_URL}/api/auth/preferences`, { data: { unitSystem: 'SI' } });
   const cols = (await (await b.page.request.get(`${FROTHLINE_URL}/api/columns?q=T-701`)).json()) as ApiPage<ColumnSummary>;
   t701Id = cols.items.find((c) => c.tag === 'T-701')!.id;
 });
@@ -36,7 +38,11 @@ describe('zone liquid question on a new study', () => {
     await p.getByLabel('Latent heat λ (kJ/kg)').fill('265');
     await p.getByLabel('Liquid heat capacity c_p (kJ/(kg·K))').fill('2.6');
     await p.getByLabel('Return temperature drop ΔT, held fixed (K)').fill('110');
-    await p.waitForFunction(() => /most likely includes the circulation/.test(document.querySelector('[data-test=zone-liquid-hint]')?.textContent ?? ''));
+    await p.waitForFunction(
+      () => /most likely includes the circulation/.test(document.querySelector('[data-test=zone-liquid-hint]')?.textContent ?? ''),
+      undefined,
+      { timeout: 60000 },
+    );
     expect(await hint.innerText()).toMatch(/% of the base circulation/);
     await shot(p, 'study-zone-liquid-question');
   });
@@ -48,7 +54,7 @@ describe('zone liquid question on a new study', () => {
     expect(p.url()).toMatch(/\/studies\/new$/);
     await p.getByRole('radio', { name: /Yes: it includes the circulation/ }).click();
     await p.getByRole('button', { name: 'Run and save the study' }).click();
-    await p.waitForURL((u) => /\/studies\/[0-9a-f-]{36}$/.test(u.pathname));
+    await p.waitForURL((u) => /\/studies\/[0-9a-f-]{36}$/.test(u.pathname), { timeout: 60000 }); // a 40-step sweep on a busy machine
     await p.getByText('What the sweep found').waitFor();
     expect(await p.locator('[data-test=recommended-duty]').innerText()).toMatch(/\d kW/);
     // condenser duties are changes against the base case, never shown as if absolute
