@@ -4,6 +4,7 @@
  * Published set: PIP VEFV1102 / VEFV1102M, reference-tables/tolerances-pip-vefv1102.json.
  */
 import pip from '../reference-tables/tolerances-pip-vefv1102.json' with { type: 'json' };
+import { publishedSource } from './labels.js';
 import type {
   InspectionRuleChoice,
   MeasurementCheck,
@@ -14,7 +15,17 @@ import type {
   TrayMeasurements,
 } from './types/inspections.js';
 
-export const PUBLISHED_TOLERANCES = pip as ToleranceRuleSet;
+/** The published set as users read it: its sources without our provenance tags (shared/labels.ts). */
+function forReaders(set: ToleranceRuleSet): ToleranceRuleSet {
+  return {
+    ...set,
+    source: publishedSource(set.source),
+    ...(set.note === undefined ? {} : { note: publishedSource(set.note) }),
+    rules: set.rules.map((r) => ({ ...r, source: publishedSource(r.source) })),
+  };
+}
+
+export const PUBLISHED_TOLERANCES = forReaders(pip as ToleranceRuleSet);
 
 /** The rule set an inspection checks against. */
 export function ruleSetFor(choice: InspectionRuleChoice): ToleranceRuleSet {

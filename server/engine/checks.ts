@@ -35,3 +35,10 @@ export function makeCheck(
   const pct = percentOfLimit(v, limit, sense);
   return { value: v, unit, limit, sense, percentOfLimit: pct, status: statusOf(pct, nearPercent), method };
 }
+
+/** The check does not apply to this tray: status 'na', 0 % of limit (it never controls); value kept for reference. */
+export function notApplicable(c: CheckResult): CheckResult {
+  c.status = 'na';
+  c.percentOfLimit = 0;
+  return c;
+}

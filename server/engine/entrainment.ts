@@ -50,6 +50,8 @@ export const fairEntrainmentOwnFit = method(
     equation: 'logit psi = -5.82 + 5.661 p + 0.9989 p^8 - 27.48 F_LV',
     provenance: 'own-fit',
     ranges: { flowParameter: [0.01, 0.2], percentFlood: [30, 95] },
+    uncertainty:
+      "A fit to readings of Fair's log-scale chart; published readings of the chart differ by 20–30 % among themselves and the fit stays within about ±35 % of them. Read from the percent of flood of the method chosen for jet flood; not rated past flood.",
   },
 );
 

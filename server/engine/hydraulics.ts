@@ -62,7 +62,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   const uH = qV / p.holeArea;
   const flv = V > 0 ? ((L / (V * p.passes)) * Math.sqrt(rhoV / rhoL)) : 0;
 
-  // Jet flood: Fair (always, it also feeds the entrainment chart) and Kister & Haas.
+  // Jet flood: Fair (always, reported beside the chosen method) and Kister & Haas.
   // Outside the chart the conservative side is taken: below F_LV 0.01 the value at the edge (the fit
   // rises towards low F_LV), above 1 the fit's own trend (it keeps falling; the edge value would be up
   // to 28 % higher). Either way the lower capacity, and a warning.
@@ -98,15 +98,16 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   }
   const pctFlood = useKH ? pctKH : pctFair;
 
-  // Entrainment (Fair chart, own fit) on Fair's percent flood.
+  // Entrainment (Fair chart, own fit) on the percent flood of the method chosen for jet flood, so flood
+  // and entrainment share one basis. No liquid, no entrainment; past flood the check does not apply.
   const flvEnt = flv < ENT_LO ? ENT_LO : flv > ENT_HI ? ENT_HI : flv;
-  if (out && V > 0) {
+  if (out && V > 0 && L > 0 && pctFlood < 100) {
     checkRange(out, ENT, 'flowParameter', flv, tray, `evaluated at ${flvEnt}${flv > ENT_HI ? ' (overstates entrainment)' : ''}`);
-    checkRange(out, ENT, 'percentFlood', pctFair, tray, pctFair < 30 ? 'psi taken proportional to percent flood below the lowest chart curve' : 'fit extrapolated');
+    checkRange(out, ENT, 'percentFlood', pctFlood, tray, pctFlood < 30 ? 'psi taken proportional to percent flood below the lowest chart curve' : 'fit extrapolated');
   }
-  const psi = fairEntrainmentOwnFit(flvEnt, pctFair / 100);
+  const psi = L > 0 ? fairEntrainmentOwnFit(flvEnt, pctFlood / 100) : 0;
   const entrained = entrainedLiquidRate(psi, load.liquidMassFlow_kg_h);
-  if (out && psi > 0.999) checkRange(out, ENT_RATE, 'psi', psi, tray, 'entrained liquid computed at 0.999 (the rate grows without bound as the fraction approaches 1)');
+  if (out && psi > 0.999 && pctFlood < 100) checkRange(out, ENT_RATE, 'psi', psi, tray, 'entrained liquid computed at 0.999 (the rate grows without bound as the fraction approaches 1)');
 
   // Pressure drop.
   let hd: number;
@@ -123,8 +124,9 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     hd = dryTrayHeadKleinValve(uH, rhoV, rhoL, p.closedK, p.dryK, balanceHead);
     dryMethod = dryTrayHeadKleinValve.meta.id;
   }
-  const hL = clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, p.weirLength);
-  const hSigma = residualHeadBennett(sigma, rhoL, p.holeDiameter_mm);
+  // A dry tray (no liquid) holds no clear liquid and forms no bubbles: its pressure drop is the dry drop.
+  const hL = L > 0 ? clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, p.weirLength) : 0;
+  const hSigma = L > 0 ? residualHeadBennett(sigma, rhoL, p.holeDiameter_mm) : 0;
   // Bennett is a froth-regime correlation: warn in the spray regime (clear liquid below h_ct)
   if (out && V > 0 && hL > 0) checkRange(out, BENNETT, 'transitionOverClearLiquid', hct / hL, tray, 'spray regime: the froth-regime clear liquid height and residual head are extrapolated');
   const hT = hd + hL + hSigma;
@@ -165,17 +167,19 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   // Downcomer.
   const hda = apronHeadLoss(qL, p.apronArea);
   if (out && L > 0) checkRange(out, APRON, 'underflowVelocity_m_s', qL / p.apronArea, tray);
-  const clear = downcomerBackupClear(hT, p.weirHeight_mm, crest, hda);
+  const clear = L > 0 ? downcomerBackupClear(hT, p.weirHeight_mm, crest, hda) : 0;
   const aerated = clear / p.limits.aerationFactor;
   const residence = qL > 0 ? downcomerResidenceTimeApparent(p.downcomerTopArea, p.downcomerBottomArea, p.traySpacing_mm, qL) : REPORT_CAP;
 
   if (out) {
-    if (L === 0) out.push(warning(WARNING_CODES.dryTray, 'zero liquid: dry tray (no crest over the weir, no downcomer seal from liquid flow).', tray));
+    if (L === 0) out.push(warning(WARNING_CODES.dryTray, 'no liquid: the tray is dry; entrainment, weeping, weir and downcomer checks do not apply.', tray));
     else if (crest < p.limits.liquidLoad)
       out.push(warning(WARNING_CODES.lowCrest,
         `crest over the weir ${formatNumber(crest)} mm is below ${p.limits.liquidLoad} mm: risk of drying out and liquid maldistribution; consider a picket-fence (notched) weir.`, tray));
     if (V === 0) out.push(warning(WARNING_CODES.noVapour, 'zero vapour: the tray dumps its liquid through the deck (weeping).', tray));
-    if (pctFlood >= 100) out.push(warning(WARNING_CODES.beyondFlood, `percent of jet flood ${formatNumber(pctFlood)} % is beyond flood; correlations are extrapolated.`, tray));
+    if (pctFlood >= 100 && L > 0)
+      out.push(warning(WARNING_CODES.beyondFlood,
+        `the tray is flooded (${formatNumber(pctFlood)} % of jet flood): entrainment is not rated past flood and the other correlations are extrapolated.`, tray));
     // Kister (1992) §6.5 applied no high-pressure derating with Fair's correlation: its (σ/20)^0.2 term
     // already derates the low-surface-tension systems of high pressure. Warn where that does not apply.
     if (p.systemFactor === 1 && rhoV > 28.8 && (useKH || sigma >= 20))

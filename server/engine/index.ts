@@ -9,7 +9,7 @@ export { prepareSection, type PreparedSection } from './prepare.js';
 export { operatingWindow, type OperatingWindowOptions } from './operatingWindow.js';
 export { validateRatingRequest, physicsErrors, type FieldError, type ValidationResult } from './validate.js';
 export { brent, solveIncreasing, type SolveOptions, type SolveResult } from './solve.js';
-export { METHOD_REGISTRY, METHOD_METADATA } from './registry.js';
+export { METHOD_REGISTRY, METHOD_METADATA, METHOD_USES } from './registry.js';
 export { DEFAULT_LIMITS, FOAMING_CLASSES, resolveLimits, type ResolvedLimits } from './limits.js';
 export { WARNING_CODES } from './validity.js';
 export { ENGINE_VERSION } from './version.js';

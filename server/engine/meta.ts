@@ -19,6 +19,8 @@ export interface MethodMeta {
   readonly provenance: Provenance;
   /** validity ranges, keyed by input name with its unit in the key */
   readonly ranges: Readonly<Record<string, Range>>;
+  /** the uncertainty reports state once for this correlation, in plain words (default: by provenance) */
+  readonly uncertainty?: string;
 }
 
 export type MethodFn<F> = F & { readonly meta: MethodMeta };

@@ -4,12 +4,15 @@ import type { CheckName, EngineWarning, RatingRequest, RatingResult, SectionSumm
 import { prepareSection } from './prepare.js';
 import { rateTrayPrepared } from './rateTray.js';
 import { ENGINE_VERSION } from './version.js';
+import { trayState } from '../../shared/verdict.js';
 
+/**
+ * Worst tray per check; the section's controlling check and tray are those of the tray whose own
+ * controlling check (rateTray: jet flood on a flooded tray) is furthest past its limit, and the margin is
+ * measured on that check, so section and trays give one verdict.
+ */
 export function summarise(trays: readonly TrayResult[]): SectionSummary {
   const worst: SectionSummaryEntry[] = [];
-  let controllingCheck: CheckName = CHECK_NAMES[0];
-  let controllingTray = trays[0]?.tray ?? 0;
-  let maxPct = -1;
   for (const name of CHECK_NAMES) {
     let best: SectionSummaryEntry | undefined;
     for (const t of trays) {
@@ -18,29 +21,29 @@ export function summarise(trays: readonly TrayResult[]): SectionSummary {
         best = { check: name, worstTray: t.tray, worstValue: c.value, percentOfLimit: c.percentOfLimit, status: c.status };
       }
     }
-    if (!best) continue;
-    worst.push(best);
-    if (best.percentOfLimit > maxPct) {
-      maxPct = best.percentOfLimit;
-      controllingCheck = name;
-      controllingTray = best.worstTray;
+    if (best) worst.push(best);
+  }
+  let controllingCheck: CheckName = CHECK_NAMES[0];
+  let controllingTray = trays[0]?.tray ?? 0;
+  let maxPct = -1;
+  for (const t of trays) {
+    const pct = t.checks[t.controllingCheck].percentOfLimit;
+    if (pct > maxPct) {
+      maxPct = pct;
+      controllingCheck = t.controllingCheck;
+      controllingTray = t.tray;
     }
   }
   let turndown = Number.POSITIVE_INFINITY;
   const traysOver: number[] = [];
   const traysNear: number[] = [];
   for (const t of trays) {
+    const state = trayState(t);
+    // a dry tray has no weep point worth the name: it does not set the section's turndown
     const r = t.details.turndownRatio ?? 0;
-    if (r < turndown) turndown = r;
-    let over = false;
-    let near = false;
-    for (const name of CHECK_NAMES) {
-      const s = t.checks[name].status;
-      if (s === 'over') over = true;
-      else if (s === 'near') near = true;
-    }
-    if (over) traysOver.push(t.tray);
-    else if (near) traysNear.push(t.tray);
+    if (r < turndown && state !== 'dry') turndown = r;
+    if (state === 'near') traysNear.push(t.tray);
+    else if (state !== 'ok') traysOver.push(t.tray);
   }
   return {
     worst,

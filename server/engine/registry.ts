@@ -36,3 +36,22 @@ export const METHOD_REGISTRY = collect(flooding, entrainment, weeping, pressureD
 export const METHOD_METADATA: Readonly<Record<string, MethodMeta>> = Object.freeze(
   Object.fromEntries(Object.entries(METHOD_REGISTRY).map(([id, fn]) => [id, fn.meta])),
 );
+
+const id = (m: AnyMethod): string => m.meta.id;
+
+/**
+ * Correlations that a check's method relies on, listed with it in reports (so the uncertainty of, e.g.,
+ * the Kister & Haas transition height is stated once in the methods list). Keys and values are registry ids.
+ */
+export const METHOD_USES: Readonly<Record<string, readonly string[]>> = Object.freeze({
+  [id(flooding.fairFloodCapacityLygerosMagoulas)]: [
+    id(flooding.fairHoleAreaCorrection), id(flooding.fairSurfaceTensionCorrection), id(flooding.floodVelocitySoudersBrown),
+  ],
+  [id(flooding.kisterHaasFloodCapacity)]: [id(flooding.transitionClearLiquidHeightKisterHaas), id(flooding.floodVelocitySoudersBrown)],
+  [id(entrainment.fairEntrainmentOwnFit)]: [id(entrainment.entrainedLiquidRate)],
+  [id(weeping.weepPointHoleVelocityEduljee)]: [id(weeping.eduljeeK2OwnFit)],
+  [id(pressureDrop.dryTrayHeadOrifice)]: [
+    id(pressureDrop.orificeCoefficientHughmarkOConnell), id(pressureDrop.clearLiquidHeightBennett), id(pressureDrop.residualHeadBennett),
+  ],
+  [id(downcomer.downcomerBackupClear)]: [id(downcomer.apronHeadLoss)],
+});

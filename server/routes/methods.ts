@@ -1,9 +1,10 @@
 import { defineRoutes } from '../http/route.js';
-import { ENGINE_VERSION, METHOD_METADATA } from '../engine/index.js';
+import { ENGINE_VERSION, METHOD_METADATA, METHOD_USES } from '../engine/index.js';
 import limitsTable from '../../reference-tables/limits.json' with { type: 'json' };
+import { PROVENANCE_UNCERTAINTY, publishedSource } from '../../shared/labels.js';
 import type { MethodsPayload } from '../../shared/types/methods.js';
 
-/** Cautions printed with every rating (field-practice.md §5.2). */
+/** Cautions printed with every rating (usual cautions of the trade for operating changes and column entry). */
 export const RATING_CAUTIONS = [
   'Results are screening estimates from published correlations; they are not a vendor rating or a design guarantee.',
   'Any operating change (rate increase, pump-around duty change) goes through management-of-change review, with a pre-start-up safety review where applicable.',
@@ -16,10 +17,12 @@ const payload: MethodsPayload = {
     .map((m) => ({
       id: m.id,
       label: m.label,
-      source: m.source,
+      source: publishedSource(m.source),
       equation: m.equation,
       provenance: m.provenance,
       ranges: m.ranges,
+      uncertainty: m.uncertainty ?? PROVENANCE_UNCERTAINTY[m.provenance],
+      uses: METHOD_USES[m.id] ?? [],
     }))
     .sort((a, b) => a.label.localeCompare(b.label)),
   limits: limitsTable.map((r) => ({
@@ -27,8 +30,8 @@ const payload: MethodsPayload = {
     limit: r.limit,
     unit: r.unit,
     sense: r.sense,
-    note: r.note,
-    source: r.source,
+    note: publishedSource(r.note),
+    source: publishedSource(r.source),
   })),
   cautions: RATING_CAUTIONS,
 };

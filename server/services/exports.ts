@@ -5,6 +5,8 @@ import { RatingRun } from '../db/entities/RatingRun.js';
 import { visibleChild, visibleColumn } from './columnsCommon.js';
 import { toFile, type ExportFile, type Table } from './exportsFormat.js';
 import { CHECK_NAMES } from '../../shared/types/rating.js';
+import { CHECK_LABELS, REVIEW_LABELS, STATUS_LABELS, TRAY_STATE_LABELS } from '../../shared/labels.js';
+import { trayState } from '../../shared/verdict.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { TrayLoad } from '../../shared/types/rating.js';
 
@@ -43,23 +45,27 @@ export async function exportLoadCase(ds: DataSource, user: SessionUser, id: stri
 export async function exportRun(ds: DataSource, user: SessionUser, id: string, format: 'csv' | 'xlsx'): Promise<ExportFile> {
   const r = await visibleChild(ds.manager, user, RatingRun, id, 'Rating run');
   const names = new Map(r.snapshot.sections.map((s) => [s.sectionId, s.name]));
-  const headers = ['Tray', 'Section', 'Controlling check'];
+  const headers = ['Tray', 'Section', 'Tray state', 'Controlling check'];
   for (const c of CHECK_NAMES) {
     // a check added to the engine after the run was rated is absent from it: its cells stay empty
+    const label = CHECK_LABELS[c];
     const unit = r.results.trays.find((t) => t.checks[c])?.checks[c]?.unit ?? '';
-    headers.push(`${c} (${unit})`, `${c} limit (${unit})`, `${c} % of limit`, `${c} status`);
+    headers.push(`${label} (${unit})`, `${label} limit (${unit})`, `${label} % of limit`, `${label} status`);
   }
+  // a check that does not apply has no value or limit to read: its cells say so in the status only
   const rows = r.results.trays.map((t) => [
     t.tray,
     names.get(t.sectionId) ?? '',
-    t.controllingCheck,
+    TRAY_STATE_LABELS[trayState(t)],
+    CHECK_LABELS[t.controllingCheck],
     ...CHECK_NAMES.flatMap((c) => {
       const k = t.checks[c];
-      return k ? [k.value, k.limit, k.percentOfLimit, k.status] : [null, null, null, null];
+      if (!k) return [null, null, null, null];
+      return k.status === 'na' ? [null, null, null, STATUS_LABELS.na] : [k.value, k.limit, k.percentOfLimit, STATUS_LABELS[k.status]];
     }),
   ]);
   const notes = [
-    `Run "${r.label}", column ${r.snapshot.column.tag} (trays numbered ${r.snapshot.column.numbering}), load case "${r.snapshot.loadCase.name}", status ${r.status}, engine ${r.engineVersion}, created ${r.createdAt.toISOString()}`,
+    `Run "${r.label}", column ${r.snapshot.column.tag} (trays numbered ${r.snapshot.column.numbering}), load case "${r.snapshot.loadCase.name}", review status ${REVIEW_LABELS[r.status]}, engine ${r.engineVersion}, created ${r.createdAt.toISOString()}`,
     ...CAUTIONS,
   ];
   return toFile({ sheet: 'Results', headers, rows, notes }, `${r.snapshot.column.tag}-${r.label}-results`, format);

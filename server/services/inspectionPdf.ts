@@ -6,21 +6,15 @@ import type { DataSource } from 'typeorm';
 import { InspectionPhoto } from '../db/entities/InspectionPhoto.js';
 import { getObjectBuffer } from '../storage/s3.js';
 import { getInspection } from './inspections.js';
-import { pdfDateTime, pdfFileName, plainText, renderPdf, type Content } from './pdfEngine.js';
+import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
+import { DAMAGE_LABELS, INSPECTION_STATUS_LABELS, PUNCH_PRIORITY_LABELS, TOLERANCE_ITEM_LABELS, publishedSource } from '../../shared/labels.js';
 import { ROLE_LABELS, type Role } from '../../shared/permissions.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { InspectionRecord, InspectionStatus, InspectionTrayRecord, MeasurementCheck, PunchPriority, ToleranceItem } from '../../shared/types/inspections.js';
+import type { InspectionRecord, InspectionTrayRecord, MeasurementCheck } from '../../shared/types/inspections.js';
 
-/** Words for what the record stores as codes. */
-const ITEM_WORDS: Record<ToleranceItem, string> = {
-  weirHeight: 'Outlet weir height',
-  downcomerClearance: 'Downcomer clearance',
-  traySpacing: 'Tray spacing',
-  levelness: 'Levelness (high − low)',
-};
-const STATUS_WORDS: Record<InspectionStatus, string> = { draft: 'draft', 'inspector-signed': 'signed by the inspector', 'engineer-signed': 'signed off' };
-const PRIORITY_WORDS: Record<PunchPriority, string> = { 'before-box-up': 'Before box-up', 'if-time-allows': 'If time allows', 'next-turnaround': 'Next turnaround' };
-const itemText = (c: MeasurementCheck) => `${ITEM_WORDS[c.item]}${c.point !== null ? `, point ${c.point + 1}` : ''}`;
+/** Sentence form of the inspection's state (the chip's label, in lower case). */
+const statusWords = (st: InspectionRecord['status']) => INSPECTION_STATUS_LABELS[st].toLowerCase();
+const itemText = (c: MeasurementCheck) => `${TOLERANCE_ITEM_LABELS[c.item]}${c.point !== null ? `, point ${c.point + 1}` : ''}`;
 
 export const SAFETY_CAUTIONS = [
   'Column entry is permit-required confined-space work (OSHA 29 CFR 1910.146): atmosphere testing (O2, LEL, H2S, CO), an attendant (hole watch) with tested radio contact, and a rescue plan.',
@@ -43,7 +37,7 @@ function traySheet(t: InspectionTrayRecord): Content[] {
         widths: ['*', '*', '*', '*'],
         body: [
           ['Fouling / plugging', `${yes(f.fouling)} (${f.blockedPercent} % blocked)`, 'Corrosion / erosion', yes(f.corrosion)],
-          ['Uplift / crushing', f.damage, 'Valves missing / stuck', `${f.valvesMissing} / ${f.valvesStuck}`],
+          ['Uplift / crushing', DAMAGE_LABELS[f.damage], 'Valves missing / stuck', `${f.valvesMissing} / ${f.valvesStuck}`],
           ['Loose fasteners', yes(f.looseFasteners), 'Debris', yes(f.debris)],
           ['Manway installed', yes(f.manwayInstalled), 'Closure witnessed', yes(f.closureWitnessed)],
         ],
@@ -91,15 +85,21 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
       margin: [0, 0, 0, 8],
     });
   }
+  const pdf = await renderPdf(inspectionDoc(r, photos));
+  return { pdf, filename: pdfFileName('inspection', r.columnTag, r.turnaround) };
+}
+
+/** The inspection report's parts (tested without rendering), the photo log already laid out. */
+export function inspectionDoc(r: InspectionRecord, photos: Content[]): PdfParts {
   const sig = (label: string, s: InspectionRecord['inspectorSignature']) => [label, s ? `${s.name} (${ROLE_LABELS[s.role as Role] ?? s.role}), ${pdfDateTime(s.at)}` : 'not signed'];
-  const pdf = await renderPdf({
+  return {
     header: `${r.columnTag} · ${r.turnaround} · turnaround inspection`,
-    footer: `Inspection record · ${STATUS_WORDS[r.status]} · printed ${pdfDateTime(new Date())}`,
+    footer: `Inspection record · ${statusWords(r.status)} · printed ${pdfDateTime(new Date())}`,
     content: [
       { text: `Turnaround inspection — ${r.columnTag}`, style: 'h1' },
-      { text: `${r.turnaround} · ${r.startDate}${r.endDate ? ` – ${r.endDate}` : ''} · ${STATUS_WORDS[r.status]}` },
+      { text: `${r.turnaround} · ${r.startDate}${r.endDate ? ` – ${r.endDate}` : ''} · ${statusWords(r.status)}` },
       { text: `Inspector ${r.inspectorName ?? '—'} · entry permit ${r.permitRef || '—'} · gas test ${r.gasTestRef || '—'} (references recorded, not issued)` },
-      { text: `Tolerances: ${r.ruleSet.name}; levelness class ${r.rules.levelnessClass}. Source: ${plainText(r.ruleSet.source)}` },
+      { text: `Tolerances: ${r.ruleSet.name}; levelness class ${r.rules.levelnessClass}. Source: ${publishedSource(r.ruleSet.source)}` },
       { text: 'Safety cautions', style: 'h2' },
       { ul: SAFETY_CAUTIONS },
       { text: 'Signatures', style: 'h2' },
@@ -108,7 +108,7 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
       r.punch.length
         ? { table: { headerRows: 1, widths: ['auto', 'auto', 'auto', '*', '*', 'auto', 'auto', 'auto'], body: [
             ['#', 'Tray', 'Pass', 'Finding', 'Action', 'Priority', 'Owner', 'Status'].map((h) => ({ text: h, bold: true })),
-            ...r.punch.map((p) => [String(p.itemNo), String(p.tray ?? '—'), String(p.pass ?? '—'), p.finding, p.action, PRIORITY_WORDS[p.priority], p.owner,
+            ...r.punch.map((p) => [String(p.itemNo), String(p.tray ?? '—'), String(p.pass ?? '—'), p.finding, p.action, PUNCH_PRIORITY_LABELS[p.priority], p.owner,
               p.status === 'closed' ? `closed by ${p.closedByName ?? '—'}${p.closedAt ? `, ${pdfDateTime(p.closedAt)}` : ''}` : 'open']),
           ] }, fontSize: 8 }
         : { text: 'No punch items.' },
@@ -119,6 +119,5 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
       ...r.trays.flatMap(traySheet),
       { text: 'Screening record: hydraulic consequences need confirmation by the internals vendor and licensed engineers; site permits and local codes govern.', italics: true, margin: [0, 12, 0, 0] },
     ],
-  });
-  return { pdf, filename: pdfFileName('inspection', r.columnTag, r.turnaround) };
+  };
 }

@@ -81,7 +81,3 @@ export function pdfDateTime(iso: string | Date): string {
 
 /** A safe file name from parts. */
 export const pdfFileName = (...parts: string[]): string => parts.join('-').replace(/[^A-Za-z0-9._-]+/g, '_') + '.pdf';
-
-/** Text as readers see it: our bracketed working tags (how a value was obtained, our notes files) left out. */
-export const plainText = (s: string): string =>
-  s.replace(/\s*\[[^\]]*(from memory|to confirm|recalled|seen in|\.md\b)[^\]]*\]/gi, '').trim();

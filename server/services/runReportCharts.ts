@@ -1,13 +1,13 @@
 /** The two charts of the rating report: percent of limit per tray, and the controlling tray's operating window. */
 import { chartSvg, legendSvg } from './reportCharts.js';
 import type { Content } from './pdfEngine.js';
-import { STATUS_LABELS } from '../../shared/checkLabels.js';
+import { STATUS_LABELS } from '../../shared/labels.js';
 import { formatQuantity, unitLabel } from '../../shared/units.js';
 import type { CheckStatus } from '../../shared/types/rating.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { RunRecord, RunWindow } from '../../shared/types/runs.js';
 
-export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#b26a12', over: '#b3261e' };
+export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#b26a12', over: '#b3261e', na: '#8a8a8a' };
 const CURVE_HEX = ['#b3261e', '#e07a6f', '#8c4f7a', '#3c6e8f', '#2f8f9d', '#d9822b', '#6f8f72', '#5c5c3d'];
 
 export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser['unitSystem']): Content[] {

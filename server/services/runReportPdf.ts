@@ -5,16 +5,20 @@
  * once, with the trays it concerns) and the methods with their sources. Header and footer on every page.
  */
 import type { DataSource } from 'typeorm';
-import { ENGINE_VERSION, METHOD_METADATA } from '../engine/index.js';
+import { ENGINE_VERSION, METHOD_METADATA, METHOD_USES } from '../engine/index.js';
 import { RATING_CAUTIONS } from '../routes/methods.js';
 import { STATUS_HEX, runCharts } from './runReportCharts.js';
-import { pdfDateTime, pdfFileName, plainText, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
+import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
 import { getRun, runWindow } from './runsRead.js';
-import { CHECK_LABELS, CHECK_SHORT, REVIEW_LABELS, STATUS_LABELS } from '../../shared/checkLabels.js';
+import {
+  CHECK_LABELS, CHECK_SHORT, PROVENANCE_LABELS, PROVENANCE_UNCERTAINTY, REVIEW_LABELS, SENSE_WORDS, STATUS_LABELS, TRAY_STATE_LABELS,
+  publishedSource,
+} from '../../shared/labels.js';
+import { coverageSentence, sectionCoverage, trayState } from '../../shared/verdict.js';
 import { CHECK_NAMES } from '../../shared/types/rating.js';
 import { formatQuantity, quantityOfEngineUnit, unitLabel, type QuantityId } from '../../shared/units.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { ReviewEntry, RunRecord, RunWindow } from '../../shared/types/runs.js';
+import type { ReviewEntry, RunRecord, RunTrayResult, RunWindow } from '../../shared/types/runs.js';
 
 const ACTION_WORDS: Record<ReviewEntry['action'], string> = { submit: 'Submitted', approve: 'Approved', return: 'Returned' };
 const th = (t: string) => ({ text: t, style: 'th' });
@@ -53,12 +57,12 @@ function reviewBlock(run: RunRecord): Content[] {
 function sectionTable(run: RunRecord, sys: SessionUser['unitSystem']): Content {
   const body: Content[] = [['Section', 'Trays', 'Check', 'Worst tray', 'Value', 'Limit', '% of limit', 'Status'].map(th)];
   for (const s of run.results.sections)
-    for (const e of s.summary.worst) {
+    for (const e of s.summary.worst.filter((x) => x.status !== 'na')) {
       const c = run.results.trays.find((t) => t.tray === e.worstTray)?.checks[e.check];
       const q: QuantityId = quantityOfEngineUnit(c?.unit ?? '-');
       const unit = q === 'percent' || q === 'ratio' ? (c?.unit === '-' ? '' : (c?.unit ?? '')) : unitLabel(q, sys);
       body.push([s.name, `${s.firstTray}–${s.lastTray}`, CHECK_LABELS[e.check], String(e.worstTray), `${formatQuantity(q, e.worstValue, sys)} ${unit}`,
-        c ? `${formatQuantity(q, c.limit, sys)} ${unit}` : '—', `${e.percentOfLimit.toFixed(0)} %`, { text: STATUS_LABELS[e.status], color: STATUS_HEX[e.status] }]);
+        c ? `${SENSE_WORDS[c.sense]} ${formatQuantity(q, c.limit, sys)} ${unit}` : '—', `${e.percentOfLimit.toFixed(0)} %`, { text: STATUS_LABELS[e.status], color: STATUS_HEX[e.status] }]);
     }
   return { table: { headerRows: 1, widths: ['*', 'auto', '*', 'auto', 'auto', 'auto', 'auto', 'auto'], body }, fontSize: 7.5 };
 }
@@ -87,13 +91,14 @@ function trayTable(run: RunRecord, sys: SessionUser['unitSystem']): Content[] {
       String(t.tray), formatQuantity('massFlow', load.get(t.tray)?.vapourMassFlow_kg_h, sys), formatQuantity('massFlow', load.get(t.tray)?.liquidMassFlow_kg_h, sys),
       ...CHECK_NAMES.map((c) => {
         const k = t.checks[c]; // absent from runs rated before the engine had the check
-        return k ? { text: k.percentOfLimit.toFixed(0), color: STATUS_HEX[k.status], bold: k.status === 'over', alignment: 'right' } : { text: '—', alignment: 'right' };
+        if (!k || k.status === 'na') return { text: '—', alignment: 'right', color: STATUS_HEX.na };
+        return { text: k.percentOfLimit.toFixed(0), color: STATUS_HEX[k.status], bold: k.status === 'over', alignment: 'right' };
       }),
-      CHECK_SHORT[t.controllingCheck], [...new Set(refs)].join(', '),
+      verdictText(t), [...new Set(refs)].join(', '),
     ]);
   }
   return [
-    { text: 'Per-tray results (percent of each limit; colour: within, close, beyond)', style: 'h2', pageBreak: 'before' },
+    { text: 'Per-tray results (percent of each limit; colour: within, close, beyond; — the check does not apply)', style: 'h2', pageBreak: 'before' },
     { table: { headerRows: 1, dontBreakRows: true, widths: ['auto', 'auto', 'auto', ...CHECK_NAMES.map(() => '*'), 'auto', 'auto'], body }, fontSize: 7 },
     keys.length ? { text: 'Notes', style: 'h2' } : '',
     keys.length
@@ -131,16 +136,59 @@ export function valveTable(run: RunRecord, sys: SessionUser['unitSystem']): Cont
   ];
 }
 
+/** The controlling check; a flooded or dry tray says so. */
+function verdictText(t: RunTrayResult): string {
+  const state = trayState(t);
+  if (state === 'dry') return TRAY_STATE_LABELS.dry;
+  return state === 'flooded' ? `${CHECK_SHORT.jetFlood}: ${TRAY_STATE_LABELS.flooded}` : CHECK_SHORT[t.controllingCheck];
+}
+
+/** The correlations the run's checks name and those they rely on, each with its source and, once, its uncertainty. */
 function methodsBlock(run: RunRecord): Content[] {
   const ids = new Set(run.results.trays.flatMap((t) => Object.values(t.checks).map((c) => c.method)));
+  for (const id of [...ids]) for (const u of METHOD_USES[id] ?? []) ids.add(u);
   const used = Object.values(METHOD_METADATA).filter((m) => ids.has(m.id)).sort((a, b) => a.label.localeCompare(b.label));
+  const basis = (m: (typeof used)[number]) => {
+    const u = m.uncertainty ?? PROVENANCE_UNCERTAINTY[m.provenance];
+    return `${PROVENANCE_LABELS[m.provenance]}${u ? `. ${u}` : ''}`;
+  };
   return [
     { text: 'Methods and sources', style: 'h2' },
     run.engineVersion !== ENGINE_VERSION
       ? { text: `This run was rated by engine ${run.engineVersion}; the methods below are described as in engine ${ENGINE_VERSION}, whose correlations may differ from those that rated it.`, italics: true, margin: [0, 0, 0, 4] }
       : '',
-    { table: { headerRows: 1, widths: ['auto', '*', '*'], body: [['Correlation', 'Equation', 'Source'].map(th), ...used.map((m) => [m.label, m.equation, plainText(m.source)])] }, fontSize: 7 },
+    {
+      table: {
+        headerRows: 1,
+        widths: ['auto', '*', '*', '*'],
+        body: [['Correlation', 'Equation', 'Source', 'Basis and uncertainty'].map(th), ...used.map((m) => [m.label, m.equation, publishedSource(m.source), basis(m)])],
+      },
+      fontSize: 7,
+    },
   ];
+}
+
+/** The run's verdict in one line: flooded and dry trays by name, otherwise the controlling check; then the rest. */
+function verdictLine(run: RunRecord): string {
+  const r = run.results;
+  const by = (s: string) => r.trays.filter((t) => trayState(t) === s).map((t) => t.tray);
+  const [flooded, dry, over] = [by('flooded'), by('dry'), by('over')];
+  const head = flooded.length
+    ? `Flooded: trays ${trayRanges(flooded)} past jet flood`
+    : `Controlling: ${CHECK_LABELS[r.controllingCheck]} on tray ${r.controllingTray}, ${r.maxPercentOfLimit.toFixed(0)} % of its limit`;
+  const parts = [head];
+  if (dry.length) parts.push(`dry (no liquid): trays ${trayRanges(dry)}`);
+  parts.push(`trays beyond a limit: ${trayRanges(over) || 'none'}`, `close to one: ${trayRanges(r.traysNear) || 'none'}`);
+  return parts.join(' · ');
+}
+
+/** Each section's coverage: "Top: all 8 trays rated", "Lower: rated 6 of 12 trays; no loads for trays 15–20". */
+function coverageLine(run: RunRecord): string {
+  const rated = run.results.trays.map((t) => t.tray);
+  const lines = run.results.sections.map((s) => `${s.name}: ${coverageSentence(sectionCoverage(s.firstTray, s.lastTray, rated))}`);
+  const out = run.results.uncoveredTrays;
+  if (out.length) lines.push(`loaded trays outside any section: ${trayRanges(out)}`);
+  return `Trays rated — ${lines.join('; ')}`;
 }
 
 /** The report's parts (tested without rendering): header, footer and content. */
@@ -155,7 +203,8 @@ export function runReportDoc(run: RunRecord, w: RunWindow | null, sys: SessionUs
       { text: `Tray rating report — ${tag}`, style: 'h1' },
       { text: run.label, fontSize: 11 },
       { text: `Load case ${lc.name} (${lc.basis}, version ${lc.version}) · rated ${pdfDateTime(run.createdAt)} by ${run.authorName ?? '—'} · engine ${run.engineVersion} · units ${sys}` },
-      { text: `Controlling: ${CHECK_LABELS[run.results.controllingCheck]} on tray ${run.results.controllingTray}, ${run.results.maxPercentOfLimit.toFixed(0)} % of its limit · trays beyond a limit: ${trayRanges(run.results.traysOver) || 'none'} · close to one: ${trayRanges(run.results.traysNear) || 'none'}`, bold: true, margin: [0, 4, 0, 0] },
+      { text: verdictLine(run), bold: true, margin: [0, 4, 0, 0] },
+      { text: coverageLine(run) },
       ...reviewBlock(run),
       { text: 'Cautions', style: 'h2' },
       { ul: RATING_CAUTIONS },

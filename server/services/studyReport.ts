@@ -2,7 +2,7 @@
  * What a pump-around study's printed report and exports say, in the reader's units: the inputs, the duties
  * found, the traffic at the base duty, the suggested and limiting duties and the cautions.
  */
-import { CHECK_LABELS } from '../../shared/checkLabels.js';
+import { CHECK_LABELS } from '../../shared/labels.js';
 import { STUDY_CAUTIONS } from '../../shared/studyCautions.js';
 import { formatQuantity, unitLabel, type QuantityId } from '../../shared/units.js';
 import type { UnitSystem } from '../../shared/types/api.js';

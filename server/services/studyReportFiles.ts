@@ -6,7 +6,7 @@ import { chartSvg, legendSvg } from './reportCharts.js';
 import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
 import { getStudy } from './studies.js';
 import { studyReportData, type StudyReportData } from './studyReport.js';
-import { REVIEW_LABELS } from '../../shared/checkLabels.js';
+import { REVIEW_LABELS } from '../../shared/labels.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { StudyRecord } from '../../shared/types/studies.js';
 import type { ExportFile } from './exportsFormat.js';

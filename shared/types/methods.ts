@@ -3,10 +3,15 @@ export interface MethodInfo {
   /** correlation id; `CheckResult.method` values are ids */
   id: string;
   label: string;
+  /** the published source, in plain words (no drafting notes) */
   source: string;
   equation: string;
   provenance: 'seen' | 'recalled' | 'derived' | 'common-practice' | 'own-fit';
   ranges: Record<string, readonly [number, number]>;
+  /** the uncertainty a report states once for this correlation, or null */
+  uncertainty: string | null;
+  /** ids of the correlations this one relies on (listed with it in reports) */
+  uses: readonly string[];
 }
 
 export interface LimitInfo {

@@ -6,7 +6,16 @@
 export type TrayType = 'sieve' | 'fixed-valve' | 'moving-valve';
 export type FoamingClass = 'low' | 'moderate' | 'high' | 'very-high';
 export type JetFloodMethod = 'fair' | 'kister-haas';
-export type CheckStatus = 'ok' | 'near' | 'over';
+/**
+ * 'ok' within the limit, 'near' close to it, 'over' beyond it; 'na' the check does not apply to this tray
+ * (the liquid-side checks of a dry tray, entrainment past flood, a seal the geometry already provides).
+ */
+export type CheckStatus = 'ok' | 'near' | 'over' | 'na';
+/**
+ * Verdict on a whole tray (shared/verdict.ts): 'dry' no liquid on the tray; 'flooded' at or past jet flood
+ * (100 % of flood by the chosen method); otherwise the worst status of its checks.
+ */
+export type TrayState = 'ok' | 'near' | 'over' | 'flooded' | 'dry';
 
 export interface ValveData {
   count: number;
@@ -181,7 +190,9 @@ export interface SectionSummary {
   marginToNearestLimit_percent: number;
   /** lowest ratio over trays of vapour load to weep-point vapour load */
   turndown: number;
+  /** trays flooded, dry or beyond a limit (shared/verdict.ts trayState) */
   traysOver: number[];
+  /** trays close to a limit and none beyond */
   traysNear: number[];
 }
 

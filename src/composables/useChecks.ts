@@ -1,14 +1,15 @@
-import type { CheckStatus } from '../../shared/types/rating';
+import type { CheckStatus, TrayState } from '../../shared/types/rating';
 import type { ReviewStatus } from '../../shared/types/runs';
 import { quantityOfEngineUnit, type QuantityId } from '../../shared/units';
 
-export { CHECK_LABELS, CHECK_SHORT, REVIEW_LABELS, STATUS_LABELS } from '../../shared/checkLabels';
+export { CHECK_LABELS, CHECK_SHORT, REVIEW_LABELS, STATUS_LABELS, TRAY_STATE_LABELS } from '../../shared/labels';
+
 /** CSS class per status (colours in src/css/app.scss). */
-export const statusClass = (s: CheckStatus): string => `fl-status-${s}`;
+export const statusClass = (s: CheckStatus | TrayState): string => `fl-status-${s}`;
 /** Quasar colour per status for chips and bars. */
-export const STATUS_COLORS: Record<CheckStatus, string> = { ok: 'primary', near: 'secondary', over: 'negative' };
+export const STATUS_COLORS: Record<CheckStatus, string> = { ok: 'primary', near: 'secondary', over: 'negative', na: 'grey-6' };
 /** Hex colours per status for charts (same as app.scss). */
-export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#b26a12', over: '#b3261e' };
+export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#b26a12', over: '#b3261e', na: '#8a8a8a' };
 
 export const REVIEW_COLORS: Record<ReviewStatus, string> = {
   draft: 'grey-7',

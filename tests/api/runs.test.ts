@@ -130,7 +130,9 @@ describe('rating runs', () => {
     expect(csv.status).toBe(200);
     expect(csv.text).toMatch(/management-of-change/);
     const header = csv.text.split('\r\n').find((l) => l.startsWith('Tray,'))!;
-    expect(header).toMatch(/^Tray,Section,Controlling check,jetFlood \(%\),/);
+    // the product's labels, never internal ids (jetFlood, liquidLoad)
+    expect(header).toMatch(/^Tray,Section,Tray state,Controlling check,Jet flood \(%\),Jet flood limit \(%\),/);
+    expect(header).not.toMatch(/jetFlood|liquidLoad|downcomerSeal/);
     expect(csv.text.split('\r\n').filter((l) => /^\d+,/.test(l))).toHaveLength(16);
   });
 });

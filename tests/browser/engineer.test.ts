@@ -187,7 +187,18 @@ describe('engineer path in Chromium', () => {
     await b.page.locator('[data-test="run-caution"]').waitFor();
     const over = Number(await b.page.locator('[data-test="trays-over"]').textContent());
     expect(over).toBeGreaterThan(0);
-    expect(await b.page.locator('[data-test="tray-table"] tr.fl-row-over').count()).toBe(over);
+    const flagged = ['over', 'flooded', 'dry'].map((s) => `[data-test="tray-table"] tr.fl-row-${s}`).join(', ');
+    expect(await b.page.locator(flagged).count()).toBe(over);
+    // the top trays are past flood: named flooded and controlled by jet flood (not "entrainment 615 %")
+    await b.page.locator('[data-test="run-flooded"]').waitFor();
+    expect(await b.page.locator('[data-test="verdict-1"]').textContent()).toMatch(/Jet flood · flooded/);
+    expect(await b.page.locator('[data-test="trays-over-list"]').textContent()).toMatch(/flooded: 1/);
+    expect(await b.page.locator('[data-test="run-coverage"]').textContent()).toMatch(/all trays of the 4 rated sections have loads/);
+    // "at least" limits in words; a seal check that does not apply is not shown with a "≥ 0" limit
+    const table = (await b.page.locator('[data-test="tray-table"]').textContent()) ?? '';
+    expect(table).toMatch(/at least/);
+    expect(table).toMatch(/not applicable/);
+    expect(table).not.toMatch(/≥ 0\b/);
     await shot(b.page, 'engineer-run-trays');
 
     // the demo top section has moving valves: Klein's balance points and the valve state per tray
@@ -251,6 +262,11 @@ describe('engineer path in Chromium', () => {
     expect(body).toMatch(/management-of-change/);
     expect(body).toMatch(/licensed engineers/);
     expect(body).toMatch(/Kister/);
+    // a signed document: no drafting notes, no internal ids, statuses in words
+    expect(body).not.toMatch(/from memory|to confirm|not yet confirmed|recalled|\.md\b/i);
+    expect(body).not.toMatch(/\b(jetFlood|liquidLoad|weirLoadingVolumetric)\b/);
+    expect(body).toMatch(/Jet flood: flooded/);
+    expect(body).toMatch(/at most/);
     await b.page.emulateMedia({ media: 'print' });
     await shot(b.page, 'engineer-report-print');
     await b.page.emulateMedia({ media: 'screen' });

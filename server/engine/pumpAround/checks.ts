@@ -9,6 +9,7 @@
  */
 import type { CheckName, CheckResult, TrayResult } from '../../../shared/types/rating.js';
 import type { TrayRegion } from './traffic.js';
+import { PERCENT_CAP } from '../units.js';
 
 export const MINIMUM_LIQUID_CHECKS: readonly CheckName[] = ['liquidLoad', 'weirLoading', 'weeping'];
 export const ZONE_OVERLOAD_CHECKS: readonly CheckName[] = [
@@ -27,8 +28,13 @@ export function watchedChecks(region: TrayRegion, rating: TrayResult): CheckName
   return [];
 }
 
-/** percentOfLimit − 100: positive when the check is over its limit; NaN when the check is missing. */
+/**
+ * percentOfLimit − 100: positive when the check is over its limit; NaN when the check is missing. A watched
+ * check that does not apply because the tray has run dry counts as far past its limit (as the capped
+ * percent), so that the scan still sees the crossing before dry-out.
+ */
 export function checkResidual(check: CheckResult | undefined): number {
+  if (check?.status === 'na') return PERCENT_CAP - 100;
   if (!check || !Number.isFinite(check.percentOfLimit)) return check && check.percentOfLimit > 0 ? Infinity : NaN;
   return check.percentOfLimit - 100;
 }

@@ -135,10 +135,11 @@ describe('property tests over the valid input space (fast-check)', () => {
     }), RUNS);
   });
 
-  it('status follows percent of limit (near at ≥ 90 %, over at ≥ 100 %)', () => {
+  it('status follows percent of limit (near at ≥ 90 %, over at ≥ 100 %); a check that does not apply is at 0 %', () => {
     fc.assert(fc.property(sectionArb, loadArb, (s, l) => {
       for (const c of Object.values(rateTray(s, l).checks)) {
-        expect(c.status).toBe(c.percentOfLimit >= 100 ? 'over' : c.percentOfLimit >= 90 ? 'near' : 'ok');
+        if (c.status === 'na') expect(c.percentOfLimit).toBe(0);
+        else expect(c.status).toBe(c.percentOfLimit >= 100 ? 'over' : c.percentOfLimit >= 90 ? 'near' : 'ok');
       }
     }), { numRuns: 200 });
   });

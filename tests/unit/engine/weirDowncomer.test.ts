@@ -36,7 +36,7 @@ describe('downcomer', () => {
     const load = { ...req.trays[0]!, liquidMassFlow_kg_h: 8000 };
     const sealed = rateTray({ ...req.section, downcomerClearance_mm: 40, weirHeight_mm: 50 }, load);
     expect(sealed.checks.downcomerSeal.limit).toBe(0);
-    expect(sealed.checks.downcomerSeal.status).toBe('ok');
+    expect(sealed.checks.downcomerSeal.status).toBe('na'); // the weir seals the downcomer: no check to show
     const open = rateTray({ ...req.section, downcomerClearance_mm: 150, weirHeight_mm: 25 }, load);
     expect(open.checks.downcomerSeal.limit).toBe(51); // Kister (1992) §6.5: 2 in
     expect(open.checks.downcomerSeal.status).toBe('over');
@@ -45,14 +45,15 @@ describe('downcomer', () => {
 });
 
 describe('liquid load warnings', () => {
-  it('names the picket-fence weir below a 6 mm crest and flags a dry tray at zero liquid', () => {
+  it('names the picket-fence weir below a 6 mm crest and flags a dry tray (its crest check does not apply)', () => {
     const req = inventedRequest();
     const low = rateTray(req.section, { ...req.trays[0]!, liquidMassFlow_kg_h: 3000 });
     expect(low.checks.liquidLoad.status).toBe('over');
     expect(low.warnings.find((w) => w.code === 'low-crest')?.message).toMatch(/picket-fence/);
     const dry = rateTray(req.section, { ...req.trays[0]!, liquidMassFlow_kg_h: 0 });
     expect(dry.checks.liquidLoad.value).toBe(0);
-    expect(dry.checks.liquidLoad.percentOfLimit).toBe(999);
+    expect(dry.checks.liquidLoad.status).toBe('na');
+    expect(dry.checks.liquidLoad.percentOfLimit).toBe(0);
     expect(dry.warnings.some((w) => w.code === 'dry-tray')).toBe(true);
   });
 });
