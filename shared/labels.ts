@@ -36,6 +36,14 @@ export const CHECK_SHORT: Record<CheckName, string> = {
   downcomerSeal: 'DC seal',
 };
 
+/** Rows of the default-limits table (reference-tables/limits.json): the checks, and limits that are not checks of their own. */
+export const LIMIT_LABELS: Record<string, string> = {
+  ...CHECK_LABELS,
+  pressureDropVacuum: 'Tray ΔP, vacuum service',
+  passImbalance: 'Pass L/V imbalance (multipass layouts)',
+  nearFraction: 'Flagged as close from',
+};
+
 /** Status words of our own: within the limit, close to it, beyond it, or the check does not apply. */
 export const STATUS_LABELS: Record<CheckStatus, string> = { ok: 'within', near: 'close', over: 'beyond', na: 'not applicable' };
 

@@ -11,6 +11,7 @@ import type { MethodsPayload } from '../../shared/types/methods.js';
 import type { RunRecord } from '../../shared/types/runs.js';
 import type { InspectionRecord } from '../../shared/types/inspections.js';
 import { coverageSentence, sectionCoverage, trayState } from '../../shared/verdict.js';
+import { LIMIT_LABELS } from '../../shared/labels.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { loads, makePlant, section } from './columnsFixture.js';
 import { cleanFindings, makeInspectionColumn, noMeasurements } from './inspection-fixture.js';
@@ -93,6 +94,8 @@ describe('no drafting notes and no internal ids in what users read', () => {
     ];
     expect(drafting(texts)).toEqual([]);
     expect(m.limits.map((l) => l.note).filter((n) => /'(near|over|ok)'/.test(n))).toEqual([]);
+    // every row of the default-limits table has the product's label (its key is an id)
+    expect(m.limits.filter((l) => !LIMIT_LABELS[l.check]).map((l) => l.check)).toEqual([]);
     // every method names its source; the Kister & Haas transition height states its uncertainty once, here
     for (const x of m.methods) expect(x.source.length, x.id).toBeGreaterThan(10);
     const hct = m.methods.find((x) => x.id === 'transitionClearLiquidHeightKisterHaas')!;
