@@ -107,7 +107,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   }
   const psi = L > 0 ? fairEntrainmentOwnFit(flvEnt, pctFlood / 100) : 0;
   const entrained = entrainedLiquidRate(psi, load.liquidMassFlow_kg_h);
-  if (out && psi > 0.999 && pctFlood < 100) checkRange(out, ENT_RATE, 'psi', psi, tray, 'entrained liquid computed at 0.999 (the rate grows without bound as the fraction approaches 1)');
+  if (out && psi > 0.999) checkRange(out, ENT_RATE, 'psi', psi, tray, 'entrained liquid computed at 0.999 (the rate grows without bound as the fraction approaches 1)');
 
   // Pressure drop.
   let hd: number;
