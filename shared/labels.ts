@@ -3,7 +3,8 @@
  * the basis of each correlation, and sources without drafting notes. Defined once; the pages, the
  * exports, the methods list and the PDFs use them, so no internal id reaches a user.
  */
-import type { CheckName, CheckStatus, JetFloodMethod, TrayState } from './types/rating.js';
+import type { CheckName, CheckStatus, FoamingClass, JetFloodMethod, TrayState, TrayType } from './types/rating.js';
+import type { GeometryProvenance } from './types/columns.js';
 import type { MethodInfo } from './types/methods.js';
 import type { ReviewStatus } from './types/runs.js';
 import type { DamageKind, InspectionStatus, PunchPriority, ToleranceItem } from './types/inspections.js';
@@ -133,3 +134,9 @@ export const PUNCH_PRIORITY_LABELS: Record<PunchPriority, string> = {
   'if-time-allows': 'If time allows',
   'next-turnaround': 'Next turnaround',
 };
+
+export const TRAY_TYPE_LABELS: Record<TrayType, string> = { sieve: 'sieve', 'fixed-valve': 'fixed valve', 'moving-valve': 'moving valve' };
+
+export const GEOMETRY_PROVENANCE_LABELS: Record<GeometryProvenance, string> = { design: 'design', 'as-left': 'as left', 'as-found': 'as found' };
+
+export const FOAMING_LABELS: Record<FoamingClass, string> = { low: 'low', moderate: 'moderate', high: 'high', 'very-high': 'very high' };

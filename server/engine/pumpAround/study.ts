@@ -13,6 +13,7 @@
  * The input must have passed validateStudyInput. Tray numbers are reported in the input's numbering.
  */
 import type { TrayLoad, TrayResult } from '../../../shared/types/rating.js';
+import { CHECK_LABELS } from '../../../shared/labels.js';
 import type { StudyInput, StudyLimit, StudyPoint, StudyResult, StudySection } from '../../../shared/types/pumpAround.js';
 import { prepareSection, rateTrayPrepared, type PreparedSection } from '../index.js';
 import { watchedChecks } from './checks.js';
@@ -86,8 +87,9 @@ export function runStudyWith<P>(input: StudyInput, mapPoint: (p: StudyPoint) => 
   if (dry) candidates.push({ duty_kW: dry.duty_kW, tray: dry.tray, check: 'dryOut' });
   const limiting = candidates.reduce<(typeof candidates)[number] | null>((a, c) => (!a || c.duty_kW < a.duty_kW ? c : a), null);
 
-  for (const c of scan.clearing) notes.push(`Tray ${c.tray} ${c.check} is over its limit below ${fmt(c.duty_kW)} and clears above it.`);
-  for (const c of scan.alwaysOver) notes.push(`Tray ${c.tray} ${c.check} is over its limit over the whole range searched.`);
+  // notes are read by users: checks by their labels, never their ids
+  for (const c of scan.clearing) notes.push(`Tray ${c.tray}: ${CHECK_LABELS[c.check]} is over its limit below ${fmt(c.duty_kW)} and clears above it.`);
+  for (const c of scan.alwaysOver) notes.push(`Tray ${c.tray}: ${CHECK_LABELS[c.check]} is over its limit over the whole range searched.`);
   const feasibleFrom = Math.max(qLo, ...scan.clearing.map((c) => c.duty_kW));
   const highestFree = scan.alwaysOver.length === 0 && limiting && limiting.duty_kW > feasibleFrom ? limiting.duty_kW : null;
   let recommended = dry && highestFree !== null ? Math.min(margin * dry.duty_kW, highestFree) : null;

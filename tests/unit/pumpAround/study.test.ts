@@ -135,7 +135,7 @@ describe('runStudy on the invented example column', () => {
   it('a zone check over at low duty that clears as the duty rises is reported, not taken as the limit', () => {
     // from zero duty the zone vapour is high: tray 7 floods at low duty and clears further up
     const low = runStudy({ ...input, sweep: { ...input.sweep, fromDuty_kW: 0 } });
-    expect(low.notes.some((n) => /^Tray 7 jetFlood is over its limit below \d+ kW and clears above it/.test(n))).toBe(true);
+    expect(low.notes.some((n) => /^Tray 7: Jet flood is over its limit below \d+ kW and clears above it/.test(n))).toBe(true);
     expect(low.zoneOverloadDuty_kW).toBeCloseTo(r.zoneOverloadDuty_kW!, 3);
     expect(low.recommendedDuty_kW).toBeCloseTo(r.recommendedDuty_kW!, 6);
   });
@@ -144,7 +144,7 @@ describe('runStudy on the invented example column', () => {
     // the sweep starts at the base duty; margin 0.1 puts the margin duty far below it, where tray 7 floods
     const low = runStudy({ ...input, margin: 0.1, sweep: { ...input.sweep, fromDuty_kW: Q0 } });
     expect(low.notes.join(' ')).toContain(`Limits searched from ${Math.round(0.1 * r.dryOutDuty_kW!)} kW`);
-    expect(low.notes.some((n) => /^Tray 7 jetFlood is over its limit below \d+ kW and clears above it/.test(n))).toBe(true);
+    expect(low.notes.some((n) => /^Tray 7: Jet flood is over its limit below \d+ kW and clears above it/.test(n))).toBe(true);
     expect(low.recommendedDuty_kW).toBeNull();
     expect(low.notes.join(' ')).toMatch(/no duty meets both the margin and the limits/);
     // margin 0.2 puts it above that flood: the suggestion stands, and tray 7 is within its flood limit there
