@@ -42,7 +42,7 @@ describe('a run stored before a check existed', () => {
     const csv = await engineer.get(`/api/runs/${older.id}/export?format=csv`);
     expect(csv.status).toBe(200);
     const [head, firstRow] = csv.text.split(/\r?\n/).filter((l) => /^(Tray|1),/.test(l));
-    const seal = head!.split(',').findIndex((h) => h.startsWith('downcomerSeal ('));
+    const seal = head!.split(',').findIndex((h) => h.startsWith('Downcomer seal (')); // the product's label, not the id
     expect(seal).toBeGreaterThan(0);
     expect(firstRow!.split(',').slice(seal, seal + 4)).toEqual(['', '', '', '']);
 
