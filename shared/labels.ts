@@ -140,3 +140,11 @@ export const TRAY_TYPE_LABELS: Record<TrayType, string> = { sieve: 'sieve', 'fix
 export const GEOMETRY_PROVENANCE_LABELS: Record<GeometryProvenance, string> = { design: 'design', 'as-left': 'as left', 'as-found': 'as found' };
 
 export const FOAMING_LABELS: Record<FoamingClass, string> = { low: 'low', moderate: 'moderate', high: 'high', 'very-high': 'very high' };
+
+/** Percent of limit is held at this value when it has no finite size (a 'min' check at zero, a zero limit). */
+export const PERCENT_CAP = 999;
+
+/** Percent of limit as users read it: whole percent, and "≥ 999" where the engine held it at the cap. */
+export function formatPercentOfLimit(percent: number): string {
+  return percent >= PERCENT_CAP ? `≥ ${PERCENT_CAP}` : percent.toFixed(0);
+}

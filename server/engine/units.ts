@@ -9,8 +9,8 @@ export const G = 9.81;
 export const S_PER_H = 3600;
 /** Largest magnitude reported for quantities that are unbounded in the limit (e.g. residence time at zero liquid). */
 export const REPORT_CAP = 1e6;
-/** Percent-of-limit values are capped here so that they stay finite (a zero value of a 'min' check). */
-export const PERCENT_CAP = 999;
+/** Percent-of-limit values are capped here so that they stay finite (a zero value of a 'min' check); users read "≥ 999". */
+export { PERCENT_CAP } from '../../shared/labels.js';
 
 /** Replace a non-finite or out-of-cap number by the cap (keeps sign); used only on reported values. */
 export function finiteOrCap(x: number, cap: number = REPORT_CAP): number {

@@ -12,7 +12,7 @@ import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from
 import { getRun, runWindow } from './runsRead.js';
 import {
   CHECK_LABELS, CHECK_SHORT, PROVENANCE_LABELS, PROVENANCE_UNCERTAINTY, REVIEW_LABELS, SENSE_WORDS, STATUS_LABELS, TRAY_STATE_LABELS,
-  publishedSource,
+  formatPercentOfLimit, publishedSource,
 } from '../../shared/labels.js';
 import { coverageSentence, sectionCoverage, trayState } from '../../shared/verdict.js';
 import { CHECK_NAMES } from '../../shared/types/rating.js';
@@ -62,7 +62,7 @@ function sectionTable(run: RunRecord, sys: SessionUser['unitSystem']): Content {
       const q: QuantityId = quantityOfEngineUnit(c?.unit ?? '-');
       const unit = q === 'percent' || q === 'ratio' ? (c?.unit === '-' ? '' : (c?.unit ?? '')) : unitLabel(q, sys);
       body.push([s.name, `${s.firstTray}–${s.lastTray}`, CHECK_LABELS[e.check], String(e.worstTray), `${formatQuantity(q, e.worstValue, sys)} ${unit}`,
-        c ? `${SENSE_WORDS[c.sense]} ${formatQuantity(q, c.limit, sys)} ${unit}` : '—', `${e.percentOfLimit.toFixed(0)} %`, { text: STATUS_LABELS[e.status], color: STATUS_HEX[e.status] }]);
+        c ? `${SENSE_WORDS[c.sense]} ${formatQuantity(q, c.limit, sys)} ${unit}` : '—', `${formatPercentOfLimit(e.percentOfLimit)} %`, { text: STATUS_LABELS[e.status], color: STATUS_HEX[e.status] }]);
     }
   return { table: { headerRows: 1, widths: ['*', 'auto', '*', 'auto', 'auto', 'auto', 'auto', 'auto'], body }, fontSize: 7.5 };
 }
@@ -92,7 +92,7 @@ function trayTable(run: RunRecord, sys: SessionUser['unitSystem']): Content[] {
       ...CHECK_NAMES.map((c) => {
         const k = t.checks[c]; // absent from runs rated before the engine had the check
         if (!k || k.status === 'na') return { text: '—', alignment: 'right', color: STATUS_HEX.na };
-        return { text: k.percentOfLimit.toFixed(0), color: STATUS_HEX[k.status], bold: k.status === 'over', alignment: 'right' };
+        return { text: formatPercentOfLimit(k.percentOfLimit), color: STATUS_HEX[k.status], bold: k.status === 'over', alignment: 'right' };
       }),
       verdictText(t), [...new Set(refs)].join(', '),
     ]);
