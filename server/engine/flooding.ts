@@ -129,19 +129,19 @@ export const floodVelocitySoudersBrown = method(
  *
  *   h_ct,H2O = 0.497 A_f^−0.791 d_H^0.833 / (1 + 0.013 Q_L^−0.59 A_f^−1.79)    [mm]
  *   h_ct = h_ct,H2O (996/ρL)^(0.5(1 − n)),  n = 0.00091 d_H/A_f
- * Provenance: a secondary transcription of Perry's 8th ed. eqs. 14-82 to 14-84 (seen) has the same
+ * Provenance: a secondary source reproducing Perry's 8th ed. eqs. 14-82 to 14-84 (seen) has the same
  * structure and exponents, its leading coefficient within 1.5 % (English 0.294 against 0.2896 here,
  * derived from 0.497), and quotes Kister's (1992) sizing example h_ct(water) ≈ 0.94 in at d_H 0.5 in,
  * A_f 0.1, Q_L 6.45 gpm/in, which this form reproduces (0.936 in). The printed page itself has not been
  * checked: the leading coefficient is uncertain by about 1.5 %. SI and English sets agree within 0.4 %.
- * Surface tension: the same transcription states that σ is capped at 25 mN/m as the authors recommend;
+ * Surface tension: the same secondary source states that σ is capped at 25 mN/m as the authors recommend;
  * that statement was not found in a printed source, so σ is used as given and the rating warns above
  * 25 mN/m (hydraulics.ts).
  * A_f for valve trays = open slot area / bubbling area (Perry 8th ed. definition).
  * @param holeDiameter_mm d_H [mm]; @param fractionalHoleArea A_f [-]
  * @param weirLoad_m3_h_m Q_L [m³/(h·m)]; @param liquidDensity ρL [kg/m³]
  * @returns h_ct [mm]. Example: d_H 12.7 mm, A_f 0.1, Q_L 57.7 m³/(h·m) (6.45 gpm/in), ρL 996 → 23.8 mm
- * = 0.936 in (transcribed sizing example: ≈ 0.94 in).
+ * = 0.936 in (sizing example as quoted there: ≈ 0.94 in).
  */
 export const transitionClearLiquidHeightKisterHaas = method(
   'transitionClearLiquidHeightKisterHaas',
@@ -159,7 +159,7 @@ export const transitionClearLiquidHeightKisterHaas = method(
   },
   {
     label: 'Kister & Haas froth-to-spray transition height (corrected Jeronimo & Sawistowski)',
-    source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 eqs. (14-82) to (14-84), after Jeronimo & Sawistowski as corrected by Kister & Haas (1990). Taken from a secondary transcription of those equations (same structure and exponents, leading coefficient within 1.5 %), which quotes Kister's (1992) sizing example h_ct ≈ 0.94 in of water at d_H 0.5 in, A_f 0.1, Q_L 6.45 gpm/in; this form gives 0.936 in. Uncertainty: the leading coefficient, about 1.5 %",
+    source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 eqs. (14-82) to (14-84), after Jeronimo & Sawistowski as corrected by Kister & Haas (1990). Taken from a secondary source reproducing those equations (same structure and exponents, leading coefficient within 1.5 %), which quotes Kister's (1992) sizing example h_ct ≈ 0.94 in of water at d_H 0.5 in, A_f 0.1, Q_L 6.45 gpm/in; this form gives 0.936 in. Uncertainty: the leading coefficient, about 1.5 %",
     equation: 'h_ct = 0.497 Af^-0.791 dH^0.833/(1 + 0.013 QL^-0.59 Af^-1.79) (996/rhoL)^(0.5(1-n))',
     provenance: 'seen',
     ranges: { weirLoad_m3_h_m: [3, 40] },
@@ -203,7 +203,7 @@ export const kisterHaasFloodCapacity = method(
   },
   {
     label: 'Kister & Haas (1990) jet flood',
-    source: "Kister & Haas, Chem. Eng. Prog. 86(9) 63 (1990), as in Perry's Chemical Engineers' Handbook 8th ed. eq. (14-81); Kister, Distillation Design (1992) eq. 6.12; range Perry 8th ed. Table 14-10. The froth-to-spray transition height h_ct follows Perry's eqs. (14-82) to (14-84) as transcribed in a secondary source that reproduces Kister's (1992) sizing example (0.94 in of water); its leading coefficient is uncertain by about 1.5 %. For valve trays A_f is the open slot area over the bubbling area",
+    source: "Kister & Haas, Chem. Eng. Prog. 86(9) 63 (1990), as in Perry's Chemical Engineers' Handbook 8th ed. eq. (14-81); Kister, Distillation Design (1992) eq. 6.12; range Perry 8th ed. Table 14-10. The froth-to-spray transition height h_ct follows Perry's eqs. (14-82) to (14-84) as reproduced in a secondary source that also quotes Kister's (1992) sizing example (0.94 in of water); its leading coefficient is uncertain by about 1.5 %. For valve trays A_f is the open slot area over the bubbling area",
     equation: 'C_SB = 0.0277 (dH^2 sigma/rhoL)^0.125 (rhoV/rhoL)^0.1 (TS/h_ct)^0.5',
     provenance: 'seen',
     ranges: {

@@ -6,8 +6,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { encodeResults } from '../../server/db/codec/index.js';
 import { RatingRun } from '../../server/db/entities/RatingRun.js';
-import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
-import { loads, makePlant, section, type Plant } from './columnsFixture.js';
+import { setupApp, type TestContext } from '../helpers/app.js';
+import { makePlant, twoRuns, type Plant } from './columnsFixture.js';
 
 let ctx: TestContext;
 let plant: Plant;
@@ -20,16 +20,7 @@ afterAll(() => ctx.close());
 
 describe('a run stored before a check existed', () => {
   it('opens, exports, compares and prints with that check absent', async () => {
-    const { agent: specialist } = await signedIn(ctx, 'internals-specialist', [plant.siteId]);
-    const { agent: engineer } = await signedIn(ctx, 'process-engineer', [plant.siteId]);
-    expect((await specialist.post(`/api/columns/${plant.columnId}/sections`).send(section(1, 8, 'Top'))).status).toBe(201);
-    const lc = (
-      await engineer
-        .post(`/api/columns/${plant.columnId}/load-cases`)
-        .send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 8) })
-    ).body.id;
-    const current = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Current' })).body;
-    const older = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Older' })).body;
+    const { engineer, current, other: older } = await twoRuns(ctx, plant, 'Older');
     const run = await ctx.ds.getRepository(RatingRun).findOneByOrFail({ id: older.id });
     for (const t of run.results.trays) delete t.checks.downcomerSeal;
     await ctx.ds.query('UPDATE rating_runs SET results = $1 WHERE id = $2', [encodeResults(run.results), older.id]);

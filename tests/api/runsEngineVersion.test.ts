@@ -8,8 +8,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { RunResultsByName1764750000000 } from '../../server/db/migrations/1764750000000-RunResultsByName.js';
 import { ENGINE_VERSION } from '../../server/engine/index.js';
 import { runReportDoc } from '../../server/services/runReportPdf.js';
-import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
-import { loads, makePlant, section, type Plant } from './columnsFixture.js';
+import { setupApp, type TestContext } from '../helpers/app.js';
+import { makePlant, twoRuns, type Plant } from './columnsFixture.js';
 
 const frb2 = JSON.parse(readFileSync(new URL('../fixtures/run-results-frb2.json', import.meta.url), 'utf8')) as {
   stored: string;
@@ -27,13 +27,7 @@ afterAll(() => ctx.close());
 
 describe('runs rated by an earlier engine version', () => {
   it('still open and report the version that rated them, beside runs of the current version', async () => {
-    const { agent: specialist } = await signedIn(ctx, 'internals-specialist', [plant.siteId]);
-    const { agent: engineer } = await signedIn(ctx, 'process-engineer', [plant.siteId]);
-    expect((await specialist.post(`/api/columns/${plant.columnId}/sections`).send(section(1, 8, 'Top'))).status).toBe(201);
-    const lc = (await engineer.post(`/api/columns/${plant.columnId}/load-cases`)
-      .send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 8) })).body.id;
-    const current = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Current' })).body;
-    const old = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Old' })).body;
+    const { engineer, current, other: old } = await twoRuns(ctx, plant, 'Old');
     expect(frb2.results.engineVersion).toBe('0.2.0');
     expect(ENGINE_VERSION).not.toBe('0.2.0');
     // make the second row what engine 0.2.0 stored: its version and its results bytes as written then

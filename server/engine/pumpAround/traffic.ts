@@ -2,11 +2,11 @@
  * Pump-around traffic model (issue 5): how the tray loads of a base case shift when the duty of one
  * pump-around changes from Q0 to Q, with vapour and liquid properties held at their base-case values.
  *
- * Balance derived in tray-methods.md §9 [D] (after Lieberman, A Working Guide to Process Equipment,
- * Ch. 15 [S]); constant latent heat λ, sensible heats of the column streams neglected.
+ * Balance derived here (after Lieberman, A Working Guide to Process Equipment, Ch. 15); constant latent
+ * heat λ, sensible heats of the column streams neglected.
  *
  * Conventions: on each tray the vapour is the vapour entering it from below and the liquid the liquid
- * leaving it (tray-methods.md / field-practice.md §1.1). Positions are counted top-down; a bottom-up
+ * leaving it (the usual convention of tray rating). Positions are counted top-down; a bottom-up
  * column is handled by mirroring the position (p = −tray), so tray numbers are never rewritten.
  *
  * The extra duty condenses Δm = (Q − Q0)/λ more vapour. The net upward flow across every cut between
@@ -67,7 +67,7 @@ export function shiftFraction(
 
 /**
  * Pump-around circulation and return temperature drop at a duty.
- * Q = m c_p ΔT (tray-methods.md §9 [D]); Q [kW], c_p [kJ/(kg·K)], m [kg/h], ΔT [K].
+ * Q = m c_p ΔT (sensible-heat balance); Q [kW], c_p [kJ/(kg·K)], m [kg/h], ΔT [K].
  * Example: 6000 kW, c_p 2.6, ΔT 80 K → 6000/(2.6·80) = 28.85 kg/s = 103 846 kg/h.
  */
 export function pumpAroundCirculation(

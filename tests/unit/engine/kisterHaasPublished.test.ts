@@ -47,11 +47,11 @@ describe("Kister & Haas C_SB,flood as printed (Perry's 8th ed. eq. 14-81; Kister
   });
 
   it("h_ct reproduces Kister's (1992) sizing example as quoted with Perry's 8th ed. eqs. (14-82)–(14-84)", () => {
-    // A secondary transcription of Perry's 8th ed. eqs. 14-82 to 14-84 (seen; the printed page itself not seen)
+    // A secondary source reproducing Perry's 8th ed. eqs. 14-82 to 14-84 (seen; the printed page itself not seen)
     // quotes Kister (1992): h_ct of water ≈ 0.94 in at d_H 0.5 in, A_f 0.1, Q_L 6.45 gpm/in. ±1 %.
     const hct = transitionClearLiquidHeightKisterHaas(0.5 * IN, 0.1, 6.45 * 8.942, 996);
     expect(Math.abs(rel(hct / IN, 0.94))).toBeLessThan(0.01);
-    // the transcription's English leading coefficient 0.294 is about 1.5 % (1.52 %) above ours in English
+    // the secondary source's English leading coefficient 0.294 is about 1.5 % (1.52 %) above ours in English
     // units (0.497 × 25.4^−0.167 = 0.2896, derived)
     expect(Math.abs(rel(0.294, 0.497 / Math.pow(25.4, 1 - 0.833)))).toBeLessThan(0.016);
   });

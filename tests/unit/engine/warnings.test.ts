@@ -21,8 +21,8 @@ describe('range warnings and multipass', () => {
       'range:fairFloodCapacityLygerosMagoulas:holeAreaRatio',
     ]));
     expect(r.trays[0]!.checks.jetFlood.method).toBe('kisterHaasFloodCapacity');
-    // The h_ct uncertainty (leading coefficient about 1.5 %, Perry 8th eqs. 14-82 to 14-84 via a secondary
-    // transcription) is stated once in the method's source for the methods list, no longer as a warning
+    // The h_ct uncertainty (leading coefficient about 1.5 %, Perry 8th eqs. 14-82 to 14-84 via a
+    // secondary source) is stated once in the method's source for the methods list, no longer as a warning
     // on every Kister & Haas rating (engine 0.3.0).
     expect(codes(r.warnings)).not.toContain('kister-haas-transition-recalled');
     expect(METHOD_METADATA.kisterHaasFloodCapacity!.source).toMatch(/uncertain by about 1\.5 %/);
