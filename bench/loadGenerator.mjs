@@ -23,5 +23,7 @@ process.once('message', async ({ opts, requests, warmup }) => {
   });
   const result = await inst;
   const cpu = process.cpuUsage(cpu0);
-  process.send({ times, warmupTimes, bad, reqPerSec: result.requests.average, cpuMs: (cpu.user + cpu.system) / 1000 }, () => process.exit(0));
+  process.send({ times, warmupTimes, bad, reqPerSec: result.requests.average, cpuMs: (cpu.user + cpu.system) / 1000 }, () =>
+    process.exit(0),
+  );
 });

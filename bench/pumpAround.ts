@@ -15,10 +15,25 @@ const TARGET_MS = 50;
 
 function section(name: string, fromTray: number, toTray: number, over: Partial<StudySection> = {}): StudySection {
   return {
-    name, fromTray, toTray, trayType: 'sieve', passes: 1, columnDiameter_m: 4.2, traySpacing_mm: 686,
-    activeArea_m2: 10.53, downcomerTopArea_m2: 1.66, downcomerBottomArea_m2: 1.66, outletWeirLength_m: 3.2,
-    weirHeight_mm: 40, downcomerClearance_mm: 38, holeArea_m2: 0.64, holeDiameter_mm: 12.7, deckThickness_mm: 3,
-    systemFactor: 0.9, foaming: 'moderate', ...over,
+    name,
+    fromTray,
+    toTray,
+    trayType: 'sieve',
+    passes: 1,
+    columnDiameter_m: 4.2,
+    traySpacing_mm: 686,
+    activeArea_m2: 10.53,
+    downcomerTopArea_m2: 1.66,
+    downcomerBottomArea_m2: 1.66,
+    outletWeirLength_m: 3.2,
+    weirHeight_mm: 40,
+    downcomerClearance_mm: 38,
+    holeArea_m2: 0.64,
+    holeDiameter_mm: 12.7,
+    deckThickness_mm: 3,
+    systemFactor: 0.9,
+    foaming: 'moderate',
+    ...over,
   };
 }
 
@@ -43,11 +58,25 @@ export function benchStudy(trays = 60, steps = 200): StudyInput {
   return {
     sections: [
       section('Top', 1, 19),
-      section('Pump-around zone', 20, 22, { holeArea_m2: 0.62, downcomerTopArea_m2: 2.1, downcomerBottomArea_m2: 2.1, activeArea_m2: 9.6, outletWeirLength_m: 3.55, downcomerClearance_mm: 65 }),
+      section('Pump-around zone', 20, 22, {
+        holeArea_m2: 0.62,
+        downcomerTopArea_m2: 2.1,
+        downcomerBottomArea_m2: 2.1,
+        activeArea_m2: 9.6,
+        outletWeirLength_m: 3.55,
+        downcomerClearance_mm: 65,
+      }),
       section('Below', 23, trays, { holeArea_m2: 0.8 }),
     ],
     trays: loads,
-    pumpAround: { name: 'PA-bench', drawTray: 22, returnTray: 20, baseDuty_kW: 5200, liquidHeatCapacity_kJ_kgK: 2.55, returnTemperatureDrop_K: 65 },
+    pumpAround: {
+      name: 'PA-bench',
+      drawTray: 22,
+      returnTray: 20,
+      baseDuty_kW: 5200,
+      liquidHeatCapacity_kJ_kgK: 2.55,
+      returnTemperatureDrop_K: 65,
+    },
     latentHeat_kJ_kg: 285,
     margin: 0.7,
     sweep: { fromDuty_kW: 3000, toDuty_kW: 9000, steps },

@@ -51,7 +51,9 @@ try {
   fakes = await startFakes({ dataDir, s3Port, smtpPort, bucket });
   // the same young-generation size as `npm run bench` measures with (DEVELOPERS.md, "Benchmarks")
   const nodeOptions = [childEnv.NODE_OPTIONS, SERVER_NODE_OPTIONS].filter(Boolean).join(' ');
-  server = start('node_modules/.bin/tsx', ['server/main.ts'], { env: { ...childEnv, NODE_ENV: 'production', NODE_OPTIONS: nodeOptions } });
+  server = start('node_modules/.bin/tsx', ['server/main.ts'], {
+    env: { ...childEnv, NODE_ENV: 'production', NODE_OPTIONS: nodeOptions },
+  });
   server.on('exit', (code) => {
     if (!stopping) shutdown(code ?? 1);
   });

@@ -58,6 +58,7 @@ try {
   env.DATABASE_URL = cluster.url;
   fakes = await startFakes({ dataDir: root, s3Port, smtpPort, bucket: env.S3_BUCKET, quiet: true });
   step('type check (vue-tsc, strict)', 'node_modules/.bin/vue-tsc', ['--noEmit', '-p', 'tsconfig.json']);
+  step('formatting (prettier --check)', 'node_modules/.bin/prettier', ['--check', '.', '--log-level', 'warn']);
   const migrated = step('migrations apply to an empty database', 'node_modules/.bin/tsx', ['server/db/migrate.ts']);
   const seeded = migrated && step('demo data seeds', 'node_modules/.bin/tsx', ['server/db/seed/index.ts']);
   const built = step('client builds (vite build)', 'node_modules/.bin/vite', ['build', '--logLevel', 'warn']);
@@ -67,10 +68,14 @@ try {
   }
   const report = path.join(root, 'vitest.json');
   const projects = built && seeded ? [] : ['--project', 'unit', '--project', 'api'];
-  runQuiet('node_modules/.bin/vitest', ['run', ...projects, '--reporter=default', '--reporter=json', `--outputFile.json=${report}`], {
-    env,
-    stdio: 'inherit',
-  });
+  runQuiet(
+    'node_modules/.bin/vitest',
+    ['run', ...projects, '--reporter=default', '--reporter=json', `--outputFile.json=${report}`],
+    {
+      env,
+      stdio: 'inherit',
+    },
+  );
   if (existsSync(report)) {
     const j = JSON.parse(readFileSync(report, 'utf8'));
     for (const file of j.testResults ?? [])

@@ -43,7 +43,9 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
       renewSessionIfOld(res, user, session);
       res.locals.session = session;
       if (user.mustChangePassword && !r.whilePasswordChangeDue)
-        throw new ForbiddenError('Change the temporary password an administrator set before anything else (account menu, Change password)');
+        throw new ForbiddenError(
+          'Change the temporary password an administrator set before anything else (account menu, Change password)',
+        );
       if (r.access !== 'signed-in' && !can(user.role, r.access))
         throw new ForbiddenError(
           `Your role (${ROLE_LABELS[user.role]}) does not include “${PERMISSION_LABELS[r.access].toLowerCase()}”`,
@@ -93,7 +95,10 @@ export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOpt
       // copy with every header, on every request, only for us to keep two fields of it
       wrapSerializers: false,
       serializers: {
-        req: (req: { method: string; originalUrl?: string; url: string }) => ({ method: req.method, url: req.originalUrl ?? req.url }),
+        req: (req: { method: string; originalUrl?: string; url: string }) => ({
+          method: req.method,
+          url: req.originalUrl ?? req.url,
+        }),
         res: (res: { statusCode: number }) => ({ status: res.statusCode }),
       },
     }),

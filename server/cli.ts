@@ -18,7 +18,9 @@ export async function main(argv: string[], io: CommandIo = processIo): Promise<n
   const command = name === undefined ? undefined : COMMANDS[name];
   if (!command) {
     const known = Object.keys(COMMANDS).join(', ');
-    return failWith(io, [{ path: '(command)', message: `${name === undefined ? 'no command given' : `unknown command '${name}'`}; known: ${known}` }]);
+    return failWith(io, [
+      { path: '(command)', message: `${name === undefined ? 'no command given' : `unknown command '${name}'`}; known: ${known}` },
+    ]);
   }
   return command(args, io);
 }

@@ -37,8 +37,7 @@ const jwtSecretFromEnv = env.JWT_SECRET ? env.JWT_SECRET : undefined;
 export const config = {
   port: num('PORT', 5180),
   host: env.HOST ?? '127.0.0.1',
-  databaseUrl:
-    env.DATABASE_URL ?? `postgres://frothline@127.0.0.1:${num('PGPORT', 5433)}/${env.PGDATABASE ?? 'frothline'}`,
+  databaseUrl: env.DATABASE_URL ?? `postgres://frothline@127.0.0.1:${num('PGPORT', 5433)}/${env.PGDATABASE ?? 'frothline'}`,
   jwtSecret: jwtSecretFromEnv ?? randomBytes(48).toString('base64url'),
   jwtSecretGenerated: jwtSecretFromEnv === undefined,
   sessionMinutes: num('SESSION_MINUTES', 30),

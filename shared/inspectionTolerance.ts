@@ -43,7 +43,13 @@ export function levelnessLimit(rule: ToleranceRule, diameter_mm: number | null, 
 
 const round = (x: number): number => Math.round(x * 100) / 100;
 
-function plusMinus(item: ToleranceItem, rule: ToleranceRule | undefined, measured: number, design: number | null, point: number | null): MeasurementCheck {
+function plusMinus(
+  item: ToleranceItem,
+  rule: ToleranceRule | undefined,
+  measured: number,
+  design: number | null,
+  point: number | null,
+): MeasurementCheck {
   const tol = rule?.plusMinus_mm ?? null;
   const source = rule?.source ?? '';
   if (design === null || tol === null) {
@@ -58,14 +64,20 @@ function plusMinus(item: ToleranceItem, rule: ToleranceRule | undefined, measure
 }
 
 /** Check every measured value of one tray/pass against its design values and the rule set. */
-export function checkMeasurements(m: TrayMeasurements, design: TrayDesign, rules: ToleranceRuleSet, levelnessClass: 'A' | 'B'): MeasurementCheck[] {
+export function checkMeasurements(
+  m: TrayMeasurements,
+  design: TrayDesign,
+  rules: ToleranceRuleSet,
+  levelnessClass: 'A' | 'B',
+): MeasurementCheck[] {
   const rule = (item: ToleranceItem) => rules.rules.find((r) => r.item === item);
   const out: MeasurementCheck[] = [];
   m.weirHeight_mm.forEach((v, i) => out.push(plusMinus('weirHeight', rule('weirHeight'), v, design.weirHeight_mm, i)));
   m.downcomerClearance_mm.forEach((v, i) =>
     out.push(plusMinus('downcomerClearance', rule('downcomerClearance'), v, design.downcomerClearance_mm, i)),
   );
-  if (m.traySpacing_mm !== null) out.push(plusMinus('traySpacing', rule('traySpacing'), m.traySpacing_mm, design.traySpacing_mm, null));
+  if (m.traySpacing_mm !== null)
+    out.push(plusMinus('traySpacing', rule('traySpacing'), m.traySpacing_mm, design.traySpacing_mm, null));
   if (m.levelness_mm !== null) {
     const r = rule('levelness');
     const limit = r ? levelnessLimit(r, design.columnDiameter_mm, levelnessClass) : null;
@@ -79,7 +91,10 @@ export function checkMeasurements(m: TrayMeasurements, design: TrayDesign, rules
       tolerance: limit,
       pass,
       source: r?.source ?? '',
-      message: limit === null ? 'Not checked: no levelness limit for this diameter' : `high − low ${m.levelness_mm} mm (max ${limit} mm, class ${levelnessClass})`,
+      message:
+        limit === null
+          ? 'Not checked: no levelness limit for this diameter'
+          : `high − low ${m.levelness_mm} mm (max ${limit} mm, class ${levelnessClass})`,
     });
   }
   return out;
@@ -89,11 +104,16 @@ export function checkMeasurements(m: TrayMeasurements, design: TrayDesign, rules
 export function measurementErrors(m: TrayMeasurements, prefix: string): { path: string; message: string }[] {
   const errs: { path: string; message: string }[] = [];
   const ok = (v: number) => Number.isFinite(v) && v >= 0 && v <= 5000;
-  m.weirHeight_mm.forEach((v, i) => !ok(v) && errs.push({ path: `${prefix}.weirHeight_mm[${i}]`, message: 'must be a length between 0 and 5000 mm' }));
-  m.downcomerClearance_mm.forEach(
-    (v, i) => !ok(v) && errs.push({ path: `${prefix}.downcomerClearance_mm[${i}]`, message: 'must be a length between 0 and 5000 mm' }),
+  m.weirHeight_mm.forEach(
+    (v, i) => !ok(v) && errs.push({ path: `${prefix}.weirHeight_mm[${i}]`, message: 'must be a length between 0 and 5000 mm' }),
   );
-  if (m.levelness_mm !== null && !ok(m.levelness_mm)) errs.push({ path: `${prefix}.levelness_mm`, message: 'must be between 0 and 5000 mm' });
-  if (m.traySpacing_mm !== null && !ok(m.traySpacing_mm)) errs.push({ path: `${prefix}.traySpacing_mm`, message: 'must be between 0 and 5000 mm' });
+  m.downcomerClearance_mm.forEach(
+    (v, i) =>
+      !ok(v) && errs.push({ path: `${prefix}.downcomerClearance_mm[${i}]`, message: 'must be a length between 0 and 5000 mm' }),
+  );
+  if (m.levelness_mm !== null && !ok(m.levelness_mm))
+    errs.push({ path: `${prefix}.levelness_mm`, message: 'must be between 0 and 5000 mm' });
+  if (m.traySpacing_mm !== null && !ok(m.traySpacing_mm))
+    errs.push({ path: `${prefix}.traySpacing_mm`, message: 'must be between 0 and 5000 mm' });
   return errs;
 }

@@ -108,7 +108,6 @@ export function publishedSource(source: string): string {
     .trim();
 }
 
-
 export const INSPECTION_STATUS_LABELS: Record<InspectionStatus, string> = {
   draft: 'Draft',
   'inspector-signed': 'Signed by inspector',
@@ -135,11 +134,24 @@ export const PUNCH_PRIORITY_LABELS: Record<PunchPriority, string> = {
   'next-turnaround': 'Next turnaround',
 };
 
-export const TRAY_TYPE_LABELS: Record<TrayType, string> = { sieve: 'sieve', 'fixed-valve': 'fixed valve', 'moving-valve': 'moving valve' };
+export const TRAY_TYPE_LABELS: Record<TrayType, string> = {
+  sieve: 'sieve',
+  'fixed-valve': 'fixed valve',
+  'moving-valve': 'moving valve',
+};
 
-export const GEOMETRY_PROVENANCE_LABELS: Record<GeometryProvenance, string> = { design: 'design', 'as-left': 'as left', 'as-found': 'as found' };
+export const GEOMETRY_PROVENANCE_LABELS: Record<GeometryProvenance, string> = {
+  design: 'design',
+  'as-left': 'as left',
+  'as-found': 'as found',
+};
 
-export const FOAMING_LABELS: Record<FoamingClass, string> = { low: 'low', moderate: 'moderate', high: 'high', 'very-high': 'very high' };
+export const FOAMING_LABELS: Record<FoamingClass, string> = {
+  low: 'low',
+  moderate: 'moderate',
+  high: 'high',
+  'very-high': 'very high',
+};
 
 /** Percent of limit is held at this value when it has no finite size (a 'min' check at zero, a zero limit). */
 export const PERCENT_CAP = 999;

@@ -45,7 +45,7 @@ export function checkApplies(c: Pick<CheckResult, 'status'>): boolean {
 export function trayRuns(trays: readonly number[]): string {
   const sorted = [...trays].sort((a, b) => a - b);
   const parts: string[] = [];
-  for (let i = 0; i < sorted.length; ) {
+  for (let i = 0; i < sorted.length;) {
     let j = i;
     while (j + 1 < sorted.length && sorted[j + 1] === sorted[j]! + 1) j++;
     parts.push(j > i ? `${sorted[i]}–${sorted[j]}` : String(sorted[i]));

@@ -9,7 +9,11 @@ export async function startFakes({ dataDir, s3Port, smtpPort, bucket, quiet = fa
   mkdirSync(s3Dir, { recursive: true });
   mkdirSync(mailDir, { recursive: true });
   const stdio = quiet ? 'ignore' : ['ignore', 'ignore', 'inherit'];
-  const s3 = start('node_modules/.bin/s3rver', ['-d', s3Dir, '-a', '127.0.0.1', '-p', String(s3Port), '--silent', '--configure-bucket', bucket], { stdio });
+  const s3 = start(
+    'node_modules/.bin/s3rver',
+    ['-d', s3Dir, '-a', '127.0.0.1', '-p', String(s3Port), '--silent', '--configure-bucket', bucket],
+    { stdio },
+  );
   const smtp = start(process.execPath, ['scripts/fake-smtp.mjs'], {
     stdio,
     env: { ...process.env, SMTP_PORT: String(smtpPort), MAILBOX_DIR: mailDir },

@@ -64,22 +64,36 @@ export class Cluster {
     const r = this.exec('initdb', ['-D', this.pgdata, '-U', 'postgres', '-A', 'trust', '-E', 'UTF8', '--locale=C.UTF-8'], true);
     if (r.status !== 0) throw new Error(`initdb failed: ${r.stderr || r.stdout}`);
     // Loopback only: refuse anything but 127.0.0.1 at the authentication layer too.
-    writeFileSync(
-      path.join(this.pgdata, 'pg_hba.conf'),
-      'local all all trust\nhost all all 127.0.0.1/32 trust\n',
-    );
+    writeFileSync(path.join(this.pgdata, 'pg_hba.conf'), 'local all all trust\nhost all all 127.0.0.1/32 trust\n');
     return true;
   }
 
   start() {
-    const opts = `-c listen_addresses=127.0.0.1 -p ${this.port} -c unix_socket_directories=${this.sock}` + (this.fsyncOff ? ' -c fsync=off -c synchronous_commit=off -c full_page_writes=off' : '');
-    const r = this.exec('pg_ctl', ['-D', this.pgdata, '-l', path.join(this.dir, 'postgres.log'), '-w', '-t', '30', '-o', opts, 'start'], true);
+    const opts =
+      `-c listen_addresses=127.0.0.1 -p ${this.port} -c unix_socket_directories=${this.sock}` +
+      (this.fsyncOff ? ' -c fsync=off -c synchronous_commit=off -c full_page_writes=off' : '');
+    const r = this.exec(
+      'pg_ctl',
+      ['-D', this.pgdata, '-l', path.join(this.dir, 'postgres.log'), '-w', '-t', '30', '-o', opts, 'start'],
+      true,
+    );
     if (r.status !== 0) throw new Error(`PostgreSQL did not start (see ${this.dir}/postgres.log): ${r.stderr || r.stdout}`);
     log(`PostgreSQL listening on 127.0.0.1:${this.port}`);
   }
 
   psql(sql, db = 'postgres') {
-    const r = runQuiet(path.join(this.bin, 'psql'), ['-h', '127.0.0.1', '-p', String(this.port), '-U', 'postgres', '-d', db, '-tAc', sql]);
+    const r = runQuiet(path.join(this.bin, 'psql'), [
+      '-h',
+      '127.0.0.1',
+      '-p',
+      String(this.port),
+      '-U',
+      'postgres',
+      '-d',
+      db,
+      '-tAc',
+      sql,
+    ]);
     if (r.status !== 0) throw new Error(`psql failed: ${r.stderr}`);
     return r.stdout.trim();
   }

@@ -18,7 +18,8 @@ export const apronHeadLoss = method(
   },
   {
     label: 'Apron head loss',
-    source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 [from memory]; Kister, Distillation Design (1992) Ch. 6; Sinnott C&R Vol. 6 4th ed.",
+    source:
+      "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 [from memory]; Kister, Distillation Design (1992) Ch. 6; Sinnott C&R Vol. 6 4th ed.",
     equation: 'h_da = 165.2 (Q/A_da)^2',
     provenance: 'recalled',
     ranges: { underflowVelocity_m_s: [0, 0.45] },
@@ -38,7 +39,8 @@ export const downcomerBackupClear = method(
   },
   {
     label: 'Downcomer backup (clear liquid, aerated by phi_dc)',
-    source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14; Kister, Distillation Design (1992) §6.5 (80 % of TS + hw); Table 6.4 aeration [from memory]",
+    source:
+      "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14; Kister, Distillation Design (1992) §6.5 (80 % of TS + hw); Table 6.4 aeration [from memory]",
     equation: 'h_dc = h_t + h_w + h_ow + h_da; froth = h_dc/phi_dc',
     provenance: 'seen',
     ranges: {},
@@ -70,7 +72,12 @@ export const downcomerInletVelocity = method(
  */
 export const downcomerResidenceTimeApparent = method(
   'downcomerResidenceTimeApparent',
-  function downcomerResidenceTimeApparent(topArea_m2: number, bottomArea_m2: number, traySpacing_mm: number, liquid_m3_s: number): number {
+  function downcomerResidenceTimeApparent(
+    topArea_m2: number,
+    bottomArea_m2: number,
+    traySpacing_mm: number,
+    liquid_m3_s: number,
+  ): number {
     return (0.5 * (topArea_m2 + bottomArea_m2) * traySpacing_mm * 1e-3) / liquid_m3_s;
   },
   {

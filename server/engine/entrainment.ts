@@ -46,7 +46,8 @@ export const fairEntrainmentOwnFit = method(
   },
   {
     label: "Fair entrainment chart (Frothline's own fit)",
-    source: "own fit to readings of Fair's chart (Perry's Chemical Engineers' Handbook 8th ed. Fig. 14-34): Seader & Henley (1998) solutions 7.48, Perry 8th Example 10, Sinnott Ex. 11.11 [from memory]",
+    source:
+      "own fit to readings of Fair's chart (Perry's Chemical Engineers' Handbook 8th ed. Fig. 14-34): Seader & Henley (1998) solutions 7.48, Perry 8th Example 10, Sinnott Ex. 11.11 [from memory]",
     equation: 'logit psi = -5.82 + 5.661 p + 0.9989 p^8 - 27.48 F_LV',
     provenance: 'own-fit',
     ranges: { flowParameter: [0.01, 0.2], percentFlood: [30, 95] },

@@ -28,7 +28,8 @@ export const fairFloodCapacityLygerosMagoulas = method(
   },
   {
     label: 'Fair (1961) jet flood, Lygeros & Magoulas fit',
-    source: "Perry's Chemical Engineers' Handbook 8th ed. eq. (14-90); Lygeros & Magoulas, Hydrocarbon Process. 65(12) 43 (1986); Fair, Petro/Chem Eng. 33(10) 45 (1961). Beyond the chart's flow parameter 1 the fit is followed (lower capacity than at the chart edge). Hole-area correction (Ludwig Vol. 2 3rd ed. p. 189) on the open slot area for valve trays (Perry's definition)",
+    source:
+      "Perry's Chemical Engineers' Handbook 8th ed. eq. (14-90); Lygeros & Magoulas, Hydrocarbon Process. 65(12) 43 (1986); Fair, Petro/Chem Eng. 33(10) 45 (1961). Beyond the chart's flow parameter 1 the fit is followed (lower capacity than at the chart edge). Hole-area correction (Ludwig Vol. 2 3rd ed. p. 189) on the open slot area for valve trays (Perry's definition)",
     equation: 'C_sbf = 0.0105 + 8.127e-4 TS^0.755 exp(-1.463 F_LV^0.842)',
     provenance: 'seen',
     ranges: {
@@ -159,7 +160,8 @@ export const transitionClearLiquidHeightKisterHaas = method(
   },
   {
     label: 'Kister & Haas froth-to-spray transition height (corrected Jeronimo & Sawistowski)',
-    source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 eqs. (14-82) to (14-84), after Jeronimo & Sawistowski as corrected by Kister & Haas (1990). Taken from a secondary source reproducing those equations (same structure and exponents, leading coefficient within 1.5 %), which quotes Kister's (1992) sizing example h_ct ≈ 0.94 in of water at d_H 0.5 in, A_f 0.1, Q_L 6.45 gpm/in; this form gives 0.936 in. Uncertainty: the leading coefficient, about 1.5 %",
+    source:
+      "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 eqs. (14-82) to (14-84), after Jeronimo & Sawistowski as corrected by Kister & Haas (1990). Taken from a secondary source reproducing those equations (same structure and exponents, leading coefficient within 1.5 %), which quotes Kister's (1992) sizing example h_ct ≈ 0.94 in of water at d_H 0.5 in, A_f 0.1, Q_L 6.45 gpm/in; this form gives 0.936 in. Uncertainty: the leading coefficient, about 1.5 %",
     equation: 'h_ct = 0.497 Af^-0.791 dH^0.833/(1 + 0.013 QL^-0.59 Af^-1.79) (996/rhoL)^(0.5(1-n))',
     provenance: 'seen',
     ranges: { weirLoad_m3_h_m: [3, 40] },
@@ -203,7 +205,8 @@ export const kisterHaasFloodCapacity = method(
   },
   {
     label: 'Kister & Haas (1990) jet flood',
-    source: "Kister & Haas, Chem. Eng. Prog. 86(9) 63 (1990), as in Perry's Chemical Engineers' Handbook 8th ed. eq. (14-81); Kister, Distillation Design (1992) eq. 6.12; range Perry 8th ed. Table 14-10. The froth-to-spray transition height h_ct follows Perry's eqs. (14-82) to (14-84) as reproduced in a secondary source that also quotes Kister's (1992) sizing example (0.94 in of water); its leading coefficient is uncertain by about 1.5 %. For valve trays A_f is the open slot area over the bubbling area",
+    source:
+      "Kister & Haas, Chem. Eng. Prog. 86(9) 63 (1990), as in Perry's Chemical Engineers' Handbook 8th ed. eq. (14-81); Kister, Distillation Design (1992) eq. 6.12; range Perry 8th ed. Table 14-10. The froth-to-spray transition height h_ct follows Perry's eqs. (14-82) to (14-84) as reproduced in a secondary source that also quotes Kister's (1992) sizing example (0.94 in of water); its leading coefficient is uncertain by about 1.5 %. For valve trays A_f is the open slot area over the bubbling area",
     equation: 'C_SB = 0.0277 (dH^2 sigma/rhoL)^0.125 (rhoV/rhoL)^0.1 (TS/h_ct)^0.5',
     provenance: 'seen',
     ranges: {

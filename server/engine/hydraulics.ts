@@ -5,17 +5,33 @@
 import type { EngineWarning, TrayDetails, TrayLoad } from '../../shared/types/rating.js';
 import type { PreparedSection } from './prepare.js';
 import {
-  fairFloodCapacityLygerosMagoulas, fairSurfaceTensionCorrection, floodVelocitySoudersBrown,
-  highPressureSystemFactorKister, kisterHaasFloodCapacity, transitionClearLiquidHeightKisterHaas,
+  fairFloodCapacityLygerosMagoulas,
+  fairSurfaceTensionCorrection,
+  floodVelocitySoudersBrown,
+  highPressureSystemFactorKister,
+  kisterHaasFloodCapacity,
+  transitionClearLiquidHeightKisterHaas,
 } from './flooding.js';
 import { FAIR_ENTRAINMENT_DATA_SPAN, entrainedLiquidRate, fairEntrainmentOwnFit } from './entrainment.js';
 import {
-  clearLiquidHeightBennett, dryTrayHeadK, dryTrayHeadKleinValve, dryTrayHeadOrifice, headToPascal,
-  kleinClosedBalanceVelocity, kleinOpenBalanceVelocity, residualHeadBennett,
+  clearLiquidHeightBennett,
+  dryTrayHeadK,
+  dryTrayHeadKleinValve,
+  dryTrayHeadOrifice,
+  headToPascal,
+  kleinClosedBalanceVelocity,
+  kleinOpenBalanceVelocity,
+  residualHeadBennett,
 } from './pressureDrop.js';
 import { eduljeeK2OwnFit, weepPointHoleVelocityEduljee, weepPointHoleVelocityFair } from './weeping.js';
 import { crestOverWeirFrancis, weirLoadingVolumetric } from './weir.js';
-import { apronHeadLoss, downcomerBackupClear, downcomerInletVelocity, downcomerResidenceTimeApparent, downcomerSealKister } from './downcomer.js';
+import {
+  apronHeadLoss,
+  downcomerBackupClear,
+  downcomerInletVelocity,
+  downcomerResidenceTimeApparent,
+  downcomerSealKister,
+} from './downcomer.js';
 import { passHydraulics } from './multipass.js';
 import { REPORT_CAP, S_PER_H, finiteOrCap, safeNumber } from './units.js';
 import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
@@ -60,7 +76,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   const uN = qV / p.netArea;
   const uA = qV / p.activeArea;
   const uH = qV / p.holeArea;
-  const flv = V > 0 ? ((L / (V * p.passes)) * Math.sqrt(rhoV / rhoL)) : 0;
+  const flv = V > 0 ? (L / (V * p.passes)) * Math.sqrt(rhoV / rhoL) : 0;
 
   // Jet flood: Fair (always, reported beside the chosen method) and Kister & Haas.
   // Outside the chart the conservative side is taken: below F_LV 0.01 the value at the edge (the fit
@@ -68,14 +84,24 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   // to 28 % higher). Either way the lower capacity, and a warning.
   const flvChart = flv < 0.01 ? 0.01 : flv;
   if (out && V > 0) {
-    checkRange(out, FAIR, 'flowParameter', flv, tray, flv < 0.01
-      ? `capacity factor evaluated at the chart edge ${flvChart}`
-      : "capacity factor extrapolated along the fit's trend (lower than at the chart edge F_LV 1: conservative)");
+    checkRange(
+      out,
+      FAIR,
+      'flowParameter',
+      flv,
+      tray,
+      flv < 0.01
+        ? `capacity factor evaluated at the chart edge ${flvChart}`
+        : "capacity factor extrapolated along the fit's trend (lower than at the chart edge F_LV 1: conservative)",
+    );
     checkRange(out, SIGMA, 'surfaceTension_mN_m', sigma, tray);
     checkRange(out, SB, 'vapourToLiquidDensityRatio', rhoV / rhoL, tray);
   }
   const cFair =
-    fairFloodCapacityLygerosMagoulas(flvChart, p.traySpacing_mm) * p.holeAreaCorrection * fairSurfaceTensionCorrection(sigma) * p.systemFactor;
+    fairFloodCapacityLygerosMagoulas(flvChart, p.traySpacing_mm) *
+    p.holeAreaCorrection *
+    fairSurfaceTensionCorrection(sigma) *
+    p.systemFactor;
   const uFloodFair = floodVelocitySoudersBrown(cFair, rhoL, rhoV);
   const pctFair = uN > 0 ? (100 * uN) / uFloodFair : 0;
   const weirLoad = weirLoadingVolumetric(qL, p.weirLength);
@@ -86,13 +112,25 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   const pctKH = uN > 0 ? (100 * uN) / uFloodKH : 0;
   const useKH = p.jetMethod === 'kister-haas';
   if (out && useKH) {
-    checkRange(out, KH, 'weirLoad_m3_h_m', weirLoad, tray, weirLoad < 3 ? 'evaluated at 3 m³/(h·m) (conservative)' : 'value extrapolated');
+    checkRange(
+      out,
+      KH,
+      'weirLoad_m3_h_m',
+      weirLoad,
+      tray,
+      weirLoad < 3 ? 'evaluated at 3 m³/(h·m) (conservative)' : 'value extrapolated',
+    );
     checkRange(out, KH, 'vapourDensity_kg_m3', rhoV, tray);
     checkRange(out, KH, 'liquidDensity_kg_m3', rhoL, tray);
     checkRange(out, KH, 'surfaceTension_mN_m', sigma, tray);
     if (sigma > KH_SIGMA_NOTE)
-      out.push(warning(WARNING_CODES.kisterHaasSurfaceTension,
-        `Kister & Haas: surface tension ${formatNumber(sigma)} mN/m is above ${KH_SIGMA_NOTE} mN/m; some presentations of the correlation use ${KH_SIGMA_NOTE} mN/m above this value, which gives a lower capacity. Rated with the value given.`, tray));
+      out.push(
+        warning(
+          WARNING_CODES.kisterHaasSurfaceTension,
+          `Kister & Haas: surface tension ${formatNumber(sigma)} mN/m is above ${KH_SIGMA_NOTE} mN/m; some presentations of the correlation use ${KH_SIGMA_NOTE} mN/m above this value, which gives a lower capacity. Rated with the value given.`,
+          tray,
+        ),
+      );
     if (load.pressure_kPa !== undefined) checkRange(out, KH, 'pressure_kPa', load.pressure_kPa, tray);
     if (load.liquidViscosity_mPa_s !== undefined) checkRange(out, KH, 'liquidViscosity_mPa_s', load.liquidViscosity_mPa_s, tray);
   }
@@ -103,11 +141,26 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   const flvEnt = flv < ENT_LO ? ENT_LO : flv > ENT_HI ? ENT_HI : flv;
   if (out && V > 0 && L > 0 && pctFlood < 100) {
     checkRange(out, ENT, 'flowParameter', flv, tray, `evaluated at ${flvEnt}${flv > ENT_HI ? ' (overstates entrainment)' : ''}`);
-    checkRange(out, ENT, 'percentFlood', pctFlood, tray, pctFlood < 30 ? 'psi taken proportional to percent flood below the lowest chart curve' : 'fit extrapolated');
+    checkRange(
+      out,
+      ENT,
+      'percentFlood',
+      pctFlood,
+      tray,
+      pctFlood < 30 ? 'psi taken proportional to percent flood below the lowest chart curve' : 'fit extrapolated',
+    );
   }
   const psi = L > 0 ? fairEntrainmentOwnFit(flvEnt, pctFlood / 100) : 0;
   const entrained = entrainedLiquidRate(psi, load.liquidMassFlow_kg_h);
-  if (out && psi > 0.999) checkRange(out, ENT_RATE, 'psi', psi, tray, 'entrained liquid computed at 0.999 (the rate grows without bound as the fraction approaches 1)');
+  if (out && psi > 0.999)
+    checkRange(
+      out,
+      ENT_RATE,
+      'psi',
+      psi,
+      tray,
+      'entrained liquid computed at 0.999 (the rate grows without bound as the fraction approaches 1)',
+    );
 
   // Pressure drop.
   let hd: number;
@@ -128,7 +181,15 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   const hL = L > 0 ? clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, p.weirLength) : 0;
   const hSigma = L > 0 ? residualHeadBennett(sigma, rhoL, p.holeDiameter_mm) : 0;
   // Bennett is a froth-regime correlation: warn in the spray regime (clear liquid below h_ct)
-  if (out && V > 0 && hL > 0) checkRange(out, BENNETT, 'transitionOverClearLiquid', hct / hL, tray, 'spray regime: the froth-regime clear liquid height and residual head are extrapolated');
+  if (out && V > 0 && hL > 0)
+    checkRange(
+      out,
+      BENNETT,
+      'transitionOverClearLiquid',
+      hct / hL,
+      tray,
+      'spray regime: the froth-regime clear liquid height and residual head are extrapolated',
+    );
   const hT = hd + hL + hSigma;
 
   // Weir.
@@ -142,13 +203,26 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   let uValvesOpen = 0;
   if (p.trayType === 'moving-valve') {
     const v = p.valves;
-    uWeep = kleinClosedBalanceVelocity(v.legFactor, v.valveThickness_mm, v.materialDensity_kg_m3, p.closedK, rhoV, p.eddyLossCoefficient);
+    uWeep = kleinClosedBalanceVelocity(
+      v.legFactor,
+      v.valveThickness_mm,
+      v.materialDensity_kg_m3,
+      p.closedK,
+      rhoV,
+      p.eddyLossCoefficient,
+    );
     weepMethod = kleinClosedBalanceVelocity.meta.id;
     uValvesOpen = kleinOpenBalanceVelocity(uWeep, p.closedK, p.dryK);
   } else {
     uFairWeep = weepPointHoleVelocityFair({
-      dryK: p.dryK, holeAreaRatio: p.holeAreaRatio, vapourDensity: rhoV, liquidDensity: rhoL,
-      weirHeight_mm: p.weirHeight_mm, liquid_m3_s: qL, weirLength_m: p.weirLength, residualHead_mm: hSigma,
+      dryK: p.dryK,
+      holeAreaRatio: p.holeAreaRatio,
+      vapourDensity: rhoV,
+      liquidDensity: rhoL,
+      weirHeight_mm: p.weirHeight_mm,
+      liquid_m3_s: qL,
+      weirLength_m: p.weirLength,
+      residualHead_mm: hSigma,
     });
     uWeep = uFairWeep;
     weepMethod = weepPointHoleVelocityFair.meta.id;
@@ -169,22 +243,46 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   if (out && L > 0) checkRange(out, APRON, 'underflowVelocity_m_s', qL / p.apronArea, tray);
   const clear = L > 0 ? downcomerBackupClear(hT, p.weirHeight_mm, crest, hda) : 0;
   const aerated = clear / p.limits.aerationFactor;
-  const residence = qL > 0 ? downcomerResidenceTimeApparent(p.downcomerTopArea, p.downcomerBottomArea, p.traySpacing_mm, qL) : REPORT_CAP;
+  const residence =
+    qL > 0 ? downcomerResidenceTimeApparent(p.downcomerTopArea, p.downcomerBottomArea, p.traySpacing_mm, qL) : REPORT_CAP;
 
   if (out) {
-    if (L === 0) out.push(warning(WARNING_CODES.dryTray, 'no liquid: the tray is dry; entrainment, weeping, weir and downcomer checks do not apply.', tray));
+    if (L === 0)
+      out.push(
+        warning(
+          WARNING_CODES.dryTray,
+          'no liquid: the tray is dry; entrainment, weeping, weir and downcomer checks do not apply.',
+          tray,
+        ),
+      );
     else if (crest < p.limits.liquidLoad)
-      out.push(warning(WARNING_CODES.lowCrest,
-        `crest over the weir ${formatNumber(crest)} mm is below ${p.limits.liquidLoad} mm: risk of drying out and liquid maldistribution; consider a picket-fence (notched) weir.`, tray));
-    if (V === 0) out.push(warning(WARNING_CODES.noVapour, 'zero vapour: the tray dumps its liquid through the deck (weeping).', tray));
+      out.push(
+        warning(
+          WARNING_CODES.lowCrest,
+          `crest over the weir ${formatNumber(crest)} mm is below ${p.limits.liquidLoad} mm: risk of drying out and liquid maldistribution; consider a picket-fence (notched) weir.`,
+          tray,
+        ),
+      );
+    if (V === 0)
+      out.push(warning(WARNING_CODES.noVapour, 'zero vapour: the tray dumps its liquid through the deck (weeping).', tray));
     if (pctFlood >= 100 && L > 0)
-      out.push(warning(WARNING_CODES.beyondFlood,
-        `the tray is flooded (${formatNumber(pctFlood)} % of jet flood): entrainment is not rated past flood and the other correlations are extrapolated.`, tray));
+      out.push(
+        warning(
+          WARNING_CODES.beyondFlood,
+          `the tray is flooded (${formatNumber(pctFlood)} % of jet flood): entrainment is not rated past flood and the other correlations are extrapolated.`,
+          tray,
+        ),
+      );
     // Kister (1992) §6.5 applied no high-pressure derating with Fair's correlation: its (σ/20)^0.2 term
     // already derates the low-surface-tension systems of high pressure. Warn where that does not apply.
     if (p.systemFactor === 1 && rhoV > 28.8 && (useKH || sigma >= 20))
-      out.push(warning(WARNING_CODES.highPressureDerating,
-        `vapour density ${formatNumber(rhoV)} kg/m³ > 28.8: Kister (1992) Table 6.7 suggests a system factor of ${formatNumber(highPressureSystemFactorKister(rhoV))}.`, tray));
+      out.push(
+        warning(
+          WARNING_CODES.highPressureDerating,
+          `vapour density ${formatNumber(rhoV)} kg/m³ > 28.8: Kister (1992) Table 6.7 suggests a system factor of ${formatNumber(highPressureSystemFactorKister(rhoV))}.`,
+          tray,
+        ),
+      );
   }
 
   const details: TrayDetails = {
@@ -224,10 +322,20 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     totalPressureDrop_Pa: headToPascal(hT, rhoL),
   };
   if (p.passLayout) {
-    passHydraulics(p.passLayout, tray, {
-      liquid_m3_s: qL, trayHead_mm: hT, weirHeight_mm: p.weirHeight_mm, clearance_mm: p.clearance_mm, traySpacing_mm: p.traySpacing_mm,
-      bottomOverTop: p.downcomerBottomArea / p.downcomerTopArea, aerationFactor: p.limits.aerationFactor,
-    }, details);
+    passHydraulics(
+      p.passLayout,
+      tray,
+      {
+        liquid_m3_s: qL,
+        trayHead_mm: hT,
+        weirHeight_mm: p.weirHeight_mm,
+        clearance_mm: p.clearance_mm,
+        traySpacing_mm: p.traySpacing_mm,
+        bottomOverTop: p.downcomerBottomArea / p.downcomerTopArea,
+        aerationFactor: p.limits.aerationFactor,
+      },
+      details,
+    );
   }
   // Safety net: every reported number finite (extreme but schema-valid inputs can overflow a power law).
   if (!allFinite(details)) for (const k in details) details[k] = safeNumber(details[k]!);

@@ -13,7 +13,15 @@ export { METHOD_REGISTRY, METHOD_METADATA, METHOD_USES } from './registry.js';
 export { DEFAULT_LIMITS, FOAMING_CLASSES, resolveLimits, type ResolvedLimits } from './limits.js';
 export { WARNING_CODES } from './validity.js';
 export { ENGINE_VERSION } from './version.js';
-export { areaBetweenChords, chordLength, passImbalancePercent, passTray, preparePasses, PASS_DETAIL_FIELDS, DOWNCOMER_KINDS } from './multipass.js';
+export {
+  areaBetweenChords,
+  chordLength,
+  passImbalancePercent,
+  passTray,
+  preparePasses,
+  PASS_DETAIL_FIELDS,
+  DOWNCOMER_KINDS,
+} from './multipass.js';
 export type { MethodMeta, Provenance, Range } from './meta.js';
 export * from './flooding.js';
 export * from './entrainment.js';

@@ -29,10 +29,6 @@ export type MethodFn<F> = F & { readonly meta: MethodMeta };
  * Attach metadata to a correlation function. The id must equal the name the function is exported
  * under (registry.ts enforces it; bundlers may rename function objects, so `fn.name` is not relied on).
  */
-export function method<F extends (...args: never[]) => unknown>(
-  id: string,
-  fn: F,
-  meta: Omit<MethodMeta, 'id'>,
-): MethodFn<F> {
+export function method<F extends (...args: never[]) => unknown>(id: string, fn: F, meta: Omit<MethodMeta, 'id'>): MethodFn<F> {
   return Object.assign(fn, { meta: Object.freeze({ id, ...meta }) });
 }

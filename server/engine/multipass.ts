@@ -17,7 +17,13 @@
  */
 import type { PassLayout, PassOutlets, SectionGeometry, TrayDetails } from '../../shared/types/rating.js';
 import { crestOverWeirFrancis, weirLoadingVolumetric } from './weir.js';
-import { apronHeadLoss, downcomerBackupClear, downcomerInletVelocity, downcomerResidenceTimeApparent, downcomerSealKister } from './downcomer.js';
+import {
+  apronHeadLoss,
+  downcomerBackupClear,
+  downcomerInletVelocity,
+  downcomerResidenceTimeApparent,
+  downcomerSealKister,
+} from './downcomer.js';
 
 /** Chord length [m] at distance x [m] from the centre of a circle of radius r [m]. Example: r 1, x 0.6 → 1.6. */
 export function chordLength(radius_m: number, x_m: number): number {
@@ -68,10 +74,19 @@ export interface PassTray {
 function panelEdges(l: PassLayout, passes: 2 | 4, r: number): [number, number][] {
   const xs = r - l.sideDowncomerWidth_mm / 1000;
   const xc = l.centreDowncomerWidth_mm / 2000;
-  if (passes === 2) return [[-xs, -xc], [xc, xs]];
+  if (passes === 2)
+    return [
+      [-xs, -xc],
+      [xc, xs],
+    ];
   const xo = (l.offCentreDowncomerOffset_mm ?? 0) / 1000;
   const wo = (l.offCentreDowncomerWidth_mm ?? 0) / 2000;
-  return [[-xs, -(xo + wo)], [-(xo - wo), -xc], [xc, xo - wo], [xo + wo, xs]];
+  return [
+    [-xs, -(xo + wo)],
+    [-(xo - wo), -xc],
+    [xc, xo - wo],
+    [xo + wo, xs],
+  ];
 }
 
 /** The pass panels and downcomers of a tray whose passes drain to `outlets` (a geometry-only, per-section step). */
@@ -86,7 +101,9 @@ export function passTray(section: SectionGeometry, layout: PassLayout, outlets: 
   const side: PassDowncomer = { kind: 0, area: areaBetweenChords(r, xs, r), apronLength: chordLength(r, xs) };
   const centre: PassDowncomer = { kind: 1, area: areaBetweenChords(r, -xc, xc), apronLength: 2 * chordLength(r, xc) };
   const off: PassDowncomer = {
-    kind: 2, area: areaBetweenChords(r, xo - wo, xo + wo), apronLength: chordLength(r, xo - wo) + chordLength(r, xo + wo),
+    kind: 2,
+    area: areaBetweenChords(r, xo - wo, xo + wo),
+    apronLength: chordLength(r, xo - wo) + chordLength(r, xo + wo),
   };
   const areas = edges.map(([a, b]) => areaBetweenChords(r, a, b));
   const total = areas.reduce((s, a) => s + a, 0);
@@ -119,7 +136,12 @@ export function passTray(section: SectionGeometry, layout: PassLayout, outlets: 
       d = downcomers.push({ ...dc }) - 1;
       keys.push(key);
     }
-    return { weirLength: chordLength(r, outlet), flowPathLength: outer - inner, areaFraction: total > 0 ? areas[i]! / total : 0, downcomer: d };
+    return {
+      weirLength: chordLength(r, outlet),
+      flowPathLength: outer - inner,
+      areaFraction: total > 0 ? areas[i]! / total : 0,
+      downcomer: d,
+    };
   });
   return { outlets, panels, downcomers };
 }
@@ -157,10 +179,19 @@ export function preparePasses(section: SectionGeometry): PreparedPasses | undefi
   const other: PassOutlets = l.oddTrayOutlets === 'side' ? 'inner' : 'side';
   const odd = passTray(section, l, l.oddTrayOutlets);
   const even = passTray(section, l, other);
-  const split = l.liquidSplit && l.liquidSplit.length === section.passes
-    ? l.liquidSplit.slice()
-    : new Array<number>(section.passes).fill(1 / section.passes);
-  return { odd, even, split, imbalance_percent: passImbalancePercent(split, odd.panels.map((p) => p.areaFraction)) };
+  const split =
+    l.liquidSplit && l.liquidSplit.length === section.passes
+      ? l.liquidSplit.slice()
+      : new Array<number>(section.passes).fill(1 / section.passes);
+  return {
+    odd,
+    even,
+    split,
+    imbalance_percent: passImbalancePercent(
+      split,
+      odd.panels.map((p) => p.areaFraction),
+    ),
+  };
 }
 
 /** Detail keys of pass n (1-based), built once. */
@@ -268,7 +299,10 @@ export function passHydraulics(pp: PreparedPasses, tray: number, x: PassLiquidIn
  * pass reaches a weir loading w at total liquid w·maxLoadingWeir_m, a crest at the loading for that crest
  * × minCrestWeir_m, and a downcomer inlet velocity v at v·inletArea_m2.
  */
-export function passLimitSizes(pp: PreparedPasses, tray: number): { maxLoadingWeir_m: number; minCrestWeir_m: number; inletArea_m2: number } {
+export function passLimitSizes(
+  pp: PreparedPasses,
+  tray: number,
+): { maxLoadingWeir_m: number; minCrestWeir_m: number; inletArea_m2: number } {
   const t = tray % 2 === 1 ? pp.odd : pp.even;
   let maxLoadingWeir = Infinity;
   let minCrestWeir = 0;

@@ -2,7 +2,13 @@
  * Operating window of one tray: for its geometry and physical properties, the curves of vapour load
  * against liquid load at which each limit is reached, solved with the shared solver (solve.ts).
  */
-import type { MethodOptions, OperatingWindow, OperatingWindowCurve, SectionGeometry, TrayLoad } from '../../shared/types/rating.js';
+import type {
+  MethodOptions,
+  OperatingWindow,
+  OperatingWindowCurve,
+  SectionGeometry,
+  TrayLoad,
+} from '../../shared/types/rating.js';
 import { prepareSection, type PreparedSection } from './prepare.js';
 import { trayHydraulics, type Hydraulics } from './hydraulics.js';
 import { solveIncreasing } from './solve.js';
@@ -22,7 +28,14 @@ function at(p: PreparedSection, load: TrayLoad, vapour: number, liquid: number):
 }
 
 /** Vapour [kg/h] at which metric(h) reaches limit for the given liquid, or undefined if none. */
-function vapourAtLimit(p: PreparedSection, load: TrayLoad, liquid: number, metric: Metric, limit: number, guess: number): number | undefined {
+function vapourAtLimit(
+  p: PreparedSection,
+  load: TrayLoad,
+  liquid: number,
+  metric: Metric,
+  limit: number,
+  guess: number,
+): number | undefined {
   const f = (v: number): number => metric(at(p, load, v, liquid)) - limit;
   const r = solveIncreasing(f, 0, guess, { xTol: 1e-6 * guess });
   return r.converged && r.root > 0 && Number.isFinite(r.root) ? r.root : undefined;
@@ -40,7 +53,7 @@ export function operatingWindow(
   const n = Math.max(2, options.points ?? 21);
   // multipass layout: the lines where the worst pass reaches each limit
   const sizes = p.passLayout ? passLimitSizes(p.passLayout, load.tray) : undefined;
-  const liquidAtWeirLoading = (w: number, weir: number): number => (w * weir * rhoL); // m³/(h·m) × m × kg/m³ = kg/h
+  const liquidAtWeirLoading = (w: number, weir: number): number => w * weir * rhoL; // m³/(h·m) × m × kg/m³ = kg/h
   const lMinWeir = liquidAtWeirLoading(weirLoadingForCrestFrancis(lim.liquidLoad), sizes?.minCrestWeir_m ?? p.weirLength);
   const lMaxWeir = liquidAtWeirLoading(lim.weirLoading, sizes?.maxLoadingWeir_m ?? p.weirLength);
   const lInlet = lim.downcomerInletVelocity * (sizes?.inletArea_m2 ?? p.downcomerTopArea) * rhoL * S_PER_H;
@@ -49,9 +62,24 @@ export function operatingWindow(
 
   const implicit: { limit: string; label: string; metric: Metric; value: number }[] = [
     { limit: 'flood', label: 'Jet flood (100 %)', metric: (h) => h.percentFlood, value: 100 },
-    { limit: 'floodDesign', label: `Jet flood design line (${lim.jetFlood} %)`, metric: (h) => h.percentFlood, value: lim.jetFlood },
-    { limit: 'entrainment', label: `Entrainment (ψ = ${lim.entrainment})`, metric: (h) => h.details.entrainmentFraction, value: lim.entrainment },
-    { limit: 'downcomerBackup', label: `Downcomer backup (${lim.downcomerBackup} % of TS + hw)`, metric: (h) => h.details.downcomerBackupPercent ?? 0, value: lim.downcomerBackup },
+    {
+      limit: 'floodDesign',
+      label: `Jet flood design line (${lim.jetFlood} %)`,
+      metric: (h) => h.percentFlood,
+      value: lim.jetFlood,
+    },
+    {
+      limit: 'entrainment',
+      label: `Entrainment (ψ = ${lim.entrainment})`,
+      metric: (h) => h.details.entrainmentFraction,
+      value: lim.entrainment,
+    },
+    {
+      limit: 'downcomerBackup',
+      label: `Downcomer backup (${lim.downcomerBackup} % of TS + hw)`,
+      metric: (h) => h.details.downcomerBackupPercent ?? 0,
+      value: lim.downcomerBackup,
+    },
   ];
   const curves: OperatingWindowCurve[] = [];
   let vTop = load.vapourMassFlow_kg_h;
@@ -78,11 +106,23 @@ export function operatingWindow(
   curves.push(weep);
   const top = 1.1 * vTop;
   const vertical = (limit: string, label: string, liquid: number): OperatingWindowCurve => ({
-    limit, label, liquid_kg_h: [liquid, liquid], vapour_kg_h: [0, top],
+    limit,
+    label,
+    liquid_kg_h: [liquid, liquid],
+    vapour_kg_h: [0, top],
   });
-  curves.push({ ...vertical('downcomerInletVelocity', `Downcomer inlet velocity (${lim.downcomerInletVelocity} m/s)`, lInlet), value: lim.downcomerInletVelocity });
-  curves.push({ ...vertical('minWeirLoading', `Minimum weir loading (crest ${lim.liquidLoad} mm)`, lMinWeir), value: lim.liquidLoad });
-  curves.push({ ...vertical('maxWeirLoading', `Maximum weir loading (${lim.weirLoading} m³/(h·m))`, lMaxWeir), value: lim.weirLoading });
+  curves.push({
+    ...vertical('downcomerInletVelocity', `Downcomer inlet velocity (${lim.downcomerInletVelocity} m/s)`, lInlet),
+    value: lim.downcomerInletVelocity,
+  });
+  curves.push({
+    ...vertical('minWeirLoading', `Minimum weir loading (crest ${lim.liquidLoad} mm)`, lMinWeir),
+    value: lim.liquidLoad,
+  });
+  curves.push({
+    ...vertical('maxWeirLoading', `Maximum weir loading (${lim.weirLoading} m³/(h·m))`, lMaxWeir),
+    value: lim.weirLoading,
+  });
   return {
     tray: load.tray,
     curves,

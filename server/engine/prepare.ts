@@ -3,9 +3,22 @@
  * computed once per section (areas, orifice coefficients, limits, geometry warnings), so that rating a
  * tray only does the load-dependent work.
  */
-import type { EngineWarning, FoamingClass, JetFloodMethod, MethodOptions, SectionGeometry, TrayType, ValveData } from '../../shared/types/rating.js';
+import type {
+  EngineWarning,
+  FoamingClass,
+  JetFloodMethod,
+  MethodOptions,
+  SectionGeometry,
+  TrayType,
+  ValveData,
+} from '../../shared/types/rating.js';
 import { fairFloodCapacityLygerosMagoulas, fairHoleAreaCorrection, kisterHaasFloodCapacity } from './flooding.js';
-import { kleinClosedValveK, kleinEddyLossCoefficient, kleinOpenValveK, orificeCoefficientHughmarkOConnell } from './pressureDrop.js';
+import {
+  kleinClosedValveK,
+  kleinEddyLossCoefficient,
+  kleinOpenValveK,
+  orificeCoefficientHughmarkOConnell,
+} from './pressureDrop.js';
 import { weepPointHoleVelocityEduljee } from './weeping.js';
 import { resolveLimits, type ResolvedLimits } from './limits.js';
 import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
@@ -57,7 +70,12 @@ export interface PreparedSection {
 }
 
 const NO_VALVES: ValveData = Object.freeze({
-  count: 0, orificeDiameter_mm: 0, valveThickness_mm: 0, materialDensity_kg_m3: 0, legFactor: 1, orificeShape: 'flat',
+  count: 0,
+  orificeDiameter_mm: 0,
+  valveThickness_mm: 0,
+  materialDensity_kg_m3: 0,
+  legFactor: 1,
+  orificeShape: 'flat',
 });
 
 export function prepareSection(section: SectionGeometry, methods: MethodOptions | undefined): PreparedSection {
@@ -70,22 +88,39 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
   const colArea = (Math.PI / 4) * section.columnDiameter_m * section.columnDiameter_m;
   const holeAreaRatio = section.holeArea_m2 / section.activeArea_m2;
   const valveTray = section.trayType !== 'sieve';
-  const openAreaRatio = valveTray && section.slotArea_m2 !== undefined ? section.slotArea_m2 / section.activeArea_m2 : holeAreaRatio;
+  const openAreaRatio =
+    valveTray && section.slotArea_m2 !== undefined ? section.slotArea_m2 / section.activeArea_m2 : holeAreaRatio;
   if (valveTray) {
-    w.push(warning(WARNING_CODES.bennettValveTray,
-      "tray pressure drop: the clear liquid height and residual head use Bennett et al. (1983), a sieve-tray correlation, applied here to a valve tray; Perry's 8th ed. rates the liquid on valve trays with an aeration factor (Fig. 14-37), which may give a different head."));
+    w.push(
+      warning(
+        WARNING_CODES.bennettValveTray,
+        "tray pressure drop: the clear liquid height and residual head use Bennett et al. (1983), a sieve-tray correlation, applied here to a valve tray; Perry's 8th ed. rates the liquid on valve trays with an aeration factor (Fig. 14-37), which may give a different head.",
+      ),
+    );
   }
   if (valveTray && section.slotArea_m2 === undefined) {
-    w.push(warning(WARNING_CODES.valveSlotAreaMissing,
-      "valve tray without its open slot area: the fractional open area of Fair's hole-area correction and of Kister & Haas is taken from the orifice area; Perry's 8th ed. defines it with the slot (curtain) area of the valves fully open. Enter the slot area for a rating on that basis."));
+    w.push(
+      warning(
+        WARNING_CODES.valveSlotAreaMissing,
+        "valve tray without its open slot area: the fractional open area of Fair's hole-area correction and of Kister & Haas is taken from the orifice area; Perry's 8th ed. defines it with the slot (curtain) area of the valves fully open. Enter the slot area for a rating on that basis.",
+      ),
+    );
   }
   const tOverD = section.deckThickness_mm / section.holeDiameter_mm;
 
   const fair = fairFloodCapacityLygerosMagoulas.meta;
   checkRange(w, fair, 'traySpacing_mm', ts, undefined);
   checkRange(w, fair, 'holeAreaRatio', openAreaRatio, undefined, 'hole-area correction extrapolated below 0.06');
-  checkRange(w, fair, 'weirHeightOverTraySpacing', section.weirHeight_mm / ts, undefined, 'Fair assumes weir height < 15 % of tray spacing');
-  if (section.trayType === 'sieve') checkRange(w, fair, 'holeDiameter_mm', section.holeDiameter_mm, undefined, 'no hole-size correction applied');
+  checkRange(
+    w,
+    fair,
+    'weirHeightOverTraySpacing',
+    section.weirHeight_mm / ts,
+    undefined,
+    'Fair assumes weir height < 15 % of tray spacing',
+  );
+  if (section.trayType === 'sieve')
+    checkRange(w, fair, 'holeDiameter_mm', section.holeDiameter_mm, undefined, 'no hole-size correction applied');
   if (jetMethod === 'kister-haas') {
     const kh = kisterHaasFloodCapacity.meta;
     checkRange(w, kh, 'traySpacing_mm', ts, undefined);
@@ -93,8 +128,12 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
     checkRange(w, kh, 'fractionalHoleArea', openAreaRatio, undefined);
     checkRange(w, kh, 'weirHeight_mm', section.weirHeight_mm, undefined);
     if (section.trayType !== 'sieve')
-      w.push(warning(WARNING_CODES.kisterHaasValveTray,
-        "Kister & Haas applied to a valve tray: Perry's 8th ed. presents eq. 14-81 for sieve trays; hole diameter and open area are taken from the valve orifices."));
+      w.push(
+        warning(
+          WARNING_CODES.kisterHaasValveTray,
+          "Kister & Haas applied to a valve tray: Perry's 8th ed. presents eq. 14-81 for sieve trays; hole diameter and open area are taken from the valve orifices.",
+        ),
+      );
   }
 
   let orificeCoefficient: number;
@@ -115,7 +154,15 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
     checkRange(w, weepPointHoleVelocityEduljee.meta, 'holeDiameter_mm', section.holeDiameter_mm, undefined);
   } else {
     const shape = section.valves?.orificeShape ?? 'flat';
-    if (shape === 'flat') checkRange(w, kleinOpenValveK.meta, 'deckThickness_mm', section.deckThickness_mm, undefined, 'K held at the nearest table row');
+    if (shape === 'flat')
+      checkRange(
+        w,
+        kleinOpenValveK.meta,
+        'deckThickness_mm',
+        section.deckThickness_mm,
+        undefined,
+        'K held at the nearest table row',
+      );
     dryK = kleinOpenValveK(shape, section.deckThickness_mm);
     orificeCoefficient = Math.sqrt(50.8 / dryK);
     if (section.trayType === 'moving-valve') {
@@ -130,16 +177,26 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
   if (v && section.trayType !== 'sieve') {
     const orifices = v.count * (Math.PI / 4) * (v.orificeDiameter_mm / 1000) ** 2;
     if (Math.abs(orifices / section.holeArea_m2 - 1) > 0.25) {
-      w.push(warning(WARNING_CODES.valveAreaMismatch,
-        `valve count × orifice area (${formatNumber(orifices)} m²) differs from holeArea_m2 (${formatNumber(section.holeArea_m2)} m²) by more than 25 %; holeArea_m2 is used.`));
+      w.push(
+        warning(
+          WARNING_CODES.valveAreaMismatch,
+          `valve count × orifice area (${formatNumber(orifices)} m²) differs from holeArea_m2 (${formatNumber(section.holeArea_m2)} m²) by more than 25 %; holeArea_m2 is used.`,
+        ),
+      );
     }
   }
   if ((foaming === 'high' || foaming === 'very-high') && systemFactor >= 1) {
-    w.push(warning(WARNING_CODES.foamingDerating,
-      `foaming class '${foaming}' with system factor ${systemFactor}: Fair's and Kister & Haas' flood correlations assume low- or non-foaming systems; consider a system factor below 1 (Kister 1992 Table 6.7).`));
+    w.push(
+      warning(
+        WARNING_CODES.foamingDerating,
+        `foaming class '${foaming}' with system factor ${systemFactor}: Fair's and Kister & Haas' flood correlations assume low- or non-foaming systems; consider a system factor below 1 (Kister 1992 Table 6.7).`,
+      ),
+    );
   }
   if (section.downcomerBottomArea_m2 > section.downcomerTopArea_m2 * 1.001) {
-    w.push(warning(WARNING_CODES.downcomerBottomLarger, 'downcomer bottom area exceeds its top area; check the downcomer geometry.'));
+    w.push(
+      warning(WARNING_CODES.downcomerBottomLarger, 'downcomer bottom area exceeds its top area; check the downcomer geometry.'),
+    );
   }
   const passLayout = preparePasses(section);
   passWarnings(w, section, passLayout, limits.passImbalance);
@@ -185,12 +242,21 @@ function passWarnings(w: EngineWarning[], s: SectionGeometry, pp: PreparedPasses
   if (!pp) return;
   const shortest = Math.min(...pp.odd.panels.map((p) => p.flowPathLength));
   if (shortest < MIN_FLOW_PATH_M) {
-    w.push(warning(WARNING_CODES.passFlowPathShort,
-      `shortest flow path ${formatNumber(shortest * 1000)} mm is under about ${MIN_FLOW_PATH_M * 1000} mm (Kister, Distillation Design, 1992, §6.5): consider fewer passes.`));
+    w.push(
+      warning(
+        WARNING_CODES.passFlowPathShort,
+        `shortest flow path ${formatNumber(shortest * 1000)} mm is under about ${MIN_FLOW_PATH_M * 1000} mm (Kister, Distillation Design, 1992, §6.5): consider fewer passes.`,
+      ),
+    );
   }
-  if (pp.imbalance_percent > imbalanceLimit + 1e-9) { // 0.55/0.5 − 1 is 10.000000000000009 % in doubles
-    w.push(warning(WARNING_CODES.passImbalance,
-      `pass L/V imbalance ${formatNumber(pp.imbalance_percent)} % exceeds ${imbalanceLimit} % (vapour shared by bubbling area): the liquid split does not match the pass areas, which costs efficiency and loads one pass early.`));
+  if (pp.imbalance_percent > imbalanceLimit + 1e-9) {
+    // 0.55/0.5 − 1 is 10.000000000000009 % in doubles
+    w.push(
+      warning(
+        WARNING_CODES.passImbalance,
+        `pass L/V imbalance ${formatNumber(pp.imbalance_percent)} % exceeds ${imbalanceLimit} % (vapour shared by bubbling area): the liquid split does not match the pass areas, which costs efficiency and loads one pass early.`,
+      ),
+    );
   }
   const mismatch: string[] = [];
   for (const t of [pp.odd, pp.even]) {
@@ -198,12 +264,18 @@ function passWarnings(w: EngineWarning[], s: SectionGeometry, pp: PreparedPasses
     const weir = t.panels.reduce((a, p) => a + p.weirLength, 0);
     const name = t.outlets === 'side' ? 'trays draining to the side downcomers' : 'the other trays';
     if (Math.abs(area / s.downcomerTopArea_m2 - 1) > 0.1)
-      mismatch.push(`downcomer top area ${formatNumber(area)} m² for ${name} (entered ${formatNumber(s.downcomerTopArea_m2)} m²)`);
+      mismatch.push(
+        `downcomer top area ${formatNumber(area)} m² for ${name} (entered ${formatNumber(s.downcomerTopArea_m2)} m²)`,
+      );
     if (Math.abs(weir / s.outletWeirLength_m - 1) > 0.1)
       mismatch.push(`outlet weir length ${formatNumber(weir)} m for ${name} (entered ${formatNumber(s.outletWeirLength_m)} m)`);
   }
   if (mismatch.length > 0) {
-    w.push(warning(WARNING_CODES.passLayoutMismatch,
-      `the pass layout gives ${mismatch.join('; ')}, more than 10 % from the section totals: per-pass results use the layout, tray totals the entered values.`));
+    w.push(
+      warning(
+        WARNING_CODES.passLayoutMismatch,
+        `the pass layout gives ${mismatch.join('; ')}, more than 10 % from the section totals: per-pass results use the layout, tray totals the entered values.`,
+      ),
+    );
   }
 }

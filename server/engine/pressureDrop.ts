@@ -18,7 +18,8 @@ export const orificeCoefficientHughmarkOConnell = method(
   },
   {
     label: "Hughmark & O'Connell orifice coefficient",
-    source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14, fit of Fig. 14-35 (Liebson, Kelley & Bullington, Pet. Refiner 36(3) 288 (1957)) [from memory]",
+    source:
+      "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14, fit of Fig. 14-35 (Liebson, Kelley & Bullington, Pet. Refiner 36(3) 288 (1957)) [from memory]",
     equation: 'Cv = 0.74 Ah/Aa + exp(0.29 t/dH - 0.56)',
     provenance: 'recalled',
     ranges: { holeAreaRatio: [0.05, 0.2], thicknessOverDiameter: [0.1, 1.2] },
@@ -36,7 +37,12 @@ export const orificeCoefficientHughmarkOConnell = method(
  */
 export const dryTrayHeadOrifice = method(
   'dryTrayHeadOrifice',
-  function dryTrayHeadOrifice(holeVelocity_m_s: number, orificeCoefficient: number, vapourDensity: number, liquidDensity: number): number {
+  function dryTrayHeadOrifice(
+    holeVelocity_m_s: number,
+    orificeCoefficient: number,
+    vapourDensity: number,
+    liquidDensity: number,
+  ): number {
     const r = holeVelocity_m_s / orificeCoefficient;
     return (50.8 * r * r * vapourDensity) / liquidDensity;
   },
@@ -124,7 +130,8 @@ export const dryTrayHeadK = method(
   },
   {
     label: 'Dry head from a loss coefficient (fixed valve as open valve)',
-    source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 form h_d = K rhoV/rhoL U^2 [from memory]; fixed valve = open moving valve [common practice]",
+    source:
+      "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 form h_d = K rhoV/rhoL U^2 [from memory]; fixed valve = open moving valve [common practice]",
     equation: 'h_d = K rhoV/rhoL u_h^2',
     provenance: 'common-practice',
     ranges: {},
@@ -145,7 +152,8 @@ export const kleinEddyLossCoefficient = method(
   },
   {
     label: 'Klein eddy loss coefficient C_vw',
-    source: 'Ludwig, Applied Process Design Vol. 2 3rd ed. p. 208 and Example 8-41 (C_vw = 1.3, printed for a venturi-orifice valve and applied here to rectangular orifices as well), after Klein, Chem. Eng. May 3 1982 p. 81',
+    source:
+      'Ludwig, Applied Process Design Vol. 2 3rd ed. p. 208 and Example 8-41 (C_vw = 1.3, printed for a venturi-orifice valve and applied here to rectangular orifices as well), after Klein, Chem. Eng. May 3 1982 p. 81',
     equation: 'C_vw = 1.3',
     provenance: 'seen',
     ranges: {},
@@ -166,12 +174,19 @@ export const kleinEddyLossCoefficient = method(
  */
 export const kleinBalanceHead = method(
   'kleinBalanceHead',
-  function kleinBalanceHead(legFactor: number, valveThickness_mm: number, metalDensity: number, liquidDensity: number, eddyLossCoefficient: number): number {
+  function kleinBalanceHead(
+    legFactor: number,
+    valveThickness_mm: number,
+    metalDensity: number,
+    liquidDensity: number,
+    eddyLossCoefficient: number,
+  ): number {
     return (eddyLossCoefficient * legFactor * valveThickness_mm * metalDensity) / liquidDensity;
   },
   {
     label: 'Klein partly-open valve dry head',
-    source: 'Klein, Chem. Eng. May 3 1982 p. 81, as in Ludwig, Applied Process Design Vol. 2 3rd ed. pp. 208-210 (with the eddy loss coefficient C_vw)',
+    source:
+      'Klein, Chem. Eng. May 3 1982 p. 81, as in Ludwig, Applied Process Design Vol. 2 3rd ed. pp. 208-210 (with the eddy loss coefficient C_vw)',
     equation: 'h_d = C_vw R_vw t_v rhoM/rhoL',
     provenance: 'derived',
     ranges: {},
@@ -205,7 +220,8 @@ export const kleinClosedBalanceVelocity = method(
   },
   {
     label: 'Klein closed-valve balance point (valves start to open)',
-    source: "Klein, Chem. Eng. May 3 1982 p. 81, as printed in Ludwig, Applied Process Design Vol. 2 3rd ed. Example 8-41; Perry's Chemical Engineers' Handbook 8th ed. eq. (14-104) gives the same balance without C_vw",
+    source:
+      "Klein, Chem. Eng. May 3 1982 p. 81, as printed in Ludwig, Applied Process Design Vol. 2 3rd ed. Example 8-41; Perry's Chemical Engineers' Handbook 8th ed. eq. (14-104) gives the same balance without C_vw",
     equation: 'U_A = [t_v R_vw (C_vw/Kc) (rhoM/rhoV)]^0.5',
     provenance: 'seen',
     ranges: {},
@@ -224,7 +240,8 @@ export const kleinOpenBalanceVelocity = method(
   },
   {
     label: 'Klein open-valve balance point (all valves open)',
-    source: "Klein, Chem. Eng. May 3 1982 p. 81, as printed in Ludwig, Applied Process Design Vol. 2 3rd ed. Example 8-41; Perry's Chemical Engineers' Handbook 8th ed. Sec. 14",
+    source:
+      "Klein, Chem. Eng. May 3 1982 p. 81, as printed in Ludwig, Applied Process Design Vol. 2 3rd ed. Example 8-41; Perry's Chemical Engineers' Handbook 8th ed. Sec. 14",
     equation: 'U_B = U_A (Kc/Ko)^0.5',
     provenance: 'seen',
     ranges: {},
@@ -255,7 +272,8 @@ export const dryTrayHeadKleinValve = method(
   },
   {
     label: 'Klein moving-valve dry pressure drop',
-    source: 'Klein, Chem. Eng. May 3 1982 p. 81; Bolles, CEP 72(9) 43 (1976); Ludwig, Applied Process Design Vol. 2 3rd ed. pp. 208-210, Table 8-23',
+    source:
+      'Klein, Chem. Eng. May 3 1982 p. 81; Bolles, CEP 72(9) 43 (1976); Ludwig, Applied Process Design Vol. 2 3rd ed. pp. 208-210, Table 8-23',
     equation: 'closed Kc rhoV/rhoL U^2; partly open C_vw Rvw tv rhoM/rhoL; open Ko rhoV/rhoL U^2',
     provenance: 'seen',
     ranges: {},
@@ -302,7 +320,8 @@ export const clearLiquidHeightBennett = method(
   },
   {
     label: 'Bennett et al. (1983) clear liquid height',
-    source: 'Bennett, Agrawal & Cook, AIChE J. 29(3) 434 (1983), form as used in Seader & Henley (1998) solutions; a sieve-tray, froth-regime correlation (Kister, Distillation Design 1992 Ch. 6: not applicable to the spray regime)',
+    source:
+      'Bennett, Agrawal & Cook, AIChE J. 29(3) 434 (1983), form as used in Seader & Henley (1998) solutions; a sieve-tray, froth-regime correlation (Kister, Distillation Design 1992 Ch. 6: not applicable to the spray regime)',
     equation: 'h_L = phi_e [h_w + C_l (q/(L_w phi_e))^(2/3)]',
     provenance: 'seen',
     ranges: { transitionOverClearLiquid: [0, 1] },

@@ -1,6 +1,14 @@
 /** Rate every tray of a section and summarise: worst value per check, controlling check, margin, turndown. */
 import { CHECK_NAMES } from '../../shared/types/rating.js';
-import type { CheckName, EngineWarning, RatingRequest, RatingResult, SectionSummary, SectionSummaryEntry, TrayResult } from '../../shared/types/rating.js';
+import type {
+  CheckName,
+  EngineWarning,
+  RatingRequest,
+  RatingResult,
+  SectionSummary,
+  SectionSummaryEntry,
+  TrayResult,
+} from '../../shared/types/rating.js';
 import { prepareSection } from './prepare.js';
 import { rateTrayPrepared } from './rateTray.js';
 import { ENGINE_VERSION } from './version.js';

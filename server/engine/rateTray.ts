@@ -1,13 +1,26 @@
 /** Rate one tray: hydraulics → one CheckResult per check name → controlling check. */
 import { CHECK_NAMES } from '../../shared/types/rating.js';
-import type { CheckName, CheckResult, EngineWarning, MethodOptions, SectionGeometry, TrayLoad, TrayResult } from '../../shared/types/rating.js';
+import type {
+  CheckName,
+  CheckResult,
+  EngineWarning,
+  MethodOptions,
+  SectionGeometry,
+  TrayLoad,
+  TrayResult,
+} from '../../shared/types/rating.js';
 import { prepareSection, type PreparedSection } from './prepare.js';
 import { trayHydraulics } from './hydraulics.js';
 import { makeCheck, notApplicable } from './checks.js';
 import { headToPascal } from './pressureDrop.js';
 import { weirLoadingVolumetric, crestOverWeirFrancis } from './weir.js';
 import { fairEntrainmentOwnFit } from './entrainment.js';
-import { downcomerBackupClear, downcomerInletVelocity, downcomerResidenceTimeApparent, downcomerSealKister } from './downcomer.js';
+import {
+  downcomerBackupClear,
+  downcomerInletVelocity,
+  downcomerResidenceTimeApparent,
+  downcomerSealKister,
+} from './downcomer.js';
 import { WARNING_CODES, formatNumber, warning } from './validity.js';
 import { FLOOD_PERCENT } from '../../shared/verdict.js';
 
@@ -20,8 +33,14 @@ const M_RT = downcomerResidenceTimeApparent.meta.id;
 const M_SEAL = downcomerSealKister.meta.id;
 /** checks that need liquid on the tray: not applicable to a dry tray */
 const LIQUID_SIDE: readonly CheckName[] = [
-  'entrainment', 'weeping', 'weirLoading', 'liquidLoad',
-  'downcomerBackup', 'downcomerInletVelocity', 'downcomerResidenceTime', 'downcomerSeal',
+  'entrainment',
+  'weeping',
+  'weirLoading',
+  'liquidLoad',
+  'downcomerBackup',
+  'downcomerInletVelocity',
+  'downcomerResidenceTime',
+  'downcomerSeal',
 ];
 
 /** Pressure-drop limit [Pa] for a tray: the override, or 10 in (vacuum: 3 in) of its liquid. */
@@ -60,11 +79,22 @@ export function rateTrayPrepared(p: PreparedSection, load: TrayLoad): TrayResult
   else if (flooded) notApplicable(checks.entrainment);
   if (!sealApplies) notApplicable(checks.downcomerSeal);
   if (checks.downcomerSeal.status === 'over') {
-    warnings.push(warning(WARNING_CODES.downcomerUnsealed,
-      `downcomer clearance ${formatNumber(p.clearance_mm)} mm exceeds the weir height and the clear liquid seals it by only ${formatNumber(d.downcomerSeal_mm!)} mm (Kister: at least ${formatNumber(lim.downcomerSeal)} mm); vapour may enter the downcomer.`, load.tray));
+    warnings.push(
+      warning(
+        WARNING_CODES.downcomerUnsealed,
+        `downcomer clearance ${formatNumber(p.clearance_mm)} mm exceeds the weir height and the clear liquid seals it by only ${formatNumber(d.downcomerSeal_mm!)} mm (Kister: at least ${formatNumber(lim.downcomerSeal)} mm); vapour may enter the downcomer.`,
+        load.tray,
+      ),
+    );
   }
   if (checks.weirLoading.status === 'over') {
-    warnings.push(warning(WARNING_CODES.weirLoadingHigh, 'weir loading above the maximum: consider more passes or swept-back weirs (Kister 1992 §6.5).', load.tray));
+    warnings.push(
+      warning(
+        WARNING_CODES.weirLoadingHigh,
+        'weir loading above the maximum: consider more passes or swept-back weirs (Kister 1992 §6.5).',
+        load.tray,
+      ),
+    );
   }
   return { tray: load.tray, checks, details: d, controllingCheck: controllingCheckOf(checks, flooded), warnings };
 }

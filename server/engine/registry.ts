@@ -45,13 +45,20 @@ const id = (m: AnyMethod): string => m.meta.id;
  */
 export const METHOD_USES: Readonly<Record<string, readonly string[]>> = Object.freeze({
   [id(flooding.fairFloodCapacityLygerosMagoulas)]: [
-    id(flooding.fairHoleAreaCorrection), id(flooding.fairSurfaceTensionCorrection), id(flooding.floodVelocitySoudersBrown),
+    id(flooding.fairHoleAreaCorrection),
+    id(flooding.fairSurfaceTensionCorrection),
+    id(flooding.floodVelocitySoudersBrown),
   ],
-  [id(flooding.kisterHaasFloodCapacity)]: [id(flooding.transitionClearLiquidHeightKisterHaas), id(flooding.floodVelocitySoudersBrown)],
+  [id(flooding.kisterHaasFloodCapacity)]: [
+    id(flooding.transitionClearLiquidHeightKisterHaas),
+    id(flooding.floodVelocitySoudersBrown),
+  ],
   [id(entrainment.fairEntrainmentOwnFit)]: [id(entrainment.entrainedLiquidRate)],
   [id(weeping.weepPointHoleVelocityEduljee)]: [id(weeping.eduljeeK2OwnFit)],
   [id(pressureDrop.dryTrayHeadOrifice)]: [
-    id(pressureDrop.orificeCoefficientHughmarkOConnell), id(pressureDrop.clearLiquidHeightBennett), id(pressureDrop.residualHeadBennett),
+    id(pressureDrop.orificeCoefficientHughmarkOConnell),
+    id(pressureDrop.clearLiquidHeightBennett),
+    id(pressureDrop.residualHeadBennett),
   ],
   [id(downcomer.downcomerBackupClear)]: [id(downcomer.apronHeadLoss)],
 });

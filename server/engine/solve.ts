@@ -40,8 +40,12 @@ export function brent(f: (x: number) => number, a: number, b: number, options: S
       e = d;
     }
     if (Math.abs(fc) < Math.abs(fb)) {
-      a = b; b = c; c = a;
-      fa = fb; fb = fc; fc = fa;
+      a = b;
+      b = c;
+      c = a;
+      fa = fb;
+      fb = fc;
+      fc = fa;
     }
     const tol = options.xTol ?? 2e-16 * Math.abs(b) + 1e-10 * Math.abs(b) + 1e-12;
     const m = 0.5 * (c - b);

@@ -54,24 +54,44 @@ export function physicsErrors(req: RatingRequest): FieldError[] {
   const columnArea = (Math.PI / 4) * s.columnDiameter_m ** 2;
   const used = s.activeArea_m2 + s.downcomerTopArea_m2 + s.downcomerBottomArea_m2;
   if (used > columnArea * 1.005) {
-    add('/section/activeArea_m2',
-      `active area + downcomer top and bottom areas (${used.toPrecision(4)} m²) do not fit in the column cross-section (${columnArea.toPrecision(4)} m² for ${s.columnDiameter_m} m diameter)`);
+    add(
+      '/section/activeArea_m2',
+      `active area + downcomer top and bottom areas (${used.toPrecision(4)} m²) do not fit in the column cross-section (${columnArea.toPrecision(4)} m² for ${s.columnDiameter_m} m diameter)`,
+    );
   }
-  if (s.holeArea_m2 >= s.activeArea_m2) add('/section/holeArea_m2', `hole area (${s.holeArea_m2} m²) must be smaller than the active area (${s.activeArea_m2} m²)`);
-  if (s.weirHeight_mm >= s.traySpacing_mm) add('/section/weirHeight_mm', `weir height (${s.weirHeight_mm} mm) must be below the tray spacing (${s.traySpacing_mm} mm)`);
-  if (s.downcomerClearance_mm >= s.traySpacing_mm) add('/section/downcomerClearance_mm', `downcomer clearance (${s.downcomerClearance_mm} mm) must be below the tray spacing (${s.traySpacing_mm} mm)`);
+  if (s.holeArea_m2 >= s.activeArea_m2)
+    add('/section/holeArea_m2', `hole area (${s.holeArea_m2} m²) must be smaller than the active area (${s.activeArea_m2} m²)`);
+  if (s.weirHeight_mm >= s.traySpacing_mm)
+    add('/section/weirHeight_mm', `weir height (${s.weirHeight_mm} mm) must be below the tray spacing (${s.traySpacing_mm} mm)`);
+  if (s.downcomerClearance_mm >= s.traySpacing_mm)
+    add(
+      '/section/downcomerClearance_mm',
+      `downcomer clearance (${s.downcomerClearance_mm} mm) must be below the tray spacing (${s.traySpacing_mm} mm)`,
+    );
   if (s.outletWeirLength_m > s.passes * s.columnDiameter_m * 1.001) {
-    add('/section/outletWeirLength_m', `outlet weir length (${s.outletWeirLength_m} m) exceeds ${s.passes} pass(es) × column diameter (${s.columnDiameter_m} m)`);
+    add(
+      '/section/outletWeirLength_m',
+      `outlet weir length (${s.outletWeirLength_m} m) exceeds ${s.passes} pass(es) × column diameter (${s.columnDiameter_m} m)`,
+    );
   }
   passLayoutErrors(s, add);
-  if (s.slotArea_m2 !== undefined && s.trayType === 'sieve') add('/section/slotArea_m2', 'applies to valve trays only (a sieve tray\'s open area is its hole area)');
-  if (s.slotArea_m2 !== undefined && s.slotArea_m2 >= s.activeArea_m2) add('/section/slotArea_m2', `slot area (${s.slotArea_m2} m²) must be smaller than the active area (${s.activeArea_m2} m²)`);
-  if (s.trayType === 'moving-valve' && !s.valves) add('/section/valves', 'is required for moving-valve trays (count, orifice diameter, valve thickness, material density, leg factor, orifice shape)');
+  if (s.slotArea_m2 !== undefined && s.trayType === 'sieve')
+    add('/section/slotArea_m2', "applies to valve trays only (a sieve tray's open area is its hole area)");
+  if (s.slotArea_m2 !== undefined && s.slotArea_m2 >= s.activeArea_m2)
+    add('/section/slotArea_m2', `slot area (${s.slotArea_m2} m²) must be smaller than the active area (${s.activeArea_m2} m²)`);
+  if (s.trayType === 'moving-valve' && !s.valves)
+    add(
+      '/section/valves',
+      'is required for moving-valve trays (count, orifice diameter, valve thickness, material density, leg factor, orifice shape)',
+    );
   const seen = new Map<number, number>();
   req.trays.forEach((t, i) => {
     const p = `/trays/${i}`;
     if (!(t.vapourDensity_kg_m3 < t.liquidDensity_kg_m3)) {
-      add(`${p}/vapourDensity_kg_m3`, `vapour density (${t.vapourDensity_kg_m3} kg/m³) must be below the liquid density (${t.liquidDensity_kg_m3} kg/m³)`);
+      add(
+        `${p}/vapourDensity_kg_m3`,
+        `vapour density (${t.vapourDensity_kg_m3} kg/m³) must be below the liquid density (${t.liquidDensity_kg_m3} kg/m³)`,
+      );
     }
     const first = seen.get(t.tray);
     if (first !== undefined) add(`${p}/tray`, `tray number ${t.tray} appears twice (also at trays[${first}])`);
@@ -93,8 +113,10 @@ function passLayoutErrors(s: SectionGeometry, add: (path: string, message: strin
   const edge = r - l.sideDowncomerWidth_mm;
   const half = l.centreDowncomerWidth_mm / 2;
   if (edge <= half) {
-    add(`${at}/centreDowncomerWidth_mm`,
-      `side downcomers (${l.sideDowncomerWidth_mm} mm each) and the centre downcomer (${l.centreDowncomerWidth_mm} mm) leave no tray deck in a ${s.columnDiameter_m} m column`);
+    add(
+      `${at}/centreDowncomerWidth_mm`,
+      `side downcomers (${l.sideDowncomerWidth_mm} mm each) and the centre downcomer (${l.centreDowncomerWidth_mm} mm) leave no tray deck in a ${s.columnDiameter_m} m column`,
+    );
   }
   if (s.passes === 4) {
     const w = l.offCentreDowncomerWidth_mm;
@@ -102,8 +124,10 @@ function passLayoutErrors(s: SectionGeometry, add: (path: string, message: strin
     if (w === undefined) add(`${at}/offCentreDowncomerWidth_mm`, 'is required for four-pass trays');
     if (x === undefined) add(`${at}/offCentreDowncomerOffset_mm`, 'is required for four-pass trays');
     if (w !== undefined && x !== undefined && !(x - w / 2 > half && x + w / 2 < edge)) {
-      add(`${at}/offCentreDowncomerOffset_mm`,
-        `off-centre downcomers (${w} mm wide at ${x} mm from the axis) must lie between the centre downcomer (edge at ${half} mm) and the side downcomer (edge at ${formatMm(edge)} mm), with deck on both sides`);
+      add(
+        `${at}/offCentreDowncomerOffset_mm`,
+        `off-centre downcomers (${w} mm wide at ${x} mm from the axis) must lie between the centre downcomer (edge at ${half} mm) and the side downcomer (edge at ${formatMm(edge)} mm), with deck on both sides`,
+      );
     }
   } else {
     if (l.offCentreDowncomerWidth_mm !== undefined) add(`${at}/offCentreDowncomerWidth_mm`, 'applies to four-pass trays only');
@@ -113,7 +137,8 @@ function passLayoutErrors(s: SectionGeometry, add: (path: string, message: strin
   if (split) {
     const sum = split.reduce((a, b) => a + b, 0);
     if (split.length !== s.passes) add(`${at}/liquidSplit`, `needs one fraction per pass (${s.passes}), got ${split.length}`);
-    else if (Math.abs(sum - 1) > 0.001) add(`${at}/liquidSplit`, `fractions must add up to 1 (they add up to ${Number(sum.toPrecision(4))})`);
+    else if (Math.abs(sum - 1) > 0.001)
+      add(`${at}/liquidSplit`, `fractions must add up to 1 (they add up to ${Number(sum.toPrecision(4))})`);
   }
 }
 

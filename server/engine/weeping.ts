@@ -26,7 +26,8 @@ export const eduljeeK2OwnFit = method(
   },
   {
     label: "Eduljee K2 (Frothline's own fit of Sinnott Fig. 11.30)",
-    source: "own fit; chart Sinnott, Coulson & Richardson's Chemical Engineering Vol. 6 4th ed. Fig. 11.30 after Eduljee, Brit. Chem. Eng. 4 320 (1959); points from Ex. 11.11 [from memory] and a student report [seen]",
+    source:
+      "own fit; chart Sinnott, Coulson & Richardson's Chemical Engineering Vol. 6 4th ed. Fig. 11.30 after Eduljee, Brit. Chem. Eng. 4 320 (1959); points from Ex. 11.11 [from memory] and a student report [seen]",
     equation: 'K2 = 31.40 - 4.39 exp(-(hw + how)/38.06)',
     provenance: 'own-fit',
     ranges: { headAboveDeck_mm: [0, 120] },
@@ -49,7 +50,8 @@ export const weepPointHoleVelocityEduljee = method(
   },
   {
     label: 'Eduljee weep point (Sinnott form)',
-    source: "Sinnott, Coulson & Richardson's Chemical Engineering Vol. 6 4th ed. eq. 11.84 [from memory]; Eduljee, Brit. Chem. Eng. 4 320 (1959)",
+    source:
+      "Sinnott, Coulson & Richardson's Chemical Engineering Vol. 6 4th ed. eq. 11.84 [from memory]; Eduljee, Brit. Chem. Eng. 4 320 (1959)",
     equation: 'u_h,min = [K2 - 0.90 (25.4 - d_h)]/rhoV^0.5',
     provenance: 'recalled',
     ranges: { holeDiameter_mm: [2.5, 12.7] },
@@ -104,7 +106,8 @@ export const weepPointHoleVelocityFair = method(
   },
   {
     label: 'Fair weep criterion (h_d + h_sigma = h_L)',
-    source: 'Seader & Henley, Separation Process Principles (1998) solutions, simplified Fair criterion; Kister, Distillation Design (1992) Fig. 6.18',
+    source:
+      'Seader & Henley, Separation Process Principles (1998) solutions, simplified Fair criterion; Kister, Distillation Design (1992) Fig. 6.18',
     equation: 'h_d(u) + h_sigma = h_L(u)',
     provenance: 'seen',
     ranges: {},

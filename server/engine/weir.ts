@@ -18,7 +18,8 @@ export const crestOverWeirFrancis = method(
   },
   {
     label: 'Francis weir crest',
-    source: "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 (Francis weir, F_w = 1) [from memory]; Holland, Fundamentals of Multicomponent Distillation Ch. 12",
+    source:
+      "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 (Francis weir, F_w = 1) [from memory]; Holland, Fundamentals of Multicomponent Distillation Ch. 12",
     equation: 'h_ow = 664 Fw (q/Lw)^(2/3)',
     provenance: 'recalled',
     ranges: {},

@@ -47,7 +47,11 @@ interface TokenClaims {
 }
 
 /** Sets the session cookie: valid for SESSION_MINUTES (sliding), never past the session's absolute end. */
-export function issueSession(res: Response, user: { id: string; role: Role }, session: { sessionId: string; endsAt: number }): void {
+export function issueSession(
+  res: Response,
+  user: { id: string; role: Role },
+  session: { sessionId: string; endsAt: number },
+): void {
   const nowSec = Math.floor(Date.now() / 1000);
   const life = Math.min(config.sessionMinutes * 60, session.endsAt - nowSec);
   if (life <= 0) return;
@@ -78,7 +82,8 @@ export function readSession(req: Request): SessionClaims | null {
   const nowSec = Math.floor(Date.now() / 1000);
   const hit = verified.get(token);
   if (hit) {
-    if (nowSec < hit.expiresAt) return { userId: hit.userId, sessionId: hit.sessionId, issuedAt: hit.issuedAt, endsAt: hit.endsAt };
+    if (nowSec < hit.expiresAt)
+      return { userId: hit.userId, sessionId: hit.sessionId, issuedAt: hit.issuedAt, endsAt: hit.endsAt };
     verified.delete(token);
     return null;
   }
@@ -100,7 +105,12 @@ export function readSession(req: Request): SessionClaims | null {
  * working is not signed out mid-edit; an idle session still ends after SESSION_MINUTES, and every session
  * ends SESSION_MAX_HOURS after sign-in.
  */
-export function renewSessionIfOld(res: Response, user: { id: string; role: Role }, session: SessionClaims, nowMs = Date.now()): void {
+export function renewSessionIfOld(
+  res: Response,
+  user: { id: string; role: Role },
+  session: SessionClaims,
+  nowMs = Date.now(),
+): void {
   if (nowMs / 1000 - session.issuedAt > (config.sessionMinutes * 60) / 2) issueSession(res, user, session);
 }
 

@@ -43,7 +43,16 @@ const PG_UNAVAILABLE = new Set(['57P01', '57P02', '57P03', '53300', '57014']);
 const PG_CONNECTION_MESSAGES =
   /Connection terminated|timeout exceeded when trying to connect|Cannot use a pool after calling end|Client has encountered a connection error|Client was closed and is not queryable|Connection is not established|Driver not Connected/i;
 // socket errors: the database's, or file storage's (both are services a request depends on)
-const SOCKET_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'ENOTFOUND', 'EAI_AGAIN', 'EHOSTUNREACH', 'ENETUNREACH']);
+const SOCKET_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'ENOTFOUND',
+  'EAI_AGAIN',
+  'EHOSTUNREACH',
+  'ENETUNREACH',
+]);
 
 /** The error and the errors it wraps (TypeORM's driverError, cause, AggregateError's errors). */
 function chain(err: unknown): PgLike[] {
@@ -64,7 +73,10 @@ const codeOf = (e: PgLike): string => (typeof e.code === 'string' ? e.code : '')
 
 export function isDatabaseOutage(err: unknown): boolean {
   return chain(err).some(
-    (e) => PG_UNAVAILABLE.has(codeOf(e)) || codeOf(e).startsWith('08') || (typeof e.message === 'string' && PG_CONNECTION_MESSAGES.test(e.message)),
+    (e) =>
+      PG_UNAVAILABLE.has(codeOf(e)) ||
+      codeOf(e).startsWith('08') ||
+      (typeof e.message === 'string' && PG_CONNECTION_MESSAGES.test(e.message)),
   );
 }
 
@@ -75,7 +87,11 @@ export function databaseFault(err: unknown): HttpFault | null {
   if (isDatabaseOutage(err))
     return { status: 503, error: 'The database is unreachable; try again in a few seconds', retryAfter: DB_RETRY_AFTER_SECONDS };
   if (isSocketFailure(err))
-    return { status: 503, error: 'The database or the file storage is unreachable; try again in a few seconds', retryAfter: DB_RETRY_AFTER_SECONDS };
+    return {
+      status: 503,
+      error: 'The database or the file storage is unreachable; try again in a few seconds',
+      retryAfter: DB_RETRY_AFTER_SECONDS,
+    };
   const pg = chain(err).find((e) => typeof e.code === 'string' && /^[0-9A-Z]{5}$/.test(e.code));
   if (!pg) return null;
   const code = pg.code as string;

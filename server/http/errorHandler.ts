@@ -30,14 +30,29 @@ function libraryFault(err: unknown): HttpFault | null {
     case 'entity.too.large':
       return { status: 413, error: 'Upload or body too large' };
     case 'charset.unsupported':
-      return { status: 415, error: 'Unsupported charset', details: [{ path: 'Content-Type', message: `charset "${e.charset ?? ''}" is not supported; send UTF-8` }] };
+      return {
+        status: 415,
+        error: 'Unsupported charset',
+        details: [{ path: 'Content-Type', message: `charset "${e.charset ?? ''}" is not supported; send UTF-8` }],
+      };
     case 'encoding.unsupported':
-      return { status: 415, error: 'Unsupported content encoding', details: [{ path: 'Content-Encoding', message: `"${e.encoding ?? ''}" is not supported; send gzip, deflate, br or none` }] };
+      return {
+        status: 415,
+        error: 'Unsupported content encoding',
+        details: [
+          { path: 'Content-Encoding', message: `"${e.encoding ?? ''}" is not supported; send gzip, deflate, br or none` },
+        ],
+      };
   }
   // zlib's errors (Z_DATA_ERROR…, brotli's ERR_…) while inflating a gzip/deflate/br body
   if (typeof e.code === 'string' && /^(Z_|ERR__?ERROR)/.test(e.code))
-    return { status: 400, error: 'Body could not be decompressed', details: [{ path: 'Content-Encoding', message: `the body is not valid for its content encoding (${e.message ?? e.code})` }] };
-  if (/decode param/i.test(e.message ?? '')) return { status: 400, error: 'Malformed address', details: [{ path: '(url)', message: 'has invalid percent-encoding' }] };
+    return {
+      status: 400,
+      error: 'Body could not be decompressed',
+      details: [{ path: 'Content-Encoding', message: `the body is not valid for its content encoding (${e.message ?? e.code})` }],
+    };
+  if (/decode param/i.test(e.message ?? ''))
+    return { status: 400, error: 'Malformed address', details: [{ path: '(url)', message: 'has invalid percent-encoding' }] };
   const message = e.expose !== false && e.message ? e.message : 'Bad request';
   return { status, error: message };
 }

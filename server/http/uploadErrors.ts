@@ -31,6 +31,10 @@ export function uploadFault(err: unknown): HttpFault | null {
   }
   const message = err instanceof Error ? err.message : '';
   if (MALFORMED.test(message))
-    return { status: 400, error: 'Malformed multipart upload', details: [{ path: '(form)', message: `${message}: send multipart/form-data with its boundary` }] };
+    return {
+      status: 400,
+      error: 'Malformed multipart upload',
+      details: [{ path: '(form)', message: `${message}: send multipart/form-data with its boundary` }],
+    };
   return null;
 }

@@ -28,9 +28,13 @@ function configure(a: Ajv): Ajv {
 }
 
 // strictNumbers refuses NaN and Infinity where a number is expected (strict: false would let them through)
-export const ajv = configure(new Ajv({ allErrors: true, useDefaults: true, coerceTypes: false, strict: false, strictNumbers: true }));
+export const ajv = configure(
+  new Ajv({ allErrors: true, useDefaults: true, coerceTypes: false, strict: false, strictNumbers: true }),
+);
 /** A separate instance for query strings, which arrive as text. */
-export const queryAjv = configure(new Ajv({ allErrors: true, useDefaults: true, coerceTypes: true, strict: false, strictNumbers: true }));
+export const queryAjv = configure(
+  new Ajv({ allErrors: true, useDefaults: true, coerceTypes: true, strict: false, strictNumbers: true }),
+);
 
 const cache = new WeakMap<object, ValidateFunction>();
 const queryCache = new WeakMap<object, ValidateFunction>();
@@ -39,10 +43,13 @@ export function ajvDetails(errors: ErrorObject[] | null | undefined, root = ''):
   return (errors ?? []).map((e) => {
     let p = `${root}${e.instancePath}`;
     if (e.keyword === 'required') p = `${p}/${(e.params as { missingProperty: string }).missingProperty}`;
-    if (e.keyword === 'additionalProperties')
-      p = `${p}/${(e.params as { additionalProperty: string }).additionalProperty}`;
+    if (e.keyword === 'additionalProperties') p = `${p}/${(e.params as { additionalProperty: string }).additionalProperty}`;
     const message =
-      e.keyword === 'additionalProperties' ? 'is not an allowed field' : e.keyword === 'required' ? 'is required' : (e.message ?? 'is invalid');
+      e.keyword === 'additionalProperties'
+        ? 'is not an allowed field'
+        : e.keyword === 'required'
+          ? 'is required'
+          : (e.message ?? 'is invalid');
     return { path: p.replace(/^\//, '').replace(/\//g, '.') || '(root)', message };
   });
 }

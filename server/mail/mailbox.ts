@@ -45,7 +45,10 @@ export async function listOutbox(ds: DataSource, limit = 200): Promise<OutboxLis
        FROM mail_outbox ORDER BY (status = 'failed') DESC, (status = 'pending') DESC, id DESC LIMIT $1`,
     [limit],
   )) as OutboxRow[];
-  const c = (await ds.query(`SELECT status, count(*)::int AS n FROM mail_outbox GROUP BY status`)) as { status: string; n: number }[];
+  const c = (await ds.query(`SELECT status, count(*)::int AS n FROM mail_outbox GROUP BY status`)) as {
+    status: string;
+    n: number;
+  }[];
   const counts = { pending: 0, sent: 0, failed: 0 };
   for (const r of c) if (r.status in counts) counts[r.status as keyof typeof counts] = r.n;
   return {

@@ -14,7 +14,8 @@ export interface Notice {
 }
 
 /** The body as sent: the text, then the address of the item it is about. */
-export const noticeBody = (n: Pick<Notice, 'text' | 'link'>): string => (n.link ? `${n.text}\n\nOpen it in Frothline: ${config.appUrl}${n.link}` : n.text);
+export const noticeBody = (n: Pick<Notice, 'text' | 'link'>): string =>
+  n.link ? `${n.text}\n\nOpen it in Frothline: ${config.appUrl}${n.link}` : n.text;
 
 /**
  * Queue an e-mail notice inside the caller's transaction: the notice is stored with the action that
@@ -56,7 +57,11 @@ export async function reviewerEmails(em: EntityManager, columnId: string): Promi
  */
 export async function userEmail(em: EntityManager, userId: string | null | undefined, columnId?: string): Promise<string | null> {
   if (!userId) return null;
-  const rows = (await em.query(`SELECT id, role, email FROM users WHERE id = $1 AND active`, [userId])) as { id: string; role: Role; email: string }[];
+  const rows = (await em.query(`SELECT id, role, email FROM users WHERE id = $1 AND active`, [userId])) as {
+    id: string;
+    role: Role;
+    email: string;
+  }[];
   const u = rows[0];
   if (!u || (columnId && !(await canSeeColumn(em, u, columnId)))) return null;
   return u.email;

@@ -65,7 +65,10 @@ export async function deliverPending(
           text: row.body,
           headers: { 'X-Frothline-Kind': row.kind },
         });
-        await em.query(`UPDATE mail_outbox SET status = 'sent', sent_at = now(), attempts = attempts + 1, last_error = NULL WHERE id = $1`, [row.id]);
+        await em.query(
+          `UPDATE mail_outbox SET status = 'sent', sent_at = now(), attempts = attempts + 1, last_error = NULL WHERE id = $1`,
+          [row.id],
+        );
         sent++;
       } catch (err) {
         const attempts = row.attempts + 1;

@@ -21,7 +21,10 @@ const signInLimiter = rateLimit({
 });
 
 /** Per account, whatever the address: guessing one user's password from many addresses is slowed too. */
-const accountKey = (req: Request): string => `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').trim().toLowerCase()}`;
+const accountKey = (req: Request): string =>
+  `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '')
+    .trim()
+    .toLowerCase()}`;
 const signInAccountLimiter = rateLimit({
   ...failures,
   limit: () => config.loginAccountLimit,
@@ -89,7 +92,8 @@ export const authRoutes = defineRoutes([
       try {
         return { user: await changeOwnPassword(ds, user.id, (session as SessionClaims).sessionId, body as ChangePasswordBody) };
       } catch (err) {
-        if (err instanceof ValidationError && err.details?.some((d) => d.path === 'currentPassword')) res.locals.wrongCurrentPassword = true;
+        if (err instanceof ValidationError && err.details?.some((d) => d.path === 'currentPassword'))
+          res.locals.wrongCurrentPassword = true;
         throw err;
       }
     },

@@ -14,4 +14,18 @@ import { studyRoutes } from './studies.js';
 import { userRoutes } from './users.js';
 
 /** Every API route. The role test walks this list, so a route that is not here does not exist. */
-export const allRoutes: RouteDef[] = [...healthRoutes, ...authRoutes, ...userRoutes, ...columnRoutes, ...sectionRoutes, ...loadRoutes, ...importRoutes, ...runRoutes, ...mailRoutes, ...methodRoutes, ...studyRoutes, ...inspectionRoutes, ...photoRoutes];
+export const allRoutes: RouteDef[] = [
+  ...healthRoutes,
+  ...authRoutes,
+  ...userRoutes,
+  ...columnRoutes,
+  ...sectionRoutes,
+  ...loadRoutes,
+  ...importRoutes,
+  ...runRoutes,
+  ...mailRoutes,
+  ...methodRoutes,
+  ...studyRoutes,
+  ...inspectionRoutes,
+  ...photoRoutes,
+];

@@ -36,7 +36,9 @@ export const inspectionRoutes = defineRoutes([
     access: 'read',
     summary: 'Inspections of the columns the user may see (optionally of one column)',
     query: inspectionListQuery,
-    handler: async ({ ds, user, query }) => ({ items: await listInspections(ds, user, (query as { columnId?: string }).columnId) }),
+    handler: async ({ ds, user, query }) => ({
+      items: await listInspections(ds, user, (query as { columnId?: string }).columnId),
+    }),
   },
   {
     method: 'post',
@@ -111,7 +113,8 @@ export const inspectionRoutes = defineRoutes([
     method: 'post',
     path: '/inspections/:id/sign/engineer',
     access: 'read',
-    summary: "Engineer countersignature (the column's engineer, else a process engineer or internals specialist with site access)",
+    summary:
+      "Engineer countersignature (the column's engineer, else a process engineer or internals specialist with site access)",
     params: uuidParams,
     body: signBody,
     handler: async ({ ds, user, params, body }) => signAsEngineer(ds, user, (params as Id).id, (body as T.SignBody).version),

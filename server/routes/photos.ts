@@ -9,13 +9,17 @@ export const photoRoutes = defineRoutes([
     method: 'post',
     path: '/inspections/:id/photos',
     access: 'inspections.record',
-    summary: 'Upload a photo (multipart field "photo": JPEG, PNG or WebP, checked by content; fields tray, pass, finding, caption)',
+    summary:
+      'Upload a photo (multipart field "photo": JPEG, PNG or WebP, checked by content; fields tray, pass, finding, caption)',
     params: uuidParams,
     body: photoFieldsBody,
     before: [photoUpload()],
     status: 201,
     handler: async ({ ds, user, params, req }) =>
-      uploadPhoto(ds, user, (params as { id: string }).id, { buffer: req.file!.buffer, fields: (req.body ?? {}) as Record<string, string> }),
+      uploadPhoto(ds, user, (params as { id: string }).id, {
+        buffer: req.file!.buffer,
+        fields: (req.body ?? {}) as Record<string, string>,
+      }),
   },
   {
     method: 'get',

@@ -34,7 +34,11 @@ export const runRoutes = defineRoutes([
     summary: 'Rating runs the user may see, newest first (filter by columnId, status; paged)',
     query: runListQuery,
     handler: async ({ ds, user, query }) =>
-      listRuns(ds, user, query as { page: number; pageSize: number; columnId?: string; status?: ReviewStatus; inspection: boolean }),
+      listRuns(
+        ds,
+        user,
+        query as { page: number; pageSize: number; columnId?: string; status?: ReviewStatus; inspection: boolean },
+      ),
   },
   {
     method: 'post',

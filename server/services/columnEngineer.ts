@@ -32,7 +32,11 @@ export async function engineerProblem(em: EntityManager, userId: string, siteId:
 }
 
 /** 400 naming engineerId when the user cannot be the column's engineer; null (no engineer) is always allowed. */
-export async function assertColumnEngineer(em: EntityManager, engineerId: string | null | undefined, siteId: string): Promise<void> {
+export async function assertColumnEngineer(
+  em: EntityManager,
+  engineerId: string | null | undefined,
+  siteId: string,
+): Promise<void> {
   if (!engineerId) return;
   const problem = await engineerProblem(em, engineerId, siteId);
   if (problem) throw new ValidationError('This user cannot be the column’s engineer', [{ path: 'engineerId', message: problem }]);

@@ -61,7 +61,9 @@ export async function exportRun(ds: DataSource, user: SessionUser, id: string, f
     ...CHECK_NAMES.flatMap((c) => {
       const k = t.checks[c];
       if (!k) return [null, null, null, null];
-      return k.status === 'na' ? [null, null, null, STATUS_LABELS.na] : [k.value, k.limit, k.percentOfLimit, STATUS_LABELS[k.status]];
+      return k.status === 'na'
+        ? [null, null, null, STATUS_LABELS.na]
+        : [k.value, k.limit, k.percentOfLimit, STATUS_LABELS[k.status]];
     }),
   ]);
   const notes = [

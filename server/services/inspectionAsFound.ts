@@ -28,7 +28,10 @@ interface TrayState {
 }
 
 /** Per tray: mean of measuring points and of passes; blocked % averaged over passes; missing + stuck valves summed over passes. */
-export function trayStates(records: Pick<InspectionTray, 'tray' | 'findings' | 'asFound' | 'asLeft'>[], state: 'asFound' | 'asLeft'): TrayState[] {
+export function trayStates(
+  records: Pick<InspectionTray, 'tray' | 'findings' | 'asFound' | 'asLeft'>[],
+  state: 'asFound' | 'asLeft',
+): TrayState[] {
   const byTray = new Map<number, typeof records>();
   for (const r of records) byTray.set(r.tray, [...(byTray.get(r.tray) ?? []), r]);
   return [...byTray.entries()].map(([tray, rs]) => {
@@ -50,16 +53,43 @@ export function trayStates(records: Pick<InspectionTray, 'tray' | 'findings' | '
  * by the missing or stuck valves, and the hole area in proportion (the issue's rule: missing valves count as
  * lost open area; a bare orifice left by a missing valve really passes vapour and weeps — a screening simplification).
  */
-export function asFoundSectionGeometry(design: SectionGeometry, trays: TrayState[], combine: 'average' | 'worst'): { geometry: SectionGeometry; blocked: number } {
+export function asFoundSectionGeometry(
+  design: SectionGeometry,
+  trays: TrayState[],
+  combine: 'average' | 'worst',
+): { geometry: SectionGeometry; blocked: number } {
   const pick = (xs: (number | null)[], worst: (a: number[]) => number): number | null => {
     const v = xs.filter((x): x is number => x !== null);
     return v.length ? (combine === 'worst' ? worst(v) : (mean(v) as number)) : null;
   };
-  const weir = pick(trays.map((t) => t.weir), (v) => Math.max(...v)) ?? design.weirHeight_mm;
-  const clearance = pick(trays.map((t) => t.clearance), (v) => Math.min(...v)) ?? design.downcomerClearance_mm;
-  const blocked = Math.min(MAX_BLOCKED_PERCENT, pick(trays.map((t) => t.blocked), (v) => Math.max(...v)) ?? 0);
-  const lost = pick(trays.map((t) => t.valvesLost), (v) => Math.max(...v)) ?? 0;
-  const g: SectionGeometry = { ...design, weirHeight_mm: weir, downcomerClearance_mm: clearance, holeArea_m2: design.holeArea_m2 * (1 - blocked / 100) };
+  const weir =
+    pick(
+      trays.map((t) => t.weir),
+      (v) => Math.max(...v),
+    ) ?? design.weirHeight_mm;
+  const clearance =
+    pick(
+      trays.map((t) => t.clearance),
+      (v) => Math.min(...v),
+    ) ?? design.downcomerClearance_mm;
+  const blocked = Math.min(
+    MAX_BLOCKED_PERCENT,
+    pick(
+      trays.map((t) => t.blocked),
+      (v) => Math.max(...v),
+    ) ?? 0,
+  );
+  const lost =
+    pick(
+      trays.map((t) => t.valvesLost),
+      (v) => Math.max(...v),
+    ) ?? 0;
+  const g: SectionGeometry = {
+    ...design,
+    weirHeight_mm: weir,
+    downcomerClearance_mm: clearance,
+    holeArea_m2: design.holeArea_m2 * (1 - blocked / 100),
+  };
   if (design.valves) {
     const count = Math.max(1, Math.round(design.valves.count * (1 - blocked / 100) - lost));
     g.valves = { ...design.valves, count };
@@ -83,19 +113,35 @@ export async function rateAsFound(ds: DataSource, user: SessionUser, id: string,
       const { geometry, blocked } = asFoundSectionGeometry(s.geometry, inSection, body.combine);
       override[s.id] = geometry;
       info[s.id] = {
-        weirHeight_mm: geometry.weirHeight_mm, downcomerClearance_mm: geometry.downcomerClearance_mm, holeArea_m2: geometry.holeArea_m2,
-        valveCount: geometry.valves?.count ?? null, blockedPercent: blocked, trays: inSection.map((t) => t.tray),
+        weirHeight_mm: geometry.weirHeight_mm,
+        downcomerClearance_mm: geometry.downcomerClearance_mm,
+        holeArea_m2: geometry.holeArea_m2,
+        valveCount: geometry.valves?.count ?? null,
+        blockedPercent: blocked,
+        trays: inSection.map((t) => t.tray),
       };
     }
     if (!Object.keys(override).length)
-      throw new ValidationError('Nothing to rate as found', [{ path: 'trays', message: 'no recorded tray lies in a tray section of the column' }]);
+      throw new ValidationError('Nothing to rate as found', [
+        { path: 'trays', message: 'no recorded tray lies in a tray section of the column' },
+      ]);
     const base = { columnId: insp.columnId, loadCaseId: body.loadCaseId, sectionIds: Object.keys(override) };
-    const design = await createRatingRun(em, user, { ...base, label: `Design — for inspection ${insp.turnaround}`, kind: 'as-found-design' });
+    const design = await createRatingRun(em, user, {
+      ...base,
+      label: `Design — for inspection ${insp.turnaround}`,
+      kind: 'as-found-design',
+    });
     const asFound = await createRatingRun(em, user, {
-      ...base, geometryOverride: override, kind: 'as-found', asFoundDate: insp.startDate,
+      ...base,
+      geometryOverride: override,
+      kind: 'as-found',
+      asFoundDate: insp.startDate,
       label: `As ${state === 'asFound' ? 'found' : 'left'} ${insp.turnaround} (${body.combine})`,
     });
-    await em.query(`UPDATE inspections SET as_found_run_ids = array_append(as_found_run_ids, $2) WHERE id = $1`, [id, asFound.id]);
+    await em.query(`UPDATE inspections SET as_found_run_ids = array_append(as_found_run_ids, $2) WHERE id = $1`, [
+      id,
+      asFound.id,
+    ]);
     return compareDesignAsFound(design, asFound, info);
   });
 }
@@ -109,13 +155,23 @@ function compareDesignAsFound(design: RatingRun, asFound: RatingRun, geometry: A
     const moved = CHECK_NAMES.flatMap((c) => {
       const x = a?.checks[c];
       const y = b?.checks[c];
-      return x && y && x.status !== y.status ? [{ check: c, design: x.percentOfLimit, asFound: y.percentOfLimit, designStatus: x.status, asFoundStatus: y.status }] : [];
+      return x && y && x.status !== y.status
+        ? [{ check: c, design: x.percentOfLimit, asFound: y.percentOfLimit, designStatus: x.status, asFoundStatus: y.status }]
+        : [];
     });
     return {
-      tray: d.tray, designControlling: d.controllingA, asFoundControlling: d.controllingB, controllingChanged: d.controllingChanged, movedChecks: moved,
+      tray: d.tray,
+      designControlling: d.controllingA,
+      asFoundControlling: d.controllingB,
+      controllingChanged: d.controllingChanged,
+      movedChecks: moved,
       dryPressureDrop_mm: { design: a?.details.dryPressureDrop_mm ?? 0, asFound: b?.details.dryPressureDrop_mm ?? 0 },
     };
   });
-  const sum = (r: RatingRun) => ({ controllingTray: r.results.controllingTray, controllingCheck: r.results.controllingCheck, maxPercentOfLimit: r.results.maxPercentOfLimit });
+  const sum = (r: RatingRun) => ({
+    controllingTray: r.results.controllingTray,
+    controllingCheck: r.results.controllingCheck,
+    maxPercentOfLimit: r.results.maxPercentOfLimit,
+  });
   return { designRunId: design.id, asFoundRunId: asFound.id, geometry, design: sum(design), asFound: sum(asFound), trays };
 }

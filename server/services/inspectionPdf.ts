@@ -7,7 +7,13 @@ import { InspectionPhoto } from '../db/entities/InspectionPhoto.js';
 import { getObjectBuffer } from '../storage/s3.js';
 import { getInspection } from './inspections.js';
 import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
-import { DAMAGE_LABELS, INSPECTION_STATUS_LABELS, PUNCH_PRIORITY_LABELS, TOLERANCE_ITEM_LABELS, publishedSource } from '../../shared/labels.js';
+import {
+  DAMAGE_LABELS,
+  INSPECTION_STATUS_LABELS,
+  PUNCH_PRIORITY_LABELS,
+  TOLERANCE_ITEM_LABELS,
+  publishedSource,
+} from '../../shared/labels.js';
 import { ROLE_LABELS, type Role } from '../../shared/permissions.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { InspectionRecord, InspectionTrayRecord, MeasurementCheck } from '../../shared/types/inspections.js';
@@ -50,11 +56,26 @@ function traySheet(t: InspectionTrayRecord): Content[] {
         headerRows: 1,
         widths: ['*', 'auto', 'auto', 'auto'],
         body: [
-          [{ text: 'Measurement (mm)', bold: true }, { text: 'Design', bold: true }, { text: 'As found', bold: true }, { text: 'As left', bold: true }],
+          [
+            { text: 'Measurement (mm)', bold: true },
+            { text: 'Design', bold: true },
+            { text: 'As found', bold: true },
+            { text: 'As left', bold: true },
+          ],
           m('Weir height', String(t.design.weirHeight_mm ?? '—'), list(t.asFound.weirHeight_mm), list(t.asLeft.weirHeight_mm)),
-          m('Downcomer clearance', String(t.design.downcomerClearance_mm ?? '—'), list(t.asFound.downcomerClearance_mm), list(t.asLeft.downcomerClearance_mm)),
+          m(
+            'Downcomer clearance',
+            String(t.design.downcomerClearance_mm ?? '—'),
+            list(t.asFound.downcomerClearance_mm),
+            list(t.asLeft.downcomerClearance_mm),
+          ),
           m('Levelness high − low', '—', String(t.asFound.levelness_mm ?? '—'), String(t.asLeft.levelness_mm ?? '—')),
-          m('Tray spacing', String(t.design.traySpacing_mm ?? '—'), String(t.asFound.traySpacing_mm ?? '—'), String(t.asLeft.traySpacing_mm ?? '—')),
+          m(
+            'Tray spacing',
+            String(t.design.traySpacing_mm ?? '—'),
+            String(t.asFound.traySpacing_mm ?? '—'),
+            String(t.asLeft.traySpacing_mm ?? '—'),
+          ),
         ],
       },
     },
@@ -62,12 +83,24 @@ function traySheet(t: InspectionTrayRecord): Content[] {
 }
 
 function toleranceTable(r: InspectionRecord): Content {
-  const body: Content[] = [['Tray', 'Pass', 'State', 'Item', 'Measured', 'Check', 'Result'].map((h) => ({ text: h, bold: true }))];
+  const body: Content[] = [
+    ['Tray', 'Pass', 'State', 'Item', 'Measured', 'Check', 'Result'].map((h) => ({ text: h, bold: true })),
+  ];
   for (const t of r.trays)
-    for (const [state, cs] of [['as found', t.checks.asFound], ['as left', t.checks.asLeft]] as const)
+    for (const [state, cs] of [
+      ['as found', t.checks.asFound],
+      ['as left', t.checks.asLeft],
+    ] as const)
       for (const c of cs)
-        body.push([String(t.tray), String(t.pass), state, itemText(c), `${c.measured} mm`, c.message,
-          { text: verdict(c), color: c.pass === false ? '#b00020' : c.pass ? '#1b5e20' : '#555555', bold: c.pass === false }]);
+        body.push([
+          String(t.tray),
+          String(t.pass),
+          state,
+          itemText(c),
+          `${c.measured} mm`,
+          c.message,
+          { text: verdict(c), color: c.pass === false ? '#b00020' : c.pass ? '#1b5e20' : '#555555', bold: c.pass === false },
+        ]);
   return { table: { headerRows: 1, widths: ['auto', 'auto', 'auto', 'auto', 'auto', '*', 'auto'], body }, fontSize: 8 };
 }
 
@@ -79,8 +112,13 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
     const img = await getObjectBuffer(p.thumbKey).catch(() => null);
     photos.push({
       columns: [
-        img ? { image: `data:image/jpeg;base64,${img.toString('base64')}`, width: 160 } : { text: '(photo unavailable)', width: 160 },
-        { text: `Tray ${p.tray ?? '—'}${p.pass ? ` pass ${p.pass}` : ''} · ${p.finding || 'general'}\n${p.caption}\nTaken or uploaded ${pdfDateTime(p.uploadedAt)}`, margin: [8, 0, 0, 0] },
+        img
+          ? { image: `data:image/jpeg;base64,${img.toString('base64')}`, width: 160 }
+          : { text: '(photo unavailable)', width: 160 },
+        {
+          text: `Tray ${p.tray ?? '—'}${p.pass ? ` pass ${p.pass}` : ''} · ${p.finding || 'general'}\n${p.caption}\nTaken or uploaded ${pdfDateTime(p.uploadedAt)}`,
+          margin: [8, 0, 0, 0],
+        },
       ],
       margin: [0, 0, 0, 8],
     });
@@ -91,33 +129,61 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
 
 /** The inspection report's parts (tested without rendering), the photo log already laid out. */
 export function inspectionDoc(r: InspectionRecord, photos: Content[]): PdfParts {
-  const sig = (label: string, s: InspectionRecord['inspectorSignature']) => [label, s ? `${s.name} (${ROLE_LABELS[s.role as Role] ?? s.role}), ${pdfDateTime(s.at)}` : 'not signed'];
+  const sig = (label: string, s: InspectionRecord['inspectorSignature']) => [
+    label,
+    s ? `${s.name} (${ROLE_LABELS[s.role as Role] ?? s.role}), ${pdfDateTime(s.at)}` : 'not signed',
+  ];
   return {
     header: `${r.columnTag} · ${r.turnaround} · turnaround inspection`,
     footer: `Inspection record · ${statusWords(r.status)} · printed ${pdfDateTime(new Date())}`,
     content: [
       { text: `Turnaround inspection — ${r.columnTag}`, style: 'h1' },
       { text: `${r.turnaround} · ${r.startDate}${r.endDate ? ` – ${r.endDate}` : ''} · ${statusWords(r.status)}` },
-      { text: `Inspector ${r.inspectorName ?? '—'} · entry permit ${r.permitRef || '—'} · gas test ${r.gasTestRef || '—'} (references recorded, not issued)` },
-      { text: `Tolerances: ${r.ruleSet.name}; levelness class ${r.rules.levelnessClass}. Source: ${publishedSource(r.ruleSet.source)}` },
+      {
+        text: `Inspector ${r.inspectorName ?? '—'} · entry permit ${r.permitRef || '—'} · gas test ${r.gasTestRef || '—'} (references recorded, not issued)`,
+      },
+      {
+        text: `Tolerances: ${r.ruleSet.name}; levelness class ${r.rules.levelnessClass}. Source: ${publishedSource(r.ruleSet.source)}`,
+      },
       { text: 'Safety cautions', style: 'h2' },
       { ul: SAFETY_CAUTIONS },
       { text: 'Signatures', style: 'h2' },
       { table: { widths: ['auto', '*'], body: [sig('Inspector', r.inspectorSignature), sig('Engineer', r.engineerSignature)] } },
       { text: 'Punch list', style: 'h2' },
       r.punch.length
-        ? { table: { headerRows: 1, widths: ['auto', 'auto', 'auto', '*', '*', 'auto', 'auto', 'auto'], body: [
-            ['#', 'Tray', 'Pass', 'Finding', 'Action', 'Priority', 'Owner', 'Status'].map((h) => ({ text: h, bold: true })),
-            ...r.punch.map((p) => [String(p.itemNo), String(p.tray ?? '—'), String(p.pass ?? '—'), p.finding, p.action, PUNCH_PRIORITY_LABELS[p.priority], p.owner,
-              p.status === 'closed' ? `closed by ${p.closedByName ?? '—'}${p.closedAt ? `, ${pdfDateTime(p.closedAt)}` : ''}` : 'open']),
-          ] }, fontSize: 8 }
+        ? {
+            table: {
+              headerRows: 1,
+              widths: ['auto', 'auto', 'auto', '*', '*', 'auto', 'auto', 'auto'],
+              body: [
+                ['#', 'Tray', 'Pass', 'Finding', 'Action', 'Priority', 'Owner', 'Status'].map((h) => ({ text: h, bold: true })),
+                ...r.punch.map((p) => [
+                  String(p.itemNo),
+                  String(p.tray ?? '—'),
+                  String(p.pass ?? '—'),
+                  p.finding,
+                  p.action,
+                  PUNCH_PRIORITY_LABELS[p.priority],
+                  p.owner,
+                  p.status === 'closed'
+                    ? `closed by ${p.closedByName ?? '—'}${p.closedAt ? `, ${pdfDateTime(p.closedAt)}` : ''}`
+                    : 'open',
+                ]),
+              ],
+            },
+            fontSize: 8,
+          }
         : { text: 'No punch items.' },
       { text: 'Tolerance checks', style: 'h2' },
       r.trays.length ? toleranceTable(r) : { text: 'No trays recorded.' },
       { text: 'Photo log', style: 'h2', pageBreak: 'before' },
       photos.length ? photos : { text: 'No photos.' },
       ...r.trays.flatMap(traySheet),
-      { text: 'Screening record: hydraulic consequences need confirmation by the internals vendor and licensed engineers; site permits and local codes govern.', italics: true, margin: [0, 12, 0, 0] },
+      {
+        text: 'Screening record: hydraulic consequences need confirmation by the internals vendor and licensed engineers; site permits and local codes govern.',
+        italics: true,
+        margin: [0, 12, 0, 0],
+      },
     ],
   };
 }

@@ -7,7 +7,13 @@ import { PunchItemEntity } from '../db/entities/PunchItem.js';
 import { iso } from './columnsCommon.js';
 import { checkMeasurements, ruleSetFor } from '../../shared/inspectionTolerance.js';
 import type { SectionGeometry } from '../../shared/types/rating.js';
-import type { InspectionRecord, InspectionTrayRecord, PhotoRecord, PunchItem, TrayDesign } from '../../shared/types/inspections.js';
+import type {
+  InspectionRecord,
+  InspectionTrayRecord,
+  PhotoRecord,
+  PunchItem,
+  TrayDesign,
+} from '../../shared/types/inspections.js';
 
 interface SectionRow {
   id: string;
@@ -19,7 +25,8 @@ interface SectionRow {
 /** Design values for a tray from the column's tray section covering it (nulls when no section covers it). */
 export function designFor(sections: SectionRow[], tray: number): TrayDesign {
   const s = sections.find((x) => tray >= x.first_tray && tray <= x.last_tray);
-  if (!s) return { sectionId: null, weirHeight_mm: null, downcomerClearance_mm: null, traySpacing_mm: null, columnDiameter_mm: null };
+  if (!s)
+    return { sectionId: null, weirHeight_mm: null, downcomerClearance_mm: null, traySpacing_mm: null, columnDiameter_mm: null };
   const g = s.geometry;
   return {
     sectionId: s.id,
@@ -31,9 +38,10 @@ export function designFor(sections: SectionRow[], tray: number): TrayDesign {
 }
 
 export async function columnSections(em: EntityManager, columnId: string): Promise<SectionRow[]> {
-  return (await em.query(`SELECT id, first_tray, last_tray, geometry FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`, [
-    columnId,
-  ])) as SectionRow[];
+  return (await em.query(
+    `SELECT id, first_tray, last_tray, geometry FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`,
+    [columnId],
+  )) as SectionRow[];
 }
 
 export function trayRecord(t: InspectionTray, design: TrayDesign, insp: Inspection): InspectionTrayRecord {
@@ -47,7 +55,10 @@ export function trayRecord(t: InspectionTray, design: TrayDesign, insp: Inspecti
     asFound: t.asFound,
     asLeft: t.asLeft,
     design,
-    checks: { asFound: checkMeasurements(t.asFound, design, rules, cls), asLeft: checkMeasurements(t.asLeft, design, rules, cls) },
+    checks: {
+      asFound: checkMeasurements(t.asFound, design, rules, cls),
+      asLeft: checkMeasurements(t.asLeft, design, rules, cls),
+    },
     version: t.version,
   };
 }
@@ -55,22 +66,44 @@ export function trayRecord(t: InspectionTray, design: TrayDesign, insp: Inspecti
 async function names(em: EntityManager, ids: (string | null)[]): Promise<Map<string, string>> {
   const list = [...new Set(ids.filter((x): x is string => !!x))];
   if (!list.length) return new Map();
-  const rows = (await em.query(`SELECT id, name FROM users WHERE id = ANY($1::uuid[])`, [list])) as { id: string; name: string }[];
+  const rows = (await em.query(`SELECT id, name FROM users WHERE id = ANY($1::uuid[])`, [list])) as {
+    id: string;
+    name: string;
+  }[];
   return new Map(rows.map((r) => [r.id, r.name]));
 }
 
 export function punchRecord(p: PunchItemEntity, n: Map<string, string>): PunchItem {
   return {
-    id: p.id, itemNo: p.itemNo, tray: p.tray, pass: p.pass, finding: p.finding, action: p.action, priority: p.priority, owner: p.owner,
-    status: p.status, closedBy: p.closedBy, closedByName: p.closedBy ? (n.get(p.closedBy) ?? null) : null,
-    closedAt: p.closedAt ? iso(p.closedAt) : null, version: p.version,
+    id: p.id,
+    itemNo: p.itemNo,
+    tray: p.tray,
+    pass: p.pass,
+    finding: p.finding,
+    action: p.action,
+    priority: p.priority,
+    owner: p.owner,
+    status: p.status,
+    closedBy: p.closedBy,
+    closedByName: p.closedBy ? (n.get(p.closedBy) ?? null) : null,
+    closedAt: p.closedAt ? iso(p.closedAt) : null,
+    version: p.version,
   };
 }
 
 export function photoRecord(p: InspectionPhoto, n: Map<string, string>): PhotoRecord {
   return {
-    id: p.id, tray: p.tray, pass: p.pass, finding: p.finding, caption: p.caption, contentType: p.contentType, bytes: p.bytes,
-    width: p.width, height: p.height, uploadedAt: iso(p.uploadedAt), uploadedByName: p.uploadedBy ? (n.get(p.uploadedBy) ?? null) : null,
+    id: p.id,
+    tray: p.tray,
+    pass: p.pass,
+    finding: p.finding,
+    caption: p.caption,
+    contentType: p.contentType,
+    bytes: p.bytes,
+    width: p.width,
+    height: p.height,
+    uploadedAt: iso(p.uploadedAt),
+    uploadedByName: p.uploadedBy ? (n.get(p.uploadedBy) ?? null) : null,
   };
 }
 
@@ -84,9 +117,17 @@ export async function toInspectionRecord(em: EntityManager, insp: Inspection): P
   const trays = await em.find(InspectionTray, { where: { inspectionId: insp.id }, order: { tray: 'ASC', pass: 'ASC' } });
   const punch = await em.find(PunchItemEntity, { where: { inspectionId: insp.id }, order: { itemNo: 'ASC' } });
   const photos = await em.find(InspectionPhoto, { where: { inspectionId: insp.id }, order: { uploadedAt: 'ASC' } });
-  const n = await names(em, [insp.inspectorId, col?.engineer_id ?? null, ...punch.map((p) => p.closedBy), ...photos.map((p) => p.uploadedBy)]);
+  const n = await names(em, [
+    insp.inspectorId,
+    col?.engineer_id ?? null,
+    ...punch.map((p) => p.closedBy),
+    ...photos.map((p) => p.uploadedBy),
+  ]);
   const trayRecords = trays.map((t) => trayRecord(t, designFor(sections, t.tray), insp));
-  const failedChecks = trayRecords.reduce((k, t) => k + [...t.checks.asFound, ...t.checks.asLeft].filter((c) => c.pass === false).length, 0);
+  const failedChecks = trayRecords.reduce(
+    (k, t) => k + [...t.checks.asFound, ...t.checks.asLeft].filter((c) => c.pass === false).length,
+    0,
+  );
   return {
     id: insp.id,
     columnId: insp.columnId,
@@ -116,6 +157,10 @@ export async function toInspectionRecord(em: EntityManager, insp: Inspection): P
     photos: photos.map((p) => photoRecord(p, n)),
     asFoundRunIds: insp.asFoundRunIds,
     columnTrayCount: col?.tray_count ?? 0,
-    designSections: sections.map((s) => ({ firstTray: s.first_tray, lastTray: s.last_tray, design: designFor(sections, s.first_tray) })),
+    designSections: sections.map((s) => ({
+      firstTray: s.first_tray,
+      lastTray: s.last_tray,
+      design: designFor(sections, s.first_tray),
+    })),
   };
 }

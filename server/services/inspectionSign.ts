@@ -18,12 +18,21 @@ import { can, COLUMN_ENGINEER_PERMISSION, rolesWith } from '../../shared/permiss
 import type { SessionUser } from '../../shared/types/api.js';
 import type { InspectionRecord, SignatureRecord } from '../../shared/types/inspections.js';
 
-const signature = (u: SessionUser): SignatureRecord => ({ userId: u.id, name: u.name, role: u.role, at: new Date().toISOString() });
+const signature = (u: SessionUser): SignatureRecord => ({
+  userId: u.id,
+  name: u.name,
+  role: u.role,
+  at: new Date().toISOString(),
+});
 
-async function columnInfo(em: EntityManager, columnId: string): Promise<{ tag: string; engineerId: string | null; siteId: string }> {
-  const [c] = (await em.query(`SELECT c.tag, c.engineer_id, u.site_id FROM columns c JOIN process_units u ON u.id = c.unit_id WHERE c.id = $1`, [
-    columnId,
-  ])) as { tag: string; engineer_id: string | null; site_id: string }[];
+async function columnInfo(
+  em: EntityManager,
+  columnId: string,
+): Promise<{ tag: string; engineerId: string | null; siteId: string }> {
+  const [c] = (await em.query(
+    `SELECT c.tag, c.engineer_id, u.site_id FROM columns c JOIN process_units u ON u.id = c.unit_id WHERE c.id = $1`,
+    [columnId],
+  )) as { tag: string; engineer_id: string | null; site_id: string }[];
   return { tag: c?.tag ?? '', engineerId: c?.engineer_id ?? null, siteId: c?.site_id ?? '' };
 }
 
@@ -44,11 +53,15 @@ export async function signAsInspector(ds: DataSource, user: SessionUser, id: str
   return ds.transaction(async (em) => {
     const insp = await visibleInspection(em, user, id, true);
     if (!can(user.role, 'inspections.record')) throw new ForbiddenError('Only an inspector may sign as inspector');
-    if (insp.inspectorId && insp.inspectorId !== user.id) throw new ForbiddenError('Only the inspector named on this inspection may sign it');
+    if (insp.inspectorId && insp.inspectorId !== user.id)
+      throw new ForbiddenError('Only the inspector named on this inspection may sign it');
     if (insp.status !== 'draft') throw new ConflictError(`This inspection is already ${insp.status}`);
     assertVersion('inspection', insp.version, version);
-    const [trays] = (await em.query(`SELECT count(*)::int AS n FROM inspection_trays WHERE inspection_id = $1`, [id])) as { n: number }[];
-    if (!trays?.n) throw new ConflictError('Record at least one tray before signing', [{ path: 'trays', message: 'none recorded' }]);
+    const [trays] = (await em.query(`SELECT count(*)::int AS n FROM inspection_trays WHERE inspection_id = $1`, [id])) as {
+      n: number;
+    }[];
+    if (!trays?.n)
+      throw new ConflictError('Record at least one tray before signing', [{ path: 'trays', message: 'none recorded' }]);
     const open = (await em.query(
       `SELECT item_no FROM punch_items WHERE inspection_id = $1 AND status = 'open' AND priority = 'before-box-up' ORDER BY item_no`,
       [id],
@@ -67,7 +80,8 @@ export async function signAsInspector(ds: DataSource, user: SessionUser, id: str
       kind: 'inspection.inspector-signed',
       to: await engineerEmails(em, col.engineerId, col.siteId),
       subject: `Inspection of ${col.tag} (${insp.turnaround}) signed by the inspector — your sign-off is due`,
-      text: `${user.name} signed the turnaround inspection of ${col.tag} (${insp.turnaround}, from ${insp.startDate}).\n` +
+      text:
+        `${user.name} signed the turnaround inspection of ${col.tag} (${insp.turnaround}, from ${insp.startDate}).\n` +
         `Please review the tray records, tolerance checks and punch list and countersign in Frothline.\n\n` +
         `Column entry and any repair work remain under the site's permits and procedures.`,
       link: `/inspections/${id}`,
@@ -86,7 +100,9 @@ export async function signAsEngineer(ds: DataSource, user: SessionUser, id: stri
     if (user.id === insp.inspectorId || user.id === insp.inspectorSignature?.userId)
       throw new ForbiddenError('You signed this inspection as its inspector; another engineer must countersign it');
     if (insp.status !== 'inspector-signed')
-      throw new ConflictError(insp.status === 'draft' ? 'The inspector signs first' : 'This inspection is already signed by the engineer');
+      throw new ConflictError(
+        insp.status === 'draft' ? 'The inspector signs first' : 'This inspection is already signed by the engineer',
+      );
     assertVersion('inspection', insp.version, version);
     insp.status = 'engineer-signed';
     insp.engineerSignature = signature(user);

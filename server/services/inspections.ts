@@ -28,11 +28,14 @@ export function visibleInspection(em: EntityManager, user: SessionUser, id: stri
 /** Signed records are read-only: any edit answers 409. */
 export function assertDraft(insp: Inspection): void {
   if (insp.status !== 'draft')
-    throw new ConflictError(`This inspection is ${insp.status}; signed records are read-only`, [{ path: 'status', message: `is ${insp.status}` }]);
+    throw new ConflictError(`This inspection is ${insp.status}; signed records are read-only`, [
+      { path: 'status', message: `is ${insp.status}` },
+    ]);
 }
 
 function checkDates(start: string, end: string | null | undefined): void {
-  if (end && end < start) throw new ValidationError('Invalid body', [{ path: 'endDate', message: `must not be before startDate ${start}` }]);
+  if (end && end < start)
+    throw new ValidationError('Invalid body', [{ path: 'endDate', message: `must not be before startDate ${start}` }]);
 }
 
 function checkRules(r: InspectionRuleChoice | undefined): void {
@@ -48,9 +51,18 @@ export async function createInspection(ds: DataSource, user: SessionUser, body: 
     const insp = await em.save(
       Inspection,
       em.create(Inspection, {
-        columnId: body.columnId, turnaround: body.turnaround.trim(), startDate: body.startDate, endDate: body.endDate ?? null,
-        inspectorId: user.id, permitRef: body.permitRef ?? '', gasTestRef: body.gasTestRef ?? '', rules: body.rules ?? DEFAULT_RULES,
-        notes: body.notes ?? '', status: 'draft', createdBy: user.id, asFoundRunIds: [],
+        columnId: body.columnId,
+        turnaround: body.turnaround.trim(),
+        startDate: body.startDate,
+        endDate: body.endDate ?? null,
+        inspectorId: user.id,
+        permitRef: body.permitRef ?? '',
+        gasTestRef: body.gasTestRef ?? '',
+        rules: body.rules ?? DEFAULT_RULES,
+        notes: body.notes ?? '',
+        status: 'draft',
+        createdBy: user.id,
+        asFoundRunIds: [],
       }),
     );
     await audit(em, user.id, 'create', 'inspection', insp.id, { columnId: body.columnId, turnaround: body.turnaround });
@@ -77,15 +89,29 @@ export async function listInspections(ds: DataSource, user: SessionUser, columnI
     [...(columnId ? [columnId] : []), ...f.params],
   )) as Record<string, unknown>[];
   return rows.map((r) => ({
-    id: r.id as string, columnId: r.column_id as string, columnTag: r.tag as string, turnaround: r.turnaround as string,
-    startDate: r.start_date as string, endDate: (r.end_date as string | null) ?? null, inspectorId: (r.inspector_id as string | null) ?? null,
-    inspectorName: (r.inspector_name as string | null) ?? null, status: r.status as InspectionSummary['status'],
-    trayCount: r.tray_count as number, openPunchItems: r.open_punch as number, failedChecks: null, version: r.version as number,
+    id: r.id as string,
+    columnId: r.column_id as string,
+    columnTag: r.tag as string,
+    turnaround: r.turnaround as string,
+    startDate: r.start_date as string,
+    endDate: (r.end_date as string | null) ?? null,
+    inspectorId: (r.inspector_id as string | null) ?? null,
+    inspectorName: (r.inspector_name as string | null) ?? null,
+    status: r.status as InspectionSummary['status'],
+    trayCount: r.tray_count as number,
+    openPunchItems: r.open_punch as number,
+    failedChecks: null,
+    version: r.version as number,
     updatedAt: iso(r.updated_at as Date),
   }));
 }
 
-export async function updateInspection(ds: DataSource, user: SessionUser, id: string, body: UpdateInspectionBody): Promise<InspectionRecord> {
+export async function updateInspection(
+  ds: DataSource,
+  user: SessionUser,
+  id: string,
+  body: UpdateInspectionBody,
+): Promise<InspectionRecord> {
   checkRules(body.rules);
   return ds.transaction(async (em) => {
     const insp = await visibleInspection(em, user, id, true);
@@ -102,7 +128,14 @@ export async function updateInspection(ds: DataSource, user: SessionUser, id: st
 }
 
 /** Create or replace the record of one tray and pass (optimistic lock on its version when it exists). */
-export async function saveTray(ds: DataSource, user: SessionUser, id: string, tray: number, pass: number, body: SaveTrayBody): Promise<InspectionRecord> {
+export async function saveTray(
+  ds: DataSource,
+  user: SessionUser,
+  id: string,
+  tray: number,
+  pass: number,
+  body: SaveTrayBody,
+): Promise<InspectionRecord> {
   const errs = [...measurementErrors(body.asFound, 'asFound'), ...measurementErrors(body.asLeft, 'asLeft')];
   if (body.findings.valvesMissing < 0 || body.findings.valvesStuck < 0)
     errs.push({ path: 'findings', message: 'valve counts must not be negative' });
@@ -116,7 +149,9 @@ export async function saveTray(ds: DataSource, user: SessionUser, id: string, tr
     const existing = await em.findOneBy(InspectionTray, { inspectionId: id, tray, pass });
     if (existing) {
       if (body.version === undefined)
-        throw new ConflictError(`Tray ${tray} pass ${pass} is already recorded; send its version to replace it`, [{ path: 'version', message: 'is required to replace a record' }]);
+        throw new ConflictError(`Tray ${tray} pass ${pass} is already recorded; send its version to replace it`, [
+          { path: 'version', message: 'is required to replace a record' },
+        ]);
       assertVersion(`record of tray ${tray} pass ${pass}`, existing.version, body.version);
       // always a new version, even when the content is unchanged, so a stale copy can never be saved over it
       await em.query(
@@ -124,10 +159,23 @@ export async function saveTray(ds: DataSource, user: SessionUser, id: string, tr
         [existing.id, JSON.stringify(body.findings), JSON.stringify(body.asFound), JSON.stringify(body.asLeft), user.id],
       );
     } else {
-      await em.save(InspectionTray, em.create(InspectionTray, { inspectionId: id, tray, pass, findings: body.findings, asFound: body.asFound, asLeft: body.asLeft, updatedBy: user.id }));
+      await em.save(
+        InspectionTray,
+        em.create(InspectionTray, {
+          inspectionId: id,
+          tray,
+          pass,
+          findings: body.findings,
+          asFound: body.asFound,
+          asLeft: body.asLeft,
+          updatedBy: user.id,
+        }),
+      );
     }
     await em.query(`UPDATE inspections SET updated_at = now(), version = version + 1 WHERE id = $1`, [id]);
-    await audit(em, user.id, existing ? 'update' : 'create', 'inspection-tray', `${id}/${tray}/${pass}`, { findings: body.findings });
-    return toInspectionRecord(em, (await em.findOneByOrFail(Inspection, { id })));
+    await audit(em, user.id, existing ? 'update' : 'create', 'inspection-tray', `${id}/${tray}/${pass}`, {
+      findings: body.findings,
+    });
+    return toInspectionRecord(em, await em.findOneByOrFail(Inspection, { id }));
   });
 }

@@ -14,13 +14,20 @@ import { revokeUserSessions } from './sessions.js';
 import { toSessionUser, toUserRecord, userWrite } from './users.js';
 import type { ChangePasswordBody, SessionUser, UserRecord } from '../../shared/types/api.js';
 
-export async function changeOwnPassword(ds: DataSource, userId: string, sessionId: string, body: ChangePasswordBody): Promise<SessionUser> {
+export async function changeOwnPassword(
+  ds: DataSource,
+  userId: string,
+  sessionId: string,
+  body: ChangePasswordBody,
+): Promise<SessionUser> {
   return userWrite(() =>
     ds.transaction(async (em) => {
       const user = await em.findOne(User, { where: { id: userId }, lock: { mode: 'pessimistic_write' } });
       if (!user) throw new NotFoundError('User');
       if (!(await bcrypt.compare(body.currentPassword, user.passwordHash)))
-        throw new ValidationError('The current password is not correct', [{ path: 'currentPassword', message: 'is not correct' }]);
+        throw new ValidationError('The current password is not correct', [
+          { path: 'currentPassword', message: 'is not correct' },
+        ]);
       if (body.newPassword === body.currentPassword)
         throw new ValidationError('The new password must differ from the current one', [
           { path: 'newPassword', message: 'is the same as the current password' },

@@ -21,7 +21,9 @@ function engine(): PdfMake {
   if (pdfmake) return pdfmake;
   pdfmake = require('pdfmake') as PdfMake;
   const f = (dir: string) => path.join(fontDir, dir, `NotoSans_${dir}.ttf`);
-  pdfmake.setFonts({ NotoSans: { normal: f('400Regular'), bold: f('700Bold'), italics: f('400Regular_Italic'), bolditalics: f('700Bold_Italic') } });
+  pdfmake.setFonts({
+    NotoSans: { normal: f('400Regular'), bold: f('700Bold'), italics: f('400Regular_Italic'), bolditalics: f('700Bold_Italic') },
+  });
   pdfmake.setUrlAccessPolicy(() => false);
   pdfmake.setLocalAccessPolicy((p) => path.resolve(p).startsWith(fontDir));
   return pdfmake;
@@ -47,7 +49,10 @@ export interface PdfParts {
 export function pageFrame(p: Pick<PdfParts, 'header' | 'footer'>) {
   return {
     header: (page: number, pages: number) => ({
-      columns: [{ text: p.header, bold: true }, { text: `page ${page} of ${pages}`, alignment: 'right', width: 80 }],
+      columns: [
+        { text: p.header, bold: true },
+        { text: `page ${page} of ${pages}`, alignment: 'right', width: 80 },
+      ],
       margin: [28, 16, 28, 0],
       fontSize: 8,
     }),

@@ -27,7 +27,8 @@ export interface PhotoUpload {
 function optionalInt(v: string | undefined, field: string, min: number, max: number): number | null {
   if (v === undefined || v === '') return null;
   const n = Number(v);
-  if (!Number.isInteger(n) || n < min || n > max) throw new ValidationError('Invalid photo fields', [{ path: field, message: `must be a whole number from ${min} to ${max}` }]);
+  if (!Number.isInteger(n) || n < min || n > max)
+    throw new ValidationError('Invalid photo fields', [{ path: field, message: `must be a whole number from ${min} to ${max}` }]);
   return n;
 }
 
@@ -36,14 +37,20 @@ export async function uploadPhoto(ds: DataSource, user: SessionUser, id: string,
   const pass = optionalInt(up.fields.pass, 'pass', 1, 4);
   const type = sniffImageType(up.buffer);
   if (!type)
-    throw new ValidationError('Unsupported photo type', [{ path: 'photo', message: 'must be a JPEG, PNG or WebP image (checked by content, not by file name)' }]);
+    throw new ValidationError('Unsupported photo type', [
+      { path: 'photo', message: 'must be a JPEG, PNG or WebP image (checked by content, not by file name)' },
+    ]);
   const insp = await visibleInspection(ds.manager, user, id);
   assertDraft(insp);
   let thumb: Buffer;
   let meta: sharp.Metadata;
   try {
     meta = await sharp(up.buffer).metadata();
-    thumb = await sharp(up.buffer).rotate().resize({ width: THUMB_WIDTH_PX, withoutEnlargement: true }).jpeg({ quality: 75 }).toBuffer();
+    thumb = await sharp(up.buffer)
+      .rotate()
+      .resize({ width: THUMB_WIDTH_PX, withoutEnlargement: true })
+      .jpeg({ quality: 75 })
+      .toBuffer();
   } catch {
     throw new ValidationError('Unreadable photo', [{ path: 'photo', message: `looks like ${type} but cannot be decoded` }]);
   }
@@ -57,8 +64,19 @@ export async function uploadPhoto(ds: DataSource, user: SessionUser, id: string,
     const p = await em.save(
       InspectionPhoto,
       em.create(InspectionPhoto, {
-        id: photoId, inspectionId: id, tray, pass, finding: (up.fields.finding ?? '').slice(0, 200), caption: (up.fields.caption ?? '').slice(0, 500),
-        contentType: type, bytes: up.buffer.length, width: meta.width ?? null, height: meta.height ?? null, objectKey, thumbKey, uploadedBy: user.id,
+        id: photoId,
+        inspectionId: id,
+        tray,
+        pass,
+        finding: (up.fields.finding ?? '').slice(0, 200),
+        caption: (up.fields.caption ?? '').slice(0, 500),
+        contentType: type,
+        bytes: up.buffer.length,
+        width: meta.width ?? null,
+        height: meta.height ?? null,
+        objectKey,
+        thumbKey,
+        uploadedBy: user.id,
       }),
     );
     await audit(em, user.id, 'create', 'inspection-photo', p.id, { tray, pass, bytes: p.bytes, contentType: type });
@@ -75,7 +93,14 @@ export async function visiblePhoto(ds: DataSource, user: SessionUser, id: string
 }
 
 /** Stream the original or the thumbnail to the response. */
-export async function streamPhoto(ds: DataSource, user: SessionUser, id: string, photoId: string, size: 'original' | 'thumb', res: Response): Promise<void> {
+export async function streamPhoto(
+  ds: DataSource,
+  user: SessionUser,
+  id: string,
+  photoId: string,
+  size: 'original' | 'thumb',
+  res: Response,
+): Promise<void> {
   const p = await visiblePhoto(ds, user, id, photoId);
   const { stream, length } = await getObjectStream(size === 'thumb' ? p.thumbKey : p.objectKey);
   res.setHeader('Content-Type', size === 'thumb' ? 'image/jpeg' : p.contentType);

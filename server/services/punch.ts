@@ -9,18 +9,32 @@ import { assertDraft, visibleInspection } from './inspections.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { CreatePunchBody, InspectionRecord, UpdatePunchBody } from '../../shared/types/inspections.js';
 
-export async function addPunchItem(ds: DataSource, user: SessionUser, id: string, body: CreatePunchBody): Promise<InspectionRecord> {
+export async function addPunchItem(
+  ds: DataSource,
+  user: SessionUser,
+  id: string,
+  body: CreatePunchBody,
+): Promise<InspectionRecord> {
   if (!body.finding.trim()) throw new ValidationError('Invalid body', [{ path: 'finding', message: 'must not be empty' }]);
   if (!body.action.trim()) throw new ValidationError('Invalid body', [{ path: 'action', message: 'must not be empty' }]);
   return ds.transaction(async (em) => {
     const insp = await visibleInspection(em, user, id, true);
     assertDraft(insp);
-    const [m] = (await em.query(`SELECT coalesce(max(item_no), 0)::int AS n FROM punch_items WHERE inspection_id = $1`, [id])) as { n: number }[];
+    const [m] = (await em.query(`SELECT coalesce(max(item_no), 0)::int AS n FROM punch_items WHERE inspection_id = $1`, [
+      id,
+    ])) as { n: number }[];
     const item = await em.save(
       PunchItemEntity,
       em.create(PunchItemEntity, {
-        inspectionId: id, itemNo: (m?.n ?? 0) + 1, tray: body.tray ?? null, pass: body.pass ?? null, finding: body.finding.trim(),
-        action: body.action.trim(), priority: body.priority, owner: body.owner ?? '', status: 'open',
+        inspectionId: id,
+        itemNo: (m?.n ?? 0) + 1,
+        tray: body.tray ?? null,
+        pass: body.pass ?? null,
+        finding: body.finding.trim(),
+        action: body.action.trim(),
+        priority: body.priority,
+        owner: body.owner ?? '',
+        status: 'open',
       }),
     );
     await audit(em, user.id, 'create', 'punch-item', item.id, body);
@@ -28,7 +42,13 @@ export async function addPunchItem(ds: DataSource, user: SessionUser, id: string
   });
 }
 
-export async function updatePunchItem(ds: DataSource, user: SessionUser, id: string, itemId: string, body: UpdatePunchBody): Promise<InspectionRecord> {
+export async function updatePunchItem(
+  ds: DataSource,
+  user: SessionUser,
+  id: string,
+  itemId: string,
+  body: UpdatePunchBody,
+): Promise<InspectionRecord> {
   return ds.transaction(async (em) => {
     const insp = await visibleInspection(em, user, id, true);
     assertDraft(insp);

@@ -44,17 +44,23 @@ export function niceTicks(lo: number, hi: number, n = 6): number[] {
 }
 
 export function chartSvg(c: ChartSpec): string {
-  const L = 62, R = 12, T = 26, B = 34;
+  const L = 62,
+    R = 12,
+    T = 26,
+    B = 34;
   const all = c.series.flatMap((s) => s.points);
   const xs = all.map((p) => p[0]);
   const ys = [...all.map((p) => p[1]), ...(c.yLines ?? []).map((l) => l.y)];
-  const x0 = c.xMin ?? Math.min(...xs), x1 = Math.max(...xs, x0 + 1);
-  const y0 = c.yMin ?? Math.min(0, ...ys), y1 = c.yMax ?? Math.max(...ys, y0 + 1) * 1.05;
+  const x0 = c.xMin ?? Math.min(...xs),
+    x1 = Math.max(...xs, x0 + 1);
+  const y0 = c.yMin ?? Math.min(0, ...ys),
+    y1 = c.yMax ?? Math.max(...ys, y0 + 1) * 1.05;
   const pad = c.series.some((s) => s.kind === 'bar' || s.kind === 'step') ? 0.5 : 0;
   const X = (v: number) => L + ((v - (x0 - pad)) / (x1 + pad - (x0 - pad))) * (c.width - L - R);
   const Y = (v: number) => T + (1 - (v - y0) / (y1 - y0)) * (c.height - T - B);
   const parts: string[] = [];
-  const line = (a: number, b: number, d: number, e: number, style: string) => parts.push(`<line x1="${a}" y1="${b}" x2="${d}" y2="${e}" ${style}/>`);
+  const line = (a: number, b: number, d: number, e: number, style: string) =>
+    parts.push(`<line x1="${a}" y1="${b}" x2="${d}" y2="${e}" ${style}/>`);
   const text = (x: number, y: number, s: string, anchor = 'middle', size = 8, color = '#333') =>
     parts.push(`<text x="${x}" y="${y}" text-anchor="${anchor}" font-size="${size}" fill="${color}">${esc(s)}</text>`);
   for (const t of niceTicks(y0, y1)) {
@@ -72,13 +78,19 @@ export function chartSvg(c: ChartSpec): string {
     const pts = [...s.points].sort((a, b) => a[0] - b[0]);
     if (s.kind === 'bar')
       pts.forEach(([x, y], i) =>
-        parts.push(`<rect x="${X(x) - bw / 2}" y="${Math.min(Y(y), Y(0))}" width="${bw}" height="${Math.abs(Y(0) - Y(y))}" fill="${s.colors?.[i] ?? s.color}"/>`));
+        parts.push(
+          `<rect x="${X(x) - bw / 2}" y="${Math.min(Y(y), Y(0))}" width="${bw}" height="${Math.abs(Y(0) - Y(y))}" fill="${s.colors?.[i] ?? s.color}"/>`,
+        ),
+      );
     else if (s.kind === 'marker')
-      pts.forEach(([x, y]) => parts.push(`<circle cx="${X(x)}" cy="${Y(y)}" r="3.5" fill="${s.color}" stroke="#fff" stroke-width="1"/>`));
+      pts.forEach(([x, y]) =>
+        parts.push(`<circle cx="${X(x)}" cy="${Y(y)}" r="3.5" fill="${s.color}" stroke="#fff" stroke-width="1"/>`),
+      );
     else {
-      const d = s.kind === 'step'
-        ? pts.map(([x, y], i) => `${i ? 'L' : 'M'}${X(x - 0.5)} ${Y(y)} L${X(x + 0.5)} ${Y(y)}`).join(' ')
-        : pts.map(([x, y], i) => `${i ? 'L' : 'M'}${X(x)} ${Y(y)}`).join(' ');
+      const d =
+        s.kind === 'step'
+          ? pts.map(([x, y], i) => `${i ? 'L' : 'M'}${X(x - 0.5)} ${Y(y)} L${X(x + 0.5)} ${Y(y)}`).join(' ')
+          : pts.map(([x, y], i) => `${i ? 'L' : 'M'}${X(x)} ${Y(y)}`).join(' ');
       parts.push(`<path d="${d}" fill="none" stroke="${s.color}" stroke-width="1.3"${s.dash ? ' stroke-dasharray="4 3"' : ''}/>`);
     }
   }
@@ -100,7 +112,9 @@ export function legendSvg(items: { name: string; color: string }[], width: numbe
   for (const i of items) {
     const w = 16 + i.name.length * 4.4;
     if (x + w > width && x > 0) [x, y] = [0, y + 13];
-    parts.push(`<rect x="${x}" y="${y - 7}" width="8" height="8" fill="${i.color}"/><text x="${x + 11}" y="${y}" font-size="7.5" fill="#333">${esc(i.name)}</text>`);
+    parts.push(
+      `<rect x="${x}" y="${y - 7}" width="8" height="8" fill="${i.color}"/><text x="${x + 11}" y="${y}" font-size="7.5" fill="#333">${esc(i.name)}</text>`,
+    );
     x += w + 8;
   }
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${y + 5}" viewBox="0 0 ${width} ${y + 5}">${parts.join('')}</svg>`;

@@ -11,8 +11,16 @@ import { STATUS_HEX, runCharts } from './runReportCharts.js';
 import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
 import { getRun, runWindow } from './runsRead.js';
 import {
-  CHECK_LABELS, CHECK_SHORT, PROVENANCE_LABELS, PROVENANCE_UNCERTAINTY, REVIEW_LABELS, SENSE_WORDS, STATUS_LABELS, TRAY_STATE_LABELS,
-  formatPercentOfLimit, publishedSource,
+  CHECK_LABELS,
+  CHECK_SHORT,
+  PROVENANCE_LABELS,
+  PROVENANCE_UNCERTAINTY,
+  REVIEW_LABELS,
+  SENSE_WORDS,
+  STATUS_LABELS,
+  TRAY_STATE_LABELS,
+  formatPercentOfLimit,
+  publishedSource,
 } from '../../shared/labels.js';
 import { coverageSentence, sectionCoverage, trayState } from '../../shared/verdict.js';
 import { CHECK_NAMES } from '../../shared/types/rating.js';
@@ -49,7 +57,14 @@ function reviewBlock(run: RunRecord): Content[] {
     },
     run.reviewComment ? { text: `Review comment: “${run.reviewComment}”`, margin: [0, 2, 0, 4] } : '',
     rows.length
-      ? { table: { headerRows: 1, widths: ['auto', 'auto', 'auto', '*'], body: [['When', 'Who', 'Action', 'Comment'].map(th), ...rows] }, margin: [0, 2, 0, 0] }
+      ? {
+          table: {
+            headerRows: 1,
+            widths: ['auto', 'auto', 'auto', '*'],
+            body: [['When', 'Who', 'Action', 'Comment'].map(th), ...rows],
+          },
+          margin: [0, 2, 0, 0],
+        }
       : '',
   ];
 }
@@ -61,8 +76,16 @@ function sectionTable(run: RunRecord, sys: SessionUser['unitSystem']): Content {
       const c = run.results.trays.find((t) => t.tray === e.worstTray)?.checks[e.check];
       const q: QuantityId = quantityOfEngineUnit(c?.unit ?? '-');
       const unit = q === 'percent' || q === 'ratio' ? (c?.unit === '-' ? '' : (c?.unit ?? '')) : unitLabel(q, sys);
-      body.push([s.name, `${s.firstTray}–${s.lastTray}`, CHECK_LABELS[e.check], String(e.worstTray), `${formatQuantity(q, e.worstValue, sys)} ${unit}`,
-        c ? `${SENSE_WORDS[c.sense]} ${formatQuantity(q, c.limit, sys)} ${unit}` : '—', `${formatPercentOfLimit(e.percentOfLimit)} %`, { text: STATUS_LABELS[e.status], color: STATUS_HEX[e.status] }]);
+      body.push([
+        s.name,
+        `${s.firstTray}–${s.lastTray}`,
+        CHECK_LABELS[e.check],
+        String(e.worstTray),
+        `${formatQuantity(q, e.worstValue, sys)} ${unit}`,
+        c ? `${SENSE_WORDS[c.sense]} ${formatQuantity(q, c.limit, sys)} ${unit}` : '—',
+        `${formatPercentOfLimit(e.percentOfLimit)} %`,
+        { text: STATUS_LABELS[e.status], color: STATUS_HEX[e.status] },
+      ]);
     }
   return { table: { headerRows: 1, widths: ['*', 'auto', '*', 'auto', 'auto', 'auto', 'auto', 'auto'], body }, fontSize: 7.5 };
 }
@@ -81,34 +104,65 @@ function trayTable(run: RunRecord, sys: SessionUser['unitSystem']): Content[] {
     }
   const keys = [...notes.keys()];
   const load = new Map(run.snapshot.loads.map((l) => [l.tray, l]));
-  const body: Content[] = [[
-    th('Tray'), th(`Vapour (${unitLabel('massFlow', sys)})`), th(`Liquid (${unitLabel('massFlow', sys)})`),
-    ...CHECK_NAMES.map((c) => th(`${CHECK_SHORT[c]} %`)), th('Controls'), th('Notes'),
-  ]];
+  const body: Content[] = [
+    [
+      th('Tray'),
+      th(`Vapour (${unitLabel('massFlow', sys)})`),
+      th(`Liquid (${unitLabel('massFlow', sys)})`),
+      ...CHECK_NAMES.map((c) => th(`${CHECK_SHORT[c]} %`)),
+      th('Controls'),
+      th('Notes'),
+    ],
+  ];
   for (const t of run.results.trays) {
     const refs = t.warnings.map((w) => keys.indexOf(w.code) + 1);
     body.push([
-      String(t.tray), formatQuantity('massFlow', load.get(t.tray)?.vapourMassFlow_kg_h, sys), formatQuantity('massFlow', load.get(t.tray)?.liquidMassFlow_kg_h, sys),
+      String(t.tray),
+      formatQuantity('massFlow', load.get(t.tray)?.vapourMassFlow_kg_h, sys),
+      formatQuantity('massFlow', load.get(t.tray)?.liquidMassFlow_kg_h, sys),
       ...CHECK_NAMES.map((c) => {
         const k = t.checks[c]; // absent from runs rated before the engine had the check
         if (!k || k.status === 'na') return { text: '—', alignment: 'right', color: STATUS_HEX.na };
-        return { text: formatPercentOfLimit(k.percentOfLimit), color: STATUS_HEX[k.status], bold: k.status === 'over', alignment: 'right' };
+        return {
+          text: formatPercentOfLimit(k.percentOfLimit),
+          color: STATUS_HEX[k.status],
+          bold: k.status === 'over',
+          alignment: 'right',
+        };
       }),
-      verdictText(t), [...new Set(refs)].join(', '),
+      verdictText(t),
+      [...new Set(refs)].join(', '),
     ]);
   }
   return [
-    { text: 'Per-tray results (percent of each limit; colour: within, close, beyond; — the check does not apply)', style: 'h2', pageBreak: 'before' },
-    { table: { headerRows: 1, dontBreakRows: true, widths: ['auto', 'auto', 'auto', ...CHECK_NAMES.map(() => '*'), 'auto', 'auto'], body }, fontSize: 7 },
+    {
+      text: 'Per-tray results (percent of each limit; colour: within, close, beyond; — the check does not apply)',
+      style: 'h2',
+      pageBreak: 'before',
+    },
+    {
+      table: {
+        headerRows: 1,
+        dontBreakRows: true,
+        widths: ['auto', 'auto', 'auto', ...CHECK_NAMES.map(() => '*'), 'auto', 'auto'],
+        body,
+      },
+      fontSize: 7,
+    },
     keys.length ? { text: 'Notes', style: 'h2' } : '',
     keys.length
-      ? { ol: keys.map((k) => {
-          const trays = [...new Set(notes.get(k)!)];
-          const first = example.get(k)!;
-          const rest = first.slice(warningHead(first).length + 1).trim();
-          if (trays.length === 1) return `Tray ${trays[0]}: ${first}`;
-          return rest ? `${warningHead(first)}: trays ${trayRanges(trays)}. On tray ${trays[0]}: ${rest}` : `${first} (trays ${trayRanges(trays)})`;
-        }), fontSize: 7.5 }
+      ? {
+          ol: keys.map((k) => {
+            const trays = [...new Set(notes.get(k)!)];
+            const first = example.get(k)!;
+            const rest = first.slice(warningHead(first).length + 1).trim();
+            if (trays.length === 1) return `Tray ${trays[0]}: ${first}`;
+            return rest
+              ? `${warningHead(first)}: trays ${trayRanges(trays)}. On tray ${trays[0]}: ${rest}`
+              : `${first} (trays ${trayRanges(trays)})`;
+          }),
+          fontSize: 7.5,
+        }
       : '',
   ];
 }
@@ -119,19 +173,37 @@ export function valveTable(run: RunRecord, sys: SessionUser['unitSystem']): Cont
   if (!trays.length) return [];
   const v = unitLabel('velocity', sys);
   const mm = unitLabel('lengthSmall', sys);
-  const body: Content[] = [[th('Tray'), th(`Hole velocity (${v})`), th(`Valves start to open (${v})`), th(`All valves open (${v})`), th('Valves'),
-    th(`Dry ΔP (${mm} of liquid)`), th(`Dry ΔP partly open (${mm} of liquid)`)]];
+  const body: Content[] = [
+    [
+      th('Tray'),
+      th(`Hole velocity (${v})`),
+      th(`Valves start to open (${v})`),
+      th(`All valves open (${v})`),
+      th('Valves'),
+      th(`Dry ΔP (${mm} of liquid)`),
+      th(`Dry ΔP partly open (${mm} of liquid)`),
+    ],
+  ];
   for (const t of trays) {
     const d = t.details;
     const uA = d.valvesStartOpenVelocity_m_s!;
     const uB = d.valvesAllOpenVelocity_m_s ?? NaN;
     const state = d.holeVelocity_m_s < uA ? 'closed' : d.holeVelocity_m_s < uB ? 'partly open' : 'all open';
-    body.push([String(t.tray), { text: formatQuantity('velocity', d.holeVelocity_m_s, sys), color: STATUS_HEX[t.checks.weeping?.status ?? 'ok'] },
-      formatQuantity('velocity', uA, sys), formatQuantity('velocity', uB, sys), state,
-      formatQuantity('lengthSmall', d.dryPressureDrop_mm, sys), formatQuantity('lengthSmall', d.valvePartlyOpenDryHead_mm, sys)]);
+    body.push([
+      String(t.tray),
+      { text: formatQuantity('velocity', d.holeVelocity_m_s, sys), color: STATUS_HEX[t.checks.weeping?.status ?? 'ok'] },
+      formatQuantity('velocity', uA, sys),
+      formatQuantity('velocity', uB, sys),
+      state,
+      formatQuantity('lengthSmall', d.dryPressureDrop_mm, sys),
+      formatQuantity('lengthSmall', d.valvePartlyOpenDryHead_mm, sys),
+    ]);
   }
   return [
-    { text: 'Moving valves (Klein): hole velocity against the velocities at which the valves start to open and are all open', style: 'h2' },
+    {
+      text: 'Moving valves (Klein): hole velocity against the velocities at which the valves start to open and are all open',
+      style: 'h2',
+    },
     { table: { headerRows: 1, dontBreakRows: true, widths: ['auto', '*', '*', '*', 'auto', '*', '*'], body }, fontSize: 7 },
   ];
 }
@@ -147,7 +219,9 @@ function verdictText(t: RunTrayResult): string {
 function methodsBlock(run: RunRecord): Content[] {
   const ids = new Set(run.results.trays.flatMap((t) => Object.values(t.checks).map((c) => c.method)));
   for (const id of [...ids]) for (const u of METHOD_USES[id] ?? []) ids.add(u);
-  const used = Object.values(METHOD_METADATA).filter((m) => ids.has(m.id)).sort((a, b) => a.label.localeCompare(b.label));
+  const used = Object.values(METHOD_METADATA)
+    .filter((m) => ids.has(m.id))
+    .sort((a, b) => a.label.localeCompare(b.label));
   const basis = (m: (typeof used)[number]) => {
     const u = m.uncertainty ?? PROVENANCE_UNCERTAINTY[m.provenance];
     return `${PROVENANCE_LABELS[m.provenance]}${u ? `. ${u}` : ''}`;
@@ -155,13 +229,20 @@ function methodsBlock(run: RunRecord): Content[] {
   return [
     { text: 'Methods and sources', style: 'h2' },
     run.engineVersion !== ENGINE_VERSION
-      ? { text: `This run was rated by engine ${run.engineVersion}; the methods below are described as in engine ${ENGINE_VERSION}, whose correlations may differ from those that rated it.`, italics: true, margin: [0, 0, 0, 4] }
+      ? {
+          text: `This run was rated by engine ${run.engineVersion}; the methods below are described as in engine ${ENGINE_VERSION}, whose correlations may differ from those that rated it.`,
+          italics: true,
+          margin: [0, 0, 0, 4],
+        }
       : '',
     {
       table: {
         headerRows: 1,
         widths: ['auto', '*', '*', '*'],
-        body: [['Correlation', 'Equation', 'Source', 'Basis and uncertainty'].map(th), ...used.map((m) => [m.label, m.equation, publishedSource(m.source), basis(m)])],
+        body: [
+          ['Correlation', 'Equation', 'Source', 'Basis and uncertainty'].map(th),
+          ...used.map((m) => [m.label, m.equation, publishedSource(m.source), basis(m)]),
+        ],
       },
       fontSize: 7,
     },
@@ -185,14 +266,21 @@ function verdictLine(run: RunRecord): string {
 /** Each section's coverage: "Top: all 8 trays rated", "Lower: rated 6 of 12 trays; no loads for trays 15–20". */
 function coverageLine(run: RunRecord): string {
   const rated = run.results.trays.map((t) => t.tray);
-  const lines = run.results.sections.map((s) => `${s.name}: ${coverageSentence(sectionCoverage(s.firstTray, s.lastTray, rated))}`);
+  const lines = run.results.sections.map(
+    (s) => `${s.name}: ${coverageSentence(sectionCoverage(s.firstTray, s.lastTray, rated))}`,
+  );
   const out = run.results.uncoveredTrays;
   if (out.length) lines.push(`loaded trays outside any section: ${trayRanges(out)}`);
   return `Trays rated — ${lines.join('; ')}`;
 }
 
 /** The report's parts (tested without rendering): header, footer and content. */
-export function runReportDoc(run: RunRecord, w: RunWindow | null, sys: SessionUser['unitSystem'], printedAt = new Date()): PdfParts {
+export function runReportDoc(
+  run: RunRecord,
+  w: RunWindow | null,
+  sys: SessionUser['unitSystem'],
+  printedAt = new Date(),
+): PdfParts {
   const tag = run.snapshot.column.tag;
   const lc = run.snapshot.loadCase;
   return {
@@ -202,7 +290,9 @@ export function runReportDoc(run: RunRecord, w: RunWindow | null, sys: SessionUs
     content: [
       { text: `Tray rating report — ${tag}`, style: 'h1' },
       { text: run.label, fontSize: 11 },
-      { text: `Load case ${lc.name} (${lc.basis}, version ${lc.version}) · rated ${pdfDateTime(run.createdAt)} by ${run.authorName ?? '—'} · engine ${run.engineVersion} · units ${sys}` },
+      {
+        text: `Load case ${lc.name} (${lc.basis}, version ${lc.version}) · rated ${pdfDateTime(run.createdAt)} by ${run.authorName ?? '—'} · engine ${run.engineVersion} · units ${sys}`,
+      },
       { text: verdictLine(run), bold: true, margin: [0, 4, 0, 0] },
       { text: coverageLine(run) },
       ...reviewBlock(run),

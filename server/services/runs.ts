@@ -212,7 +212,14 @@ async function storeRatingRun(
     overridden: sections.filter((s) => s.overridden).map((s) => s.sectionId),
   };
   const snapshotBytes = memo ? (memo.snapshotBytes ??= encodeJson(snapshot)) : undefined;
-  const row = await insertRunWithAudit(em, user, run, { snapshot: snapshotBytes, results: packed }, { changes }, guardOf(inputs, lc.version));
+  const row = await insertRunWithAudit(
+    em,
+    user,
+    run,
+    { snapshot: snapshotBytes, results: packed },
+    { changes },
+    guardOf(inputs, lc.version),
+  );
   if (!row) {
     // the column, load case or sections changed since they were read (or the user lost access): read again
     forgetRunInputs(input.columnId, input.loadCaseId);

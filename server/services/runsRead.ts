@@ -78,9 +78,10 @@ const fromRow = (r: SummaryRow): RunSummary => ({
 
 /** The column page's runs: ratings only (runs of ratings as found are listed from their inspection). */
 export async function listRunSummaries(em: EntityManager, columnId: string): Promise<RunSummary[]> {
-  const rows = (await em.query(`${SUMMARY_SQL} WHERE r.column_id = $1 AND r.kind = 'rating' ORDER BY r.created_at DESC LIMIT 200`, [
-    columnId,
-  ])) as SummaryRow[];
+  const rows = (await em.query(
+    `${SUMMARY_SQL} WHERE r.column_id = $1 AND r.kind = 'rating' ORDER BY r.created_at DESC LIMIT 200`,
+    [columnId],
+  )) as SummaryRow[];
   return rows.map(fromRow);
 }
 

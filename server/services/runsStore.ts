@@ -146,8 +146,9 @@ function insertRunsSql(n: number): string {
   let sql = batchSql.get(n);
   if (sql) return sql;
   const w = RUN_ROW_COLUMNS.length;
-  const rows = Array.from({ length: n }, (_, i) =>
-    `(${RUN_ROW_COLUMNS.map(([, type], j) => `$${i * w + j + 1}${i === 0 ? `::${type}` : ''}`).join(', ')})`,
+  const rows = Array.from(
+    { length: n },
+    (_, i) => `(${RUN_ROW_COLUMNS.map(([, type], j) => `$${i * w + j + 1}${i === 0 ? `::${type}` : ''}`).join(', ')})`,
   );
   sql = `WITH v (${RUN_ROW_COLUMNS.map(([name]) => name).join(', ')}) AS (VALUES ${rows.join(', ')}),
      ok AS (
@@ -171,7 +172,12 @@ function insertRunsSql(n: number): string {
 
 /** Insert rows in one statement (prepared per batch size; inside a transaction it runs there). */
 async function sendRuns(em: EntityManager, rows: RunRow[]): Promise<(InsertedRun | null)[]> {
-  const out = await preparedQuery<InsertedRun>(em, `frothline-insert-runs-${rows.length}`, insertRunsSql(rows.length), rows.flat());
+  const out = await preparedQuery<InsertedRun>(
+    em,
+    `frothline-insert-runs-${rows.length}`,
+    insertRunsSql(rows.length),
+    rows.flat(),
+  );
   const byId = new Map(out.map((r) => [r.id, r]));
   return rows.map((r) => byId.get(r[0] as string) ?? null);
 }

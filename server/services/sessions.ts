@@ -25,12 +25,19 @@ export async function openSession(ds: DataSource, userId: string): Promise<{ ses
 /** Ends one session (sign-out). */
 export async function closeSession(ds: DataSource, userId: string, sessionId: string): Promise<void> {
   forgetSessionUsers();
-  await ds.query(`UPDATE user_sessions SET revoked_at = now() WHERE id = $1 AND user_id = $2 AND revoked_at IS NULL`, [sessionId, userId]);
+  await ds.query(`UPDATE user_sessions SET revoked_at = now() WHERE id = $1 AND user_id = $2 AND revoked_at IS NULL`, [
+    sessionId,
+    userId,
+  ]);
   forgetSessionUsers();
 }
 
 /** Ends every open session of a user, except one (the caller's own, after a password change). */
-export async function revokeUserSessions(em: EntityManager, userId: string, exceptSessionId: string | null = null): Promise<number> {
+export async function revokeUserSessions(
+  em: EntityManager,
+  userId: string,
+  exceptSessionId: string | null = null,
+): Promise<number> {
   const [, n] = (await em.query(
     `UPDATE user_sessions SET revoked_at = now() WHERE user_id = $1 AND revoked_at IS NULL AND ($2::uuid IS NULL OR id <> $2::uuid)`,
     [userId, exceptSessionId],

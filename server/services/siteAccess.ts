@@ -23,7 +23,11 @@ export async function setUserSites(ds: DataSource, actorId: string, userId: stri
     if (!(await em.findOneBy(User, { id: userId }))) throw new NotFoundError('User');
     const known = siteIds.length ? await em.getRepository(Site).findBy(siteIds.map((id) => ({ id }))) : [];
     const unknown = siteIds.filter((id) => !known.some((s) => s.id === id));
-    if (unknown.length) throw new ValidationError('Unknown site', unknown.map((id) => ({ path: 'siteIds', message: `site ${id} does not exist` })));
+    if (unknown.length)
+      throw new ValidationError(
+        'Unknown site',
+        unknown.map((id) => ({ path: 'siteIds', message: `site ${id} does not exist` })),
+      );
     await em.delete(SiteMember, { userId });
     for (const siteId of new Set(siteIds)) await em.insert(SiteMember, { siteId, userId });
     await audit(em, actorId, 'update', 'user-sites', userId, { siteIds });

@@ -19,16 +19,38 @@ function trafficChart(s: StudyRecord, d: StudyReportData): Content[] {
   const pa = s.inputs.input.pumpAround;
   const [lo, hi] = [Math.min(pa.returnTray, pa.drawTray), Math.max(pa.returnTray, pa.drawTray)];
   const svg = chartSvg({
-    width: 520, height: 230, xTitle: 'Tray', yTitle: d.trafficHeaders[2]!.replace('Vapour', 'Flow'), xIntegers: true, yMin: 0,
-    series: [{ name: 'Vapour', color: '#3c6e8f', kind: 'step', points: pts(2) }, { name: 'Liquid', color: '#d9822b', kind: 'step', points: pts(3) }],
-    xLines: [{ x: lo - 0.5, label: 'zone' }, { x: hi + 0.5, label: '' }],
+    width: 520,
+    height: 230,
+    xTitle: 'Tray',
+    yTitle: d.trafficHeaders[2]!.replace('Vapour', 'Flow'),
+    xIntegers: true,
+    yMin: 0,
+    series: [
+      { name: 'Vapour', color: '#3c6e8f', kind: 'step', points: pts(2) },
+      { name: 'Liquid', color: '#d9822b', kind: 'step', points: pts(3) },
+    ],
+    xLines: [
+      { x: lo - 0.5, label: 'zone' },
+      { x: hi + 0.5, label: '' },
+    ],
   });
   return [
-    { unbreakable: true, stack: [
-      { text: 'Traffic at the base duty, tray by tray', style: 'h2' },
-      { svg, width: 520 },
-      { svg: legendSvg([{ name: 'Vapour', color: '#3c6e8f' }, { name: 'Liquid', color: '#d9822b' }], 300) },
-    ] },
+    {
+      unbreakable: true,
+      stack: [
+        { text: 'Traffic at the base duty, tray by tray', style: 'h2' },
+        { svg, width: 520 },
+        {
+          svg: legendSvg(
+            [
+              { name: 'Vapour', color: '#3c6e8f' },
+              { name: 'Liquid', color: '#d9822b' },
+            ],
+            300,
+          ),
+        },
+      ],
+    },
   ];
 }
 
@@ -41,19 +63,52 @@ export function studyReportDoc(s: StudyRecord, sys: SessionUser['unitSystem'], p
     content: [
       { text: `Pump-around duty study — ${s.columnTag}`, style: 'h1' },
       { text: s.label, fontSize: 11 },
-      { text: `By ${s.authorName}, ${pdfDateTime(s.createdAt)} · ${REVIEW_LABELS[s.status]}${decided ? ` · ${ACTION_WORDS[decided.action].toLowerCase()} by ${decided.userName} on ${pdfDateTime(decided.at)}` : ''}` },
+      {
+        text: `By ${s.authorName}, ${pdfDateTime(s.createdAt)} · ${REVIEW_LABELS[s.status]}${decided ? ` · ${ACTION_WORDS[decided.action].toLowerCase()} by ${decided.userName} on ${pdfDateTime(decided.at)}` : ''}`,
+      },
       s.reviewComment ? { text: `Review comment: “${s.reviewComment}”` } : '',
       { text: 'Cautions', style: 'h2' },
       { ul: d.cautions },
       { text: 'Inputs', style: 'h2' },
       { table: { widths: ['auto', '*'], body: d.inputs }, layout: 'lightHorizontalLines' },
       { text: 'Duties found', style: 'h2' },
-      { table: { headerRows: 1, widths: ['auto', 'auto', '*'], body: [['', 'Duty', 'Where, what'].map(th), ...d.duties.map((r) => [r[0], { text: r[1], bold: r[0] === 'Suggested duty' }, r[2]])] } },
+      {
+        table: {
+          headerRows: 1,
+          widths: ['auto', 'auto', '*'],
+          body: [
+            ['', 'Duty', 'Where, what'].map(th),
+            ...d.duties.map((r) => [r[0], { text: r[1], bold: r[0] === 'Suggested duty' }, r[2]]),
+          ],
+        },
+      },
       ...trafficChart(s, d),
       { text: 'Traffic at the base duty', style: 'h2' },
-      { table: { headerRows: 1, dontBreakRows: true, widths: ['auto', '*', 'auto', 'auto', '*', 'auto'], body: [d.trafficHeaders.map(th), ...d.traffic.map((r) => r.map((v) => (v === null ? '—' : typeof v === 'number' ? v.toLocaleString('en-US') : v)))] }, fontSize: 7.5 },
+      {
+        table: {
+          headerRows: 1,
+          dontBreakRows: true,
+          widths: ['auto', '*', 'auto', 'auto', '*', 'auto'],
+          body: [
+            d.trafficHeaders.map(th),
+            ...d.traffic.map((r) => r.map((v) => (v === null ? '—' : typeof v === 'number' ? v.toLocaleString('en-US') : v))),
+          ],
+        },
+        fontSize: 7.5,
+      },
       s.reviews.length ? { text: 'Review record', style: 'h2' } : '',
-      s.reviews.length ? { table: { headerRows: 1, widths: ['auto', 'auto', 'auto', '*'], body: [['When', 'Who', 'Action', 'Comment'].map(th), ...s.reviews.map((r) => [pdfDateTime(r.at), r.userName, ACTION_WORDS[r.action], r.comment || '—'])] } } : '',
+      s.reviews.length
+        ? {
+            table: {
+              headerRows: 1,
+              widths: ['auto', 'auto', 'auto', '*'],
+              body: [
+                ['When', 'Who', 'Action', 'Comment'].map(th),
+                ...s.reviews.map((r) => [pdfDateTime(r.at), r.userName, ACTION_WORDS[r.action], r.comment || '—']),
+              ],
+            },
+          }
+        : '',
       d.notes.length ? { text: 'Notes', style: 'h2' } : '',
       d.notes.length ? { ul: d.notes, fontSize: 7.5 } : '',
     ],
@@ -63,10 +118,18 @@ export function studyReportDoc(s: StudyRecord, sys: SessionUser['unitSystem'], p
 /** CSV blocks one after another, each under a title line; text cells that look like formulas are escaped. */
 export function studyCsv(d: StudyReportData): Buffer {
   const rows: (string | number | null)[][] = [
-    ['Inputs'], ...d.inputs, [],
-    ['Duties found', 'Duty', 'Where, what'], ...d.duties, [],
-    ['Traffic at the base duty'], d.trafficHeaders, ...d.traffic, [],
-    ['Cautions'], ...d.cautions.map((c) => [c]),
+    ['Inputs'],
+    ...d.inputs,
+    [],
+    ['Duties found', 'Duty', 'Where, what'],
+    ...d.duties,
+    [],
+    ['Traffic at the base duty'],
+    d.trafficHeaders,
+    ...d.traffic,
+    [],
+    ['Cautions'],
+    ...d.cautions.map((c) => [c]),
   ];
   return Buffer.from(stringify(rows, { escape_formulas: true, record_delimiter: 'windows' }), 'utf8');
 }
@@ -83,7 +146,12 @@ export async function studyXlsx(d: StudyReportData): Promise<Buffer> {
   sheet('Inputs', null, d.inputs, [34, 70]);
   sheet('Duties found', ['', 'Duty', 'Where, what'], d.duties, [24, 26, 80]);
   sheet('Traffic at base', d.trafficHeaders, d.traffic, [8, 20, 16, 16, 24, 12]);
-  sheet('Cautions', null, d.cautions.map((c) => [c]), [130]);
+  sheet(
+    'Cautions',
+    null,
+    d.cautions.map((c) => [c]),
+    [130],
+  );
   return Buffer.from(await wb.xlsx.writeBuffer());
 }
 
@@ -98,5 +166,9 @@ export async function exportStudy(ds: DataSource, user: SessionUser, id: string,
   const base = `${s.columnTag}-${s.label}-study`.replace(/[^\w.-]+/g, '_').slice(0, 80);
   return format === 'csv'
     ? { fileName: `${base}.csv`, contentType: 'text/csv; charset=utf-8', body: studyCsv(d) }
-    : { fileName: `${base}.xlsx`, contentType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', body: await studyXlsx(d) };
+    : {
+        fileName: `${base}.xlsx`,
+        contentType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+        body: await studyXlsx(d),
+      };
 }

@@ -34,7 +34,18 @@ export const findingsSchema = {
     debris: { type: 'boolean' },
     notes: lines(2000),
   },
-  required: ['fouling', 'blockedPercent', 'corrosion', 'damage', 'valvesMissing', 'valvesStuck', 'looseFasteners', 'manwayInstalled', 'closureWitnessed', 'debris'],
+  required: [
+    'fouling',
+    'blockedPercent',
+    'corrosion',
+    'damage',
+    'valvesMissing',
+    'valvesStuck',
+    'looseFasteners',
+    'manwayInstalled',
+    'closureWitnessed',
+    'debris',
+  ],
   additionalProperties: false,
 } as const;
 
@@ -58,7 +69,13 @@ export const rulesSchema = {
     levelnessClass: { type: 'string', enum: ['A', 'B'] },
     project: {
       type: 'object',
-      properties: { id: text(60), name: { type: 'string', minLength: 1, maxLength: 200 }, source: { type: 'string', minLength: 1, maxLength: 300 }, note: lines(1000), rules: { type: 'array', items: ruleSchema, maxItems: 10 } },
+      properties: {
+        id: text(60),
+        name: { type: 'string', minLength: 1, maxLength: 200 },
+        source: { type: 'string', minLength: 1, maxLength: 300 },
+        note: lines(1000),
+        rules: { type: 'array', items: ruleSchema, maxItems: 10 },
+      },
       required: ['id', 'name', 'source', 'rules'],
       additionalProperties: false,
     },
@@ -94,12 +111,18 @@ export const updateInspectionBody = {
 
 export const saveTrayBody = {
   type: 'object',
-  properties: { findings: findingsSchema, asFound: measurementsSchema, asLeft: measurementsSchema, version: { type: 'integer', minimum: 1 } },
+  properties: {
+    findings: findingsSchema,
+    asFound: measurementsSchema,
+    asLeft: measurementsSchema,
+    version: { type: 'integer', minimum: 1 },
+  },
   required: ['findings', 'asFound', 'asLeft'],
   additionalProperties: false,
 } as const;
 
-const nullableInt = (min: number, max: number) => ({ anyOf: [{ type: 'integer', minimum: min, maximum: max }, { type: 'null' }] }) as const;
+const nullableInt = (min: number, max: number) =>
+  ({ anyOf: [{ type: 'integer', minimum: min, maximum: max }, { type: 'null' }] }) as const;
 
 export const createPunchBody = {
   type: 'object',
@@ -129,7 +152,12 @@ export const updatePunchBody = {
   additionalProperties: false,
 } as const;
 
-export const signBody = { type: 'object', properties: { version: { type: 'integer', minimum: 1 } }, required: ['version'], additionalProperties: false } as const;
+export const signBody = {
+  type: 'object',
+  properties: { version: { type: 'integer', minimum: 1 } },
+  required: ['version'],
+  additionalProperties: false,
+} as const;
 
 export const asFoundBody = {
   type: 'object',
@@ -151,12 +179,26 @@ export const inspectionListQuery = {
 const uuid = { type: 'string', format: 'uuid' } as const;
 export const trayParams = {
   type: 'object',
-  properties: { id: uuid, tray: { type: 'integer', minimum: 1, maximum: 500 }, pass: { type: 'integer', minimum: 1, maximum: 4 } },
+  properties: {
+    id: uuid,
+    tray: { type: 'integer', minimum: 1, maximum: 500 },
+    pass: { type: 'integer', minimum: 1, maximum: 4 },
+  },
   required: ['id', 'tray', 'pass'],
   additionalProperties: false,
 } as const;
-export const punchParams = { type: 'object', properties: { id: uuid, itemId: uuid }, required: ['id', 'itemId'], additionalProperties: false } as const;
-export const photoParams = { type: 'object', properties: { id: uuid, photoId: uuid }, required: ['id', 'photoId'], additionalProperties: false } as const;
+export const punchParams = {
+  type: 'object',
+  properties: { id: uuid, itemId: uuid },
+  required: ['id', 'itemId'],
+  additionalProperties: false,
+} as const;
+export const photoParams = {
+  type: 'object',
+  properties: { id: uuid, photoId: uuid },
+  required: ['id', 'photoId'],
+  additionalProperties: false,
+} as const;
 export const photoQuery = {
   type: 'object',
   properties: { size: { type: 'string', enum: ['original', 'thumb'], default: 'original' } },

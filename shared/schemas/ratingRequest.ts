@@ -41,9 +41,19 @@ export const sectionGeometrySchema = {
   type: 'object',
   additionalProperties: false,
   required: [
-    'trayType', 'passes', 'columnDiameter_m', 'traySpacing_mm', 'activeArea_m2', 'downcomerTopArea_m2',
-    'downcomerBottomArea_m2', 'outletWeirLength_m', 'weirHeight_mm', 'downcomerClearance_mm', 'holeArea_m2',
-    'holeDiameter_mm', 'deckThickness_mm',
+    'trayType',
+    'passes',
+    'columnDiameter_m',
+    'traySpacing_mm',
+    'activeArea_m2',
+    'downcomerTopArea_m2',
+    'downcomerBottomArea_m2',
+    'outletWeirLength_m',
+    'weirHeight_mm',
+    'downcomerClearance_mm',
+    'holeArea_m2',
+    'holeDiameter_mm',
+    'deckThickness_mm',
   ],
   properties: {
     trayType: { type: 'string', enum: ['sieve', 'fixed-valve', 'moving-valve'] },
@@ -71,7 +81,14 @@ export const sectionGeometrySchema = {
 export const trayLoadSchema = {
   type: 'object',
   additionalProperties: false,
-  required: ['tray', 'vapourMassFlow_kg_h', 'liquidMassFlow_kg_h', 'vapourDensity_kg_m3', 'liquidDensity_kg_m3', 'surfaceTension_mN_m'],
+  required: [
+    'tray',
+    'vapourMassFlow_kg_h',
+    'liquidMassFlow_kg_h',
+    'vapourDensity_kg_m3',
+    'liquidDensity_kg_m3',
+    'surfaceTension_mN_m',
+  ],
   properties: {
     tray: { type: 'integer', minimum: 0, maximum: 100000 },
     vapourMassFlow_kg_h: nonNegative(1e8),

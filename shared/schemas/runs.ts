@@ -30,7 +30,10 @@ export const reviewActionBody = {
 export const reviewDecisionBody = {
   ...reviewActionBody,
   required: ['version', 'comment'],
-  properties: { ...reviewActionBody.properties, comment: { type: 'string', minLength: 1, maxLength: 4000, 'x-text': 'multiline' } },
+  properties: {
+    ...reviewActionBody.properties,
+    comment: { type: 'string', minLength: 1, maxLength: 4000, 'x-text': 'multiline' },
+  },
 } as const;
 
 export const runWindowParams = {

@@ -265,7 +265,17 @@ export interface AsFoundResult {
   designRunId: string;
   asFoundRunId: string;
   /** geometry used per section id (after measurements, plugging and missing valves) */
-  geometry: Record<string, { weirHeight_mm: number; downcomerClearance_mm: number; holeArea_m2: number; valveCount: number | null; blockedPercent: number; trays: number[] }>;
+  geometry: Record<
+    string,
+    {
+      weirHeight_mm: number;
+      downcomerClearance_mm: number;
+      holeArea_m2: number;
+      valveCount: number | null;
+      blockedPercent: number;
+      trays: number[];
+    }
+  >;
   design: { controllingTray: number; controllingCheck: string; maxPercentOfLimit: number };
   asFound: { controllingTray: number; controllingCheck: string; maxPercentOfLimit: number };
   trays: AsFoundTrayChange[];

@@ -114,6 +114,4 @@ export interface StudyResult {
   points: StudyPoint[];
 }
 
-export type StudyValidation =
-  | { ok: true; value: StudyInput }
-  | { ok: false; errors: { path: string; message: string }[] };
+export type StudyValidation = { ok: true; value: StudyInput } | { ok: false; errors: { path: string; message: string }[] };

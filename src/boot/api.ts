@@ -74,8 +74,7 @@ async function request<T>(method: string, url: string, opts: RequestOptions = {}
     if (res.status === 401 && !url.startsWith('/auth/sign-in')) {
       onUnauthorized?.();
       const current = router?.currentRoute.value;
-      if (router && current?.name !== 'sign-in')
-        void router.push({ name: 'sign-in', query: { redirect: current?.fullPath } });
+      if (router && current?.name !== 'sign-in') void router.push({ name: 'sign-in', query: { redirect: current?.fullPath } });
     } else if (!opts.quiet && !opts.quietFor?.includes(res.status)) {
       Notify.create({ type: 'negative', message: describeApiError(body), multiLine: true });
     }

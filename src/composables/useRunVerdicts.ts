@@ -23,7 +23,11 @@ export function useRunVerdicts(run: Ref<RunRecord>) {
   const sections = computed<SectionVerdict[]>(() =>
     run.value.results.sections.map((section) => {
       const trays = run.value.results.trays.filter((t) => t.sectionId === section.sectionId);
-      const coverage = sectionCoverage(section.firstTray, section.lastTray, trays.map((t) => t.tray));
+      const coverage = sectionCoverage(
+        section.firstTray,
+        section.lastTray,
+        trays.map((t) => t.tray),
+      );
       return {
         section,
         coverage,

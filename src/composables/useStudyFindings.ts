@@ -60,7 +60,7 @@ export function trayList(trays: readonly number[]): string {
   const t = [...new Set(trays)].sort((a, b) => a - b);
   if (t.length === 1) return `tray ${t[0]}`;
   const parts: string[] = [];
-  for (let i = 0; i < t.length; ) {
+  for (let i = 0; i < t.length;) {
     let j = i;
     while (j + 1 < t.length && t[j + 1] === t[j]! + 1) j++;
     if (j - i >= 2) parts.push(`${t[i]}–${t[j]}`);
@@ -82,7 +82,9 @@ export interface BaseAboveSuggested {
   baseShareOfDryOut: number | null;
 }
 
-export function baseAboveSuggested(r: Pick<SlimStudyResult, 'baseDuty_kW' | 'recommendedDuty_kW' | 'dryOutDuty_kW'>): BaseAboveSuggested | null {
+export function baseAboveSuggested(
+  r: Pick<SlimStudyResult, 'baseDuty_kW' | 'recommendedDuty_kW' | 'dryOutDuty_kW'>,
+): BaseAboveSuggested | null {
   const s = r.recommendedDuty_kW;
   if (s === null || !(r.baseDuty_kW > s)) return null;
   const dry = r.dryOutDuty_kW;

@@ -19,7 +19,8 @@ export const useInspectionStore = defineStore('inspection', () => {
   const rec = ref<InspectionRecord | null>(null);
   const url = (suffix = '') => `/inspections/${rec.value!.id}${suffix}`;
 
-  const list = async (columnId?: string) => (await api.get<{ items: InspectionSummary[] }>('/inspections', { query: { columnId } })).items;
+  const list = async (columnId?: string) =>
+    (await api.get<{ items: InspectionSummary[] }>('/inspections', { query: { columnId } })).items;
   const create = (body: CreateInspectionBody) => api.post<InspectionRecord>('/inspections', body);
   async function load(id: string, opts?: RequestOptions): Promise<void> {
     if (rec.value?.id !== id) rec.value = null; // never show another inspection under this address

@@ -32,16 +32,25 @@ const json = (agent: Agent, url: string) => agent.post(url).set('Content-Type', 
 
 describe('malformed requests answer 4xx naming the fault', () => {
   it('ids: urn:uuid:, braces, truncated and badly percent-encoded ids', async () => {
-    for (const id of [`urn:uuid:${FAKE}`, `{${FAKE}}`, FAKE.slice(0, 30), 'Infinity']) expectFault(await engineer.get(`/api/columns/${id}`), 400, 'id');
+    for (const id of [`urn:uuid:${FAKE}`, `{${FAKE}}`, FAKE.slice(0, 30), 'Infinity'])
+      expectFault(await engineer.get(`/api/columns/${id}`), 400, 'id');
     expectFault(await engineer.get('/api/columns/%E0%A4%A'), 400, '(url)');
     expectFault(await engineer.get(`/api/runs?columnId=urn:uuid:${FAKE}`), 400, 'columnId');
   });
 
   it('charset and content encoding: unsupported ones are 415, a corrupt gzip or br body is 400', async () => {
-    expectFault(await json(admin, '/api/sites').set('Content-Type', 'application/json; charset=klingon').send('{"name":"x"}'), 415, 'Content-Type');
+    expectFault(
+      await json(admin, '/api/sites').set('Content-Type', 'application/json; charset=klingon').send('{"name":"x"}'),
+      415,
+      'Content-Type',
+    );
     expectFault(await json(admin, '/api/sites').set('Content-Encoding', 'zstd').send('{"name":"x"}'), 415, 'Content-Encoding');
     for (const enc of ['gzip', 'br', 'deflate'])
-      expectFault(await json(admin, '/api/sites').set('Content-Encoding', enc).send(Buffer.from('not compressed')), 400, 'Content-Encoding');
+      expectFault(
+        await json(admin, '/api/sites').set('Content-Encoding', enc).send(Buffer.from('not compressed')),
+        400,
+        'Content-Encoding',
+      );
   });
 
   it('text: NUL, other control characters and lone surrogates are refused naming the field', async () => {

@@ -52,9 +52,14 @@ export async function twoRuns(ctx: TestContext, plant: Plant, label: string) {
   const { agent: engineer } = await signedIn(ctx, 'process-engineer', [plant.siteId]);
   expect((await specialist.post(`/api/columns/${plant.columnId}/sections`).send(section(1, 8, 'Top'))).status).toBe(201);
   const lc = (
-    await engineer.post(`/api/columns/${plant.columnId}/load-cases`).send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 8) })
+    await engineer
+      .post(`/api/columns/${plant.columnId}/load-cases`)
+      .send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 8) })
   ).body.id;
-  const current = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Current' })).body as { id: string };
-  const other = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label })).body as { id: string };
+  const current = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Current' }))
+    .body as { id: string };
+  const other = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label })).body as {
+    id: string;
+  };
   return { engineer, current, other };
 }

@@ -46,7 +46,9 @@ describe("a column's engineer", () => {
 
   it('must hold the engineer permission, be active and see the site', async () => {
     const inspector = await makeUser(ctx.ds, 'inspector', [fx.siteId]);
-    expect(refusal(await putEngineer(inspector.id))).toMatch(/is inspector; a column's engineer is a process engineer or internals specialist/);
+    expect(refusal(await putEngineer(inspector.id))).toMatch(
+      /is inspector; a column's engineer is a process engineer or internals specialist/,
+    );
     const elsewhere = await makeUser(ctx.ds, 'process-engineer');
     expect(refusal(await putEngineer(elsewhere.id))).toMatch(/no access to this column's site/);
     const gone = await makeUser(ctx.ds, 'process-engineer', [fx.siteId]);
@@ -78,9 +80,13 @@ describe("a column's engineer", () => {
 
 describe('inspection countersignature', () => {
   async function signedInspection(inspector: Agent): Promise<{ id: string; version: number }> {
-    const c = await inspector.post('/api/inspections').send({ columnId: fx.columnId, turnaround: 'TA-duties', startDate: '2026-04-01', permitRef: 'P', gasTestRef: 'G' });
+    const c = await inspector
+      .post('/api/inspections')
+      .send({ columnId: fx.columnId, turnaround: 'TA-duties', startDate: '2026-04-01', permitRef: 'P', gasTestRef: 'G' });
     expect(c.status, JSON.stringify(c.body)).toBe(201);
-    const t = await inspector.put(`/api/inspections/${c.body.id}/trays/1/1`).send({ findings: cleanFindings, asFound: noMeasurements, asLeft: noMeasurements });
+    const t = await inspector
+      .put(`/api/inspections/${c.body.id}/trays/1/1`)
+      .send({ findings: cleanFindings, asFound: noMeasurements, asLeft: noMeasurements });
     const s = await inspector.post(`/api/inspections/${c.body.id}/sign/inspector`).send({ version: t.body.version });
     expect(s.status, JSON.stringify(s.body)).toBe(200);
     return { id: c.body.id, version: s.body.version };
@@ -103,7 +109,9 @@ describe('inspection countersignature', () => {
     const insp = await signedInspection((await signedIn(ctx, 'inspector', [fx.siteId])).agent);
     const { agent: eng, user } = await signedIn(ctx, 'process-engineer', [fx.siteId]);
     const col = await specialist.get(`/api/columns/${fx.columnId}`);
-    expect((await specialist.put(`/api/columns/${fx.columnId}`).send({ engineerId: user.id, version: col.body.version })).status).toBe(200);
+    expect(
+      (await specialist.put(`/api/columns/${fx.columnId}`).send({ engineerId: user.id, version: col.body.version })).status,
+    ).toBe(200);
     await setRole(user.id, 'viewer');
     const res = await eng.post(`/api/inspections/${insp.id}/sign/engineer`).send({ version: insp.version });
     expect(res.status).toBe(403);
@@ -122,7 +130,9 @@ describe('review approval is never given by the author', () => {
     const sub = await specialist.post(`/api/runs/${created.body.id}/submit`).send({ version: created.body.version });
     expect(sub.status).toBe(200);
     for (const action of ['approve', 'return']) {
-      const own = await specialist.post(`/api/runs/${created.body.id}/${action}`).send({ version: sub.body.version, comment: 'mine' });
+      const own = await specialist
+        .post(`/api/runs/${created.body.id}/${action}`)
+        .send({ version: sub.body.version, comment: 'mine' });
       expect(own.status).toBe(403);
       expect(own.body.error).toMatch(/cannot review your own run/);
     }
@@ -135,7 +145,9 @@ describe('review approval is never given by the author', () => {
   it('pump-around study: the author cannot approve it; another reviewer can', async () => {
     const sfx = await makeStudyColumn(ctx.ds);
     const author = (await signedIn(ctx, 'internals-specialist', [sfx.siteId])).agent;
-    const s = await author.post(`/api/columns/${sfx.columnId}/studies`).send({ ...exampleBody(sfx), label: `Duties study ${Date.now().toString(36)}` });
+    const s = await author
+      .post(`/api/columns/${sfx.columnId}/studies`)
+      .send({ ...exampleBody(sfx), label: `Duties study ${Date.now().toString(36)}` });
     expect(s.status, JSON.stringify(s.body)).toBe(201);
     const sub = await author.post(`/api/studies/${s.body.id}/submit`).send({ version: s.body.version });
     expect(sub.status).toBe(200);

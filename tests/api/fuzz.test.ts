@@ -33,7 +33,10 @@ beforeAll(async () => {
     const user = await makeUser(ctx.ds, role, [plant.siteId]);
     const res = await request(server).post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
     if (res.status !== 200) throw new Error(`sign-in failed: ${res.status}`);
-    cookies[role] = ([] as string[]).concat(res.headers['set-cookie'] ?? []).map((c) => c.split(';')[0]).join('; ');
+    cookies[role] = ([] as string[])
+      .concat(res.headers['set-cookie'] ?? [])
+      .map((c) => c.split(';')[0])
+      .join('; ');
   }
 });
 afterAll(async () => {
@@ -76,8 +79,12 @@ describe('no malformed request answers 5xx', () => {
         await Promise.all(
           cases.slice(i, i + CONCURRENCY).map(async ([req, role]) => {
             const res = await send(req, role && !sessionless ? cookies[role] : null);
-            const bad = res.status >= 500 || (res.status >= 400 && res.type === 'application/json' && typeof res.body.error !== 'string');
-            if (bad) failures.push(`${res.status} ${JSON.stringify(res.body)} as ${role ?? 'anonymous'} for ${JSON.stringify(req).slice(0, 600)}`);
+            const bad =
+              res.status >= 500 || (res.status >= 400 && res.type === 'application/json' && typeof res.body.error !== 'string');
+            if (bad)
+              failures.push(
+                `${res.status} ${JSON.stringify(res.body)} as ${role ?? 'anonymous'} for ${JSON.stringify(req).slice(0, 600)}`,
+              );
           }),
         );
       expect(failures, `seed ${SEED + index}`).toEqual([]);

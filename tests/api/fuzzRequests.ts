@@ -64,8 +64,29 @@ const oddValue: fc.Arbitrary<unknown> = fc.oneof(
 export function segment(realIds: string[]): fc.Arbitrary<string> {
   return fc.oneof(
     fc.constantFrom(...realIds, FAKE_ID),
-    fc.constantFrom(`urn:uuid:${FAKE_ID}`, `{${FAKE_ID}}`, FAKE_ID.toUpperCase(), FAKE_ID.slice(0, 30), FAKE_ID.replace(/-/g, '')),
-    fc.constantFrom('%E0%A4%A', '%ZZ', '%', '%00', '%ED%A0%80', '%C0%AF', '..', '%2e%2e', '-1', '0', '99999999999999999999', 'Infinity', 'NaN', '1e5'),
+    fc.constantFrom(
+      `urn:uuid:${FAKE_ID}`,
+      `{${FAKE_ID}}`,
+      FAKE_ID.toUpperCase(),
+      FAKE_ID.slice(0, 30),
+      FAKE_ID.replace(/-/g, ''),
+    ),
+    fc.constantFrom(
+      '%E0%A4%A',
+      '%ZZ',
+      '%',
+      '%00',
+      '%ED%A0%80',
+      '%C0%AF',
+      '..',
+      '%2e%2e',
+      '-1',
+      '0',
+      '99999999999999999999',
+      'Infinity',
+      'NaN',
+      '1e5',
+    ),
     fc.string({ maxLength: 40 }).map(enc),
   );
 }
@@ -77,7 +98,10 @@ function schemaKeys(schema: object | undefined): string[] {
 /** A query string: the schema's keys (and others) with odd, repeated, nested or badly encoded values. */
 function queryString(r: RouteDef): fc.Arbitrary<string> {
   const keys = [...schemaKeys(r.query), 'page', 'pageSize', 'format', 'x'];
-  const pair = fc.tuple(fc.constantFrom(...keys), fc.oneof(nastyText.map(enc), fc.constantFrom('%E0%A4%A', '%', 'Infinity', '-Infinity', '1e999', '1e20', '-5', '[]', 'a&b')));
+  const pair = fc.tuple(
+    fc.constantFrom(...keys),
+    fc.oneof(nastyText.map(enc), fc.constantFrom('%E0%A4%A', '%', 'Infinity', '-Infinity', '1e999', '1e20', '-5', '[]', 'a&b')),
+  );
   return fc.oneof(
     fc.array(pair, { maxLength: 4 }).map((ps) => ps.map(([k, v]) => `${k}=${v}`).join('&')),
     fc.constantFrom('page[a]=1', 'page=1&page=2', 'q[$ne]=1', '%E0%A4%A=1', '&&&', '=', 'columnId=urn:uuid:' + FAKE_ID),
@@ -88,7 +112,10 @@ function queryString(r: RouteDef): fc.Arbitrary<string> {
 function jsonBody(r: RouteDef): fc.Arbitrary<object | string> {
   const keys = schemaKeys(r.body);
   const fields = keys.length ? fc.dictionary(fc.constantFrom(...keys), oddValue, { maxKeys: keys.length }) : fc.constant({});
-  return fc.oneof(fields, fc.jsonValue({ maxDepth: 3 }).map((v) => (typeof v === 'object' && v !== null ? v : { value: v })));
+  return fc.oneof(
+    fields,
+    fc.jsonValue({ maxDepth: 3 }).map((v) => (typeof v === 'object' && v !== null ? v : { value: v })),
+  );
 }
 
 const garbage = Buffer.from('not compressed at all');
@@ -114,12 +141,51 @@ const rawBody: fc.Arbitrary<BodyPart> = fc.constantFrom<BodyPart>(
   { headers: { 'Content-Type': 'text/plain' }, body: 'hello' },
   { headers: { 'Content-Type': 'application/x-www-form-urlencoded' }, body: 'a=%E0%A4%A&b[c]=1' },
   { headers: { 'Content-Type': 'multipart/form-data' }, body: 'no boundary' },
-  { headers: { 'Content-Type': 'multipart/form-data; boundary=xyz' }, body: '--xyz\r\nContent-Disposition: form-data; name="file"' },
+  {
+    headers: { 'Content-Type': 'multipart/form-data; boundary=xyz' },
+    body: '--xyz\r\nContent-Disposition: form-data; name="file"',
+  },
   { headers: {}, multipart: { files: [{ field: 'wrong', name: 'a.png', data: garbage }], fields: [] } },
-  { headers: {}, multipart: { files: [{ field: 'photo', name: 'a.png', data: garbage }, { field: 'photo', name: 'b.png', data: garbage }], fields: [] } },
-  { headers: {}, multipart: { files: [{ field: 'file', name: 'a.csv', data: garbage }, { field: 'file', name: 'b.csv', data: garbage }], fields: [] } },
-  { headers: {}, multipart: { files: [{ field: 'file', name: 'a.xlsx', data: garbage }], fields: [['tray', '\u0000'], ['caption', '\ud800']] } },
-  { headers: {}, multipart: { files: [{ field: 'photo', name: 'a.png', data: garbage }], fields: [['tray', 'Infinity'], ['pass', '1e400']] } },
+  {
+    headers: {},
+    multipart: {
+      files: [
+        { field: 'photo', name: 'a.png', data: garbage },
+        { field: 'photo', name: 'b.png', data: garbage },
+      ],
+      fields: [],
+    },
+  },
+  {
+    headers: {},
+    multipart: {
+      files: [
+        { field: 'file', name: 'a.csv', data: garbage },
+        { field: 'file', name: 'b.csv', data: garbage },
+      ],
+      fields: [],
+    },
+  },
+  {
+    headers: {},
+    multipart: {
+      files: [{ field: 'file', name: 'a.xlsx', data: garbage }],
+      fields: [
+        ['tray', '\u0000'],
+        ['caption', '\ud800'],
+      ],
+    },
+  },
+  {
+    headers: {},
+    multipart: {
+      files: [{ field: 'photo', name: 'a.png', data: garbage }],
+      fields: [
+        ['tray', 'Infinity'],
+        ['pass', '1e400'],
+      ],
+    },
+  },
 );
 
 /** One malformed request to route `r`; `ids` are real record ids to put in the path now and then. */
@@ -129,12 +195,20 @@ export function fuzzRequest(r: RouteDef, ids: string[]): fc.Arbitrary<FuzzReques
     .record({
       segs: fc.tuple(...names.map(() => segment(ids))),
       query: fc.option(queryString(r), { freq: 2 }),
-      body: fc.oneof(jsonBody(r).map((body): BodyPart => ({ headers: {}, body })), rawBody),
+      body: fc.oneof(
+        jsonBody(r).map((body): BodyPart => ({ headers: {}, body })),
+        rawBody,
+      ),
       accept: fc.constantFrom('application/json', '*/*', 'text/html', 'image/png'),
     })
     .map(({ segs, query, body, accept }) => {
       let i = 0;
       const path = r.path.replace(/:(\w+)/g, () => segs[i++]!);
-      return { method: r.method, url: `/api${path}${query ? `?${query}` : ''}`, ...body, headers: { Accept: accept, ...body.headers } };
+      return {
+        method: r.method,
+        url: `/api${path}${query ? `?${query}` : ''}`,
+        ...body,
+        headers: { Accept: accept, ...body.headers },
+      };
     });
 }

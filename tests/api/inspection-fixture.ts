@@ -44,7 +44,9 @@ export interface InspectionFixture {
 export async function makeInspectionColumn(ds: DataSource, engineerId: string | null): Promise<InspectionFixture> {
   const k = randomUUID().slice(0, 6);
   const one = async (sql: string, p: unknown[]) => ((await ds.query(sql, p)) as { id: string }[])[0]!.id;
-  const siteId = await one(`INSERT INTO sites (name, location) VALUES ($1, 'invented test site') RETURNING id`, [`Inspection test site ${k}`]);
+  const siteId = await one(`INSERT INTO sites (name, location) VALUES ($1, 'invented test site') RETURNING id`, [
+    `Inspection test site ${k}`,
+  ]);
   const unitId = await one(`INSERT INTO process_units (site_id, name) VALUES ($1, 'Test unit') RETURNING id`, [siteId]);
   const tag = `X-204-${k}`;
   const columnId = await one(

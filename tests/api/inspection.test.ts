@@ -42,13 +42,17 @@ beforeAll(async () => {
   inspector = (await signedIn(ctx, 'inspector', [fx.siteId])).agent;
   engineer = request.agent(ctx.app);
   expect((await engineer.post('/api/auth/sign-in').send({ email: eng.email, password: TEST_PASSWORD })).status).toBe(200);
-  png = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#8a6d3b' } }).png().toBuffer();
+  png = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#8a6d3b' } })
+    .png()
+    .toBuffer();
 });
 afterAll(() => ctx.close());
 
 describe('inspections: records and tolerance checks', () => {
   it('an inspector starts an inspection and records a tray; measurements are checked against the section design (PIP VEFV1102)', async () => {
-    const c = await inspector.post('/api/inspections').send({ columnId: fx.columnId, turnaround: 'TA-test', startDate: '2026-03-02', permitRef: 'CSE-1', gasTestRef: 'GT-1' });
+    const c = await inspector
+      .post('/api/inspections')
+      .send({ columnId: fx.columnId, turnaround: 'TA-test', startDate: '2026-03-02', permitRef: 'CSE-1', gasTestRef: 'GT-1' });
     expect(c.status, JSON.stringify(c.body)).toBe(201);
     inspectionId = c.body.id;
     const t = await inspector.put(`/api/inspections/${inspectionId}/trays/3/1`).send({
@@ -58,10 +62,19 @@ describe('inspections: records and tolerance checks', () => {
     });
     expect(t.status, JSON.stringify(t.body)).toBe(200);
     const tray = t.body.trays[0];
-    expect(tray.design).toMatchObject({ weirHeight_mm: 50, downcomerClearance_mm: 38, traySpacing_mm: 610, columnDiameter_mm: 2000 });
+    expect(tray.design).toMatchObject({
+      weirHeight_mm: 50,
+      downcomerClearance_mm: 38,
+      traySpacing_mm: 610,
+      columnDiameter_mm: 2000,
+    });
     // design weir 50 mm ±1.6 mm: 51.0 passes, 52.0 fails; clearance 38.5 passes; levelness 4 mm ≤ 5 mm (class A, 1500–3000 mm); spacing +2 ≤ 3
     expect(tray.checks.asFound.map((x: { item: string; pass: boolean }) => `${x.item}:${x.pass}`)).toEqual([
-      'weirHeight:true', 'weirHeight:false', 'downcomerClearance:true', 'traySpacing:true', 'levelness:true',
+      'weirHeight:true',
+      'weirHeight:false',
+      'downcomerClearance:true',
+      'traySpacing:true',
+      'levelness:true',
     ]);
     expect(t.body.failedChecks).toBe(1);
     version = t.body.version;
@@ -69,11 +82,15 @@ describe('inspections: records and tolerance checks', () => {
 
   it('bad measurements are refused naming the field', async () => {
     const r = await inspector.put(`/api/inspections/${inspectionId}/trays/4/1`).send({
-      findings: cleanFindings, asFound: { ...noMeasurements, weirHeight_mm: [-3] }, asLeft: noMeasurements,
+      findings: cleanFindings,
+      asFound: { ...noMeasurements, weirHeight_mm: [-3] },
+      asLeft: noMeasurements,
     });
     expect(r.status).toBe(400);
     expect(r.body.details[0].path).toMatch(/asFound\.weirHeight_mm/);
-    const r2 = await inspector.put(`/api/inspections/${inspectionId}/trays/40/1`).send({ findings: cleanFindings, asFound: noMeasurements, asLeft: noMeasurements });
+    const r2 = await inspector
+      .put(`/api/inspections/${inspectionId}/trays/40/1`)
+      .send({ findings: cleanFindings, asFound: noMeasurements, asLeft: noMeasurements });
     expect(r2.status).toBe(400);
     expect(r2.body.details[0]).toMatchObject({ path: 'tray' });
   });
@@ -82,7 +99,11 @@ describe('inspections: records and tolerance checks', () => {
 describe('inspection photos', () => {
   let photoId: string;
   it('accepts a PNG, stores it with a thumbnail and streams both back', async () => {
-    const r = await inspector.post(`/api/inspections/${inspectionId}/photos`).field('tray', '3').field('finding', 'fouling').attach('photo', png, 'deck.png');
+    const r = await inspector
+      .post(`/api/inspections/${inspectionId}/photos`)
+      .field('tray', '3')
+      .field('finding', 'fouling')
+      .attach('photo', png, 'deck.png');
     expect(r.status, JSON.stringify(r.body)).toBe(201);
     expect(r.body).toMatchObject({ contentType: 'image/png', width: 64, height: 48, tray: 3 });
     photoId = r.body.id;
@@ -96,7 +117,9 @@ describe('inspection photos', () => {
   });
 
   it('refuses a file that is not JPEG, PNG or WebP by content, whatever its name and declared type', async () => {
-    const r = await inspector.post(`/api/inspections/${inspectionId}/photos`).attach('photo', Buffer.from('%PDF-1.7 not a photo'), { filename: 'x.jpg', contentType: 'image/jpeg' });
+    const r = await inspector
+      .post(`/api/inspections/${inspectionId}/photos`)
+      .attach('photo', Buffer.from('%PDF-1.7 not a photo'), { filename: 'x.jpg', contentType: 'image/jpeg' });
     expect(r.status).toBe(400);
     expect(r.body.error).toBe('Unsupported photo type');
     expect(r.body.details[0]).toMatchObject({ path: 'photo' });
@@ -131,7 +154,9 @@ describe('inspection photos', () => {
 
 describe('rating as found', () => {
   it('plugged holes give a higher dry pressure drop than design on the same load case', async () => {
-    const r = await engineer.post(`/api/inspections/${inspectionId}/as-found`).send({ loadCaseId: fx.loadCaseId, combine: 'average' });
+    const r = await engineer
+      .post(`/api/inspections/${inspectionId}/as-found`)
+      .send({ loadCaseId: fx.loadCaseId, combine: 'average' });
     expect(r.status, JSON.stringify(r.body)).toBe(201);
     const g = r.body.geometry[fx.sectionId];
     expect(g.blockedPercent).toBe(30);
@@ -148,7 +173,8 @@ describe('rating as found', () => {
   it('its two runs stay out of the column page and the run list unless asked for', async () => {
     const col = await engineer.get(`/api/columns/${fx.columnId}`);
     const ids = (xs: { id: string; kind: string }[]) => xs.map((x) => x.id);
-    const kinds = async (q: string) => (await engineer.get(`/api/runs?columnId=${fx.columnId}${q}`)).body.items as { id: string; kind: string }[];
+    const kinds = async (q: string) =>
+      (await engineer.get(`/api/runs?columnId=${fx.columnId}${q}`)).body.items as { id: string; kind: string }[];
     const everything = await kinds('&inspection=true');
     const design = everything.find((x) => x.kind === 'as-found-design');
     const asFound = everything.find((x) => x.kind === 'as-found');
@@ -162,7 +188,14 @@ describe('rating as found', () => {
 describe('punch list and sign-off', () => {
   let itemId: string;
   it('an open before-box-up punch item blocks the inspector signature (409)', async () => {
-    const p = await inspector.post(`/api/inspections/${inspectionId}/punch`).send({ tray: 3, pass: 1, finding: 'Deck 30 % plugged', action: 'Hydro-blast deck', priority: 'before-box-up', owner: 'Contractor' });
+    const p = await inspector.post(`/api/inspections/${inspectionId}/punch`).send({
+      tray: 3,
+      pass: 1,
+      finding: 'Deck 30 % plugged',
+      action: 'Hydro-blast deck',
+      priority: 'before-box-up',
+      owner: 'Contractor',
+    });
     expect(p.status).toBe(201);
     itemId = p.body.punch[0].id;
     const s = await inspector.post(`/api/inspections/${inspectionId}/sign/inspector`).send({ version: p.body.version });
@@ -178,7 +211,9 @@ describe('punch list and sign-off', () => {
 
   it('closing the item records who and when; the inspector signs and the column engineer is e-mailed', async () => {
     const cur = await inspector.get(`/api/inspections/${inspectionId}`);
-    const c = await inspector.patch(`/api/inspections/${inspectionId}/punch/${itemId}`).send({ status: 'closed', version: cur.body.punch[0].version });
+    const c = await inspector
+      .patch(`/api/inspections/${inspectionId}/punch/${itemId}`)
+      .send({ status: 'closed', version: cur.body.punch[0].version });
     expect(c.status).toBe(200);
     expect(c.body.punch[0].closedAt).toBeTruthy();
     expect(c.body.punch[0].closedByName).toMatch(/inspector/);
@@ -192,11 +227,19 @@ describe('punch list and sign-off', () => {
   });
 
   it('a signed record is read-only: tray, header, punch and photo edits answer 409', async () => {
-    const t = await inspector.put(`/api/inspections/${inspectionId}/trays/5/1`).send({ findings: cleanFindings, asFound: noMeasurements, asLeft: noMeasurements });
+    const t = await inspector
+      .put(`/api/inspections/${inspectionId}/trays/5/1`)
+      .send({ findings: cleanFindings, asFound: noMeasurements, asLeft: noMeasurements });
     expect(t.status).toBe(409);
     expect(t.body.error).toMatch(/read-only/);
     expect((await inspector.patch(`/api/inspections/${inspectionId}`).send({ notes: 'x', version })).status).toBe(409);
-    expect((await inspector.post(`/api/inspections/${inspectionId}/punch`).send({ finding: 'f', action: 'a', priority: 'next-turnaround' })).status).toBe(409);
+    expect(
+      (
+        await inspector
+          .post(`/api/inspections/${inspectionId}/punch`)
+          .send({ finding: 'f', action: 'a', priority: 'next-turnaround' })
+      ).status,
+    ).toBe(409);
     expect((await inspector.post(`/api/inspections/${inspectionId}/photos`).attach('photo', png, 'late.png')).status).toBe(409);
   });
 
@@ -212,11 +255,14 @@ describe('punch list and sign-off', () => {
 
 describe('PDF report', () => {
   it('renders a PDF with the shipped font for a signed inspection', async () => {
-    const r = await inspector.get(`/api/inspections/${inspectionId}/report.pdf`).buffer(true).parse((res, cb) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const r = await inspector
+      .get(`/api/inspections/${inspectionId}/report.pdf`)
+      .buffer(true)
+      .parse((res, cb) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(r.status).toBe(200);
     expect(r.headers['content-type']).toBe('application/pdf');
     const pdf = r.body as Buffer;
@@ -229,17 +275,36 @@ describe('PDF report', () => {
 describe('project rule set', () => {
   it('an inspection may check against a user-entered project set; an empty project set is refused naming the field', async () => {
     const bad = await inspector.post('/api/inspections').send({
-      columnId: fx.columnId, turnaround: 'TA-project', startDate: '2026-03-02',
-      rules: { kind: 'project', levelnessClass: 'A', project: { id: 'p', name: 'Project sheet', source: 'project spec', rules: [] } },
+      columnId: fx.columnId,
+      turnaround: 'TA-project',
+      startDate: '2026-03-02',
+      rules: {
+        kind: 'project',
+        levelnessClass: 'A',
+        project: { id: 'p', name: 'Project sheet', source: 'project spec', rules: [] },
+      },
     });
     expect(bad.status).toBe(400);
     expect(bad.body.details[0].path).toBe('rules.project');
     const c = await inspector.post('/api/inspections').send({
-      columnId: fx.columnId, turnaround: 'TA-project', startDate: '2026-03-02',
-      rules: { kind: 'project', levelnessClass: 'A', project: { id: 'p', name: 'Project sheet', source: 'project spec rev B', rules: [{ item: 'weirHeight', label: 'Weir ±', plusMinus_mm: 1, source: 'project spec rev B' }] } },
+      columnId: fx.columnId,
+      turnaround: 'TA-project',
+      startDate: '2026-03-02',
+      rules: {
+        kind: 'project',
+        levelnessClass: 'A',
+        project: {
+          id: 'p',
+          name: 'Project sheet',
+          source: 'project spec rev B',
+          rules: [{ item: 'weirHeight', label: 'Weir ±', plusMinus_mm: 1, source: 'project spec rev B' }],
+        },
+      },
     });
     expect(c.status).toBe(201);
-    const t = await inspector.put(`/api/inspections/${c.body.id}/trays/2/1`).send({ findings: cleanFindings, asFound: { ...noMeasurements, weirHeight_mm: [51.5] }, asLeft: noMeasurements });
+    const t = await inspector
+      .put(`/api/inspections/${c.body.id}/trays/2/1`)
+      .send({ findings: cleanFindings, asFound: { ...noMeasurements, weirHeight_mm: [51.5] }, asLeft: noMeasurements });
     // 1.5 mm high passes PIP (±1.6 mm) but fails the project's ±1 mm
     expect(t.body.trays[0].checks.asFound[0]).toMatchObject({ pass: false, tolerance: 1, source: 'project spec rev B' });
     expect(t.body.ruleSet.name).toBe('Project sheet');
@@ -248,14 +313,20 @@ describe('project rule set', () => {
 
 describe('draft edits with optimistic locking', () => {
   it('the header is edited with its version; a stale version or a stale tray record answers 409', async () => {
-    const c = await inspector.post('/api/inspections').send({ columnId: fx.columnId, turnaround: 'TA-lock', startDate: '2026-03-02' });
-    const e = await inspector.patch(`/api/inspections/${c.body.id}`).send({ permitRef: 'CSE-9', endDate: '2026-03-20', version: c.body.version });
+    const c = await inspector
+      .post('/api/inspections')
+      .send({ columnId: fx.columnId, turnaround: 'TA-lock', startDate: '2026-03-02' });
+    const e = await inspector
+      .patch(`/api/inspections/${c.body.id}`)
+      .send({ permitRef: 'CSE-9', endDate: '2026-03-20', version: c.body.version });
     expect(e.status, JSON.stringify(e.body)).toBe(200);
     expect(e.body).toMatchObject({ permitRef: 'CSE-9', endDate: '2026-03-20' });
     const stale = await inspector.patch(`/api/inspections/${c.body.id}`).send({ notes: 'x', version: c.body.version });
     expect(stale.status).toBe(409);
     expect(stale.body.details[0].path).toBe('version');
-    const before = await inspector.patch(`/api/inspections/${c.body.id}`).send({ endDate: '2026-02-01', version: e.body.version });
+    const before = await inspector
+      .patch(`/api/inspections/${c.body.id}`)
+      .send({ endDate: '2026-02-01', version: e.body.version });
     expect(before.status).toBe(400);
     expect(before.body.details[0].path).toBe('endDate');
 

@@ -20,7 +20,11 @@ async function waitForMail(subject: string, timeoutMs = 8000): Promise<{ to: str
   for (;;) {
     if (existsSync(config.mailboxDir))
       for (const f of readdirSync(config.mailboxDir).filter((n) => n.endsWith('.json'))) {
-        const m = JSON.parse(readFileSync(path.join(config.mailboxDir, f), 'utf8')) as { to: string[]; subject: string; text: string };
+        const m = JSON.parse(readFileSync(path.join(config.mailboxDir, f), 'utf8')) as {
+          to: string[];
+          subject: string;
+          text: string;
+        };
         if (m.subject === subject) return m;
       }
     if (Date.now() - t0 > timeoutMs) throw new Error(`no mail with subject "${subject}" in ${config.mailboxDir}`);
@@ -36,7 +40,10 @@ describe('mail outbox', () => {
     const m = await waitForMail(subject);
     expect(m.to).toEqual(['someone@test.example']);
     expect(m.text).toContain('Hello');
-    const rows = (await ctx.ds.query(`SELECT status, attempts FROM mail_outbox WHERE subject = $1`, [subject])) as { status: string; attempts: number }[];
+    const rows = (await ctx.ds.query(`SELECT status, attempts FROM mail_outbox WHERE subject = $1`, [subject])) as {
+      status: string;
+      attempts: number;
+    }[];
     expect(rows[0]).toEqual({ status: 'sent', attempts: 1 });
   });
 
@@ -60,10 +67,18 @@ describe('mail outbox', () => {
     });
     const [queued] = (await ctx.ds.query(`SELECT id FROM mail_outbox WHERE subject = $1`, [subject])) as { id: string }[];
     // a port where nothing listens: the connection is refused
-    const dead = nodemailer.createTransport({ host: '127.0.0.1', port: 9, secure: false, ignoreTLS: true, connectionTimeout: 2000 });
+    const dead = nodemailer.createTransport({
+      host: '127.0.0.1',
+      port: 9,
+      secure: false,
+      ignoreTLS: true,
+      connectionTimeout: 2000,
+    });
     const r = await deliverPending(ctx.ds, { via: dead, ids: [String(queued?.id)] });
     expect(r.failed).toBe(1);
-    const rows = (await ctx.ds.query(`SELECT id, status, attempts, last_error FROM mail_outbox WHERE subject = $1`, [subject])) as {
+    const rows = (await ctx.ds.query(`SELECT id, status, attempts, last_error FROM mail_outbox WHERE subject = $1`, [
+      subject,
+    ])) as {
       id: string;
       status: string;
       attempts: number;
@@ -76,7 +91,9 @@ describe('mail outbox', () => {
     const { agent } = await signedIn(ctx, 'admin');
     const list = await agent.get('/api/mail/outbox');
     expect(list.status).toBe(200);
-    const item = (list.body.items as { subject: string; lastError: string | null; attempts: number }[]).find((i) => i.subject === subject);
+    const item = (list.body.items as { subject: string; lastError: string | null; attempts: number }[]).find(
+      (i) => i.subject === subject,
+    );
     expect(item?.attempts).toBe(1);
     expect(item?.lastError).toBeTruthy();
 
@@ -85,7 +102,7 @@ describe('mail outbox', () => {
     await waitForMail(subject);
   });
 
-  it('reviewerEmails lists active users whose role may approve and who see the column\'s site; userEmail skips inactive users', async () => {
+  it("reviewerEmails lists active users whose role may approve and who see the column's site; userEmail skips inactive users", async () => {
     const plant = await makePlant(ctx.ds);
     const elsewhere = await makePlant(ctx.ds);
     const reviewer = await makeUser(ctx.ds, 'internals-specialist', [plant.siteId]);

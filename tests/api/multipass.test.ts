@@ -13,7 +13,12 @@ afterAll(() => ctx.close());
 
 const withLayout = (liquidSplit?: number[]) => {
   const s = section(1, 8, 'Two-pass top');
-  s.geometry.passLayout = { sideDowncomerWidth_mm: 880, centreDowncomerWidth_mm: 520, oddTrayOutlets: 'side', ...(liquidSplit ? { liquidSplit } : {}) };
+  s.geometry.passLayout = {
+    sideDowncomerWidth_mm: 880,
+    centreDowncomerWidth_mm: 520,
+    oddTrayOutlets: 'side',
+    ...(liquidSplit ? { liquidSplit } : {}),
+  };
   return s;
 };
 
@@ -37,15 +42,23 @@ describe('multipass sections', () => {
     const created = await agent.post(`/api/columns/${plant.columnId}/sections`).send(withLayout([0.46, 0.54]));
     expect(created.status).toBe(201);
     expect(created.body.geometry.passLayout).toEqual({
-      sideDowncomerWidth_mm: 880, centreDowncomerWidth_mm: 520, oddTrayOutlets: 'side', liquidSplit: [0.46, 0.54],
+      sideDowncomerWidth_mm: 880,
+      centreDowncomerWidth_mm: 520,
+      oddTrayOutlets: 'side',
+      liquidSplit: [0.46, 0.54],
     });
     const lc = (
-      await agent.post(`/api/columns/${plant.columnId}/load-cases`).send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 8) })
+      await agent
+        .post(`/api/columns/${plant.columnId}/load-cases`)
+        .send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 8) })
     ).body.id;
     const res = await agent.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc });
     expect(res.status).toBe(201);
     const run = (await agent.get(`/api/runs/${res.body.id}`)).body;
-    const [odd, even] = [run.results.trays.find((t: { tray: number }) => t.tray === 1), run.results.trays.find((t: { tray: number }) => t.tray === 2)];
+    const [odd, even] = [
+      run.results.trays.find((t: { tray: number }) => t.tray === 1),
+      run.results.trays.find((t: { tray: number }) => t.tray === 2),
+    ];
     expect(odd.details.pass1OutletDowncomer).toBe(0); // side
     expect(even.details.pass1OutletDowncomer).toBe(1); // centre
     expect(odd.details.pass2LiquidFraction).toBe(0.54);

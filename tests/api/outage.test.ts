@@ -32,7 +32,11 @@ describe('database outage', () => {
     expect((await agent.get('/api/columns')).status).toBe(200);
 
     await proxy.cut(); // open connections drop, new ones are refused
-    for (const res of [await agent.get('/api/columns'), await agent.get('/api/columns'), await request(app).post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD })]) {
+    for (const res of [
+      await agent.get('/api/columns'),
+      await agent.get('/api/columns'),
+      await request(app).post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD }),
+    ]) {
       expect(res.status, JSON.stringify(res.body)).toBe(503);
       expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
       expect(res.body.error).toMatch(/unreachable/);

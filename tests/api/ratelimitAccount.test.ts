@@ -35,7 +35,13 @@ describe('sign-in throttling per account', () => {
     expect((await agent.post('/api/auth/sign-in').send({ email: u.email, password: TEST_PASSWORD })).status).toBe(200);
     const statuses: number[] = [];
     for (let i = 0; i < 4; i++)
-      statuses.push((await agent.post('/api/auth/password').send({ currentPassword: 'guess-' + i, newPassword: 'Weir-crest Sparrow 41 gasket' })).status);
+      statuses.push(
+        (
+          await agent
+            .post('/api/auth/password')
+            .send({ currentPassword: 'guess-' + i, newPassword: 'Weir-crest Sparrow 41 gasket' })
+        ).status,
+      );
     expect(statuses).toEqual([400, 400, 400, 429]);
   });
 });

@@ -21,11 +21,18 @@ beforeAll(async () => {
   const s = await signedIn(ctx, 'internals-specialist', [plant.siteId]);
   [specialist, reviewer] = [s.agent, (await s.agent.get('/api/auth/me')).body.user.name];
   engineer = (await signedIn(ctx, 'process-engineer', [plant.siteId])).agent;
-  for (const sec of [section(1, 8, 'Top'), section(9, 16, 'Middle')]) await specialist.post(`/api/columns/${plant.columnId}/sections`).send(sec);
-  const lc = (await engineer.post(`/api/columns/${plant.columnId}/load-cases`).send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 16) })).body.id;
+  for (const sec of [section(1, 8, 'Top'), section(9, 16, 'Middle')])
+    await specialist.post(`/api/columns/${plant.columnId}/sections`).send(sec);
+  const lc = (
+    await engineer
+      .post(`/api/columns/${plant.columnId}/load-cases`)
+      .send({ name: 'Normal', basis: 'normal', source: 'typed', loads: loads(1, 16) })
+  ).body.id;
   const made = (await engineer.post('/api/runs').send({ columnId: plant.columnId, loadCaseId: lc, label: 'Report check' })).body;
   const sub = await engineer.post(`/api/runs/${made.id}/submit`).send({ version: made.version, comment: 'please check tray 3' });
-  const ok = await specialist.post(`/api/runs/${made.id}/approve`).send({ version: sub.body.version, comment: 'Agreed for the MOC file' });
+  const ok = await specialist
+    .post(`/api/runs/${made.id}/approve`)
+    .send({ version: sub.body.version, comment: 'Agreed for the MOC file' });
   expect(ok.status).toBe(200);
   run = (await engineer.get(`/api/runs/${made.id}`)).body;
 });
@@ -33,11 +40,14 @@ afterAll(() => ctx.close());
 
 describe('rating report PDF', () => {
   it('is a PDF of several A4 pages with header and footer naming column, run and page x of y', async () => {
-    const res = await engineer.get(`/api/runs/${run.id}/report.pdf`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const res = await engineer
+      .get(`/api/runs/${run.id}/report.pdf`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const pdf = (res.body as Buffer).toString('latin1');
@@ -45,7 +55,9 @@ describe('rating report PDF', () => {
     expect(Number(/\/Type \/Pages[\s\S]*?\/Count (\d+)/.exec(pdf)?.[1])).toBeGreaterThanOrEqual(4);
     const doc = runReportDoc(run, null, 'SI', new Date('2026-05-04T09:12:30.123Z'));
     const frame = pageFrame(doc);
-    expect(JSON.stringify(frame.header(2, 5))).toMatch(new RegExp(`${run.snapshot.column.tag} · Report check · tray rating report.*page 2 of 5`));
+    expect(JSON.stringify(frame.header(2, 5))).toMatch(
+      new RegExp(`${run.snapshot.column.tag} · Report check · tray rating report.*page 2 of 5`),
+    );
     expect(JSON.stringify(frame.footer(5, 5))).toMatch(/engine \d+\.\d+\.\d+ · printed 2026-05-04 09:12 UTC.*page 5 of 5/);
   });
 
@@ -81,7 +93,9 @@ describe('rating report PDF', () => {
   });
 
   it('the review notices end with the full address of the run', async () => {
-    const rows = (await ctx.ds.query(`SELECT kind, body FROM mail_outbox WHERE body LIKE $1 ORDER BY created_at`, [`%${run.id}%`])) as { kind: string; body: string }[];
+    const rows = (await ctx.ds.query(`SELECT kind, body FROM mail_outbox WHERE body LIKE $1 ORDER BY created_at`, [
+      `%${run.id}%`,
+    ])) as { kind: string; body: string }[];
     expect(rows.map((r) => r.kind)).toEqual(['run.submitted', 'run.approved']);
     for (const r of rows) expect(r.body).toMatch(new RegExp(`Open it in Frothline: ${config.appUrl}/runs/${run.id}$`));
     expect(config.appUrl).toMatch(/^https?:\/\/[^/]+(\/.*[^/])?$/);

@@ -32,7 +32,9 @@ describe('runs rated by an earlier engine version', () => {
     expect(ENGINE_VERSION).not.toBe('0.2.0');
     // make the second row what engine 0.2.0 stored: its version and its results bytes as written then
     await ctx.ds.query('UPDATE rating_runs SET engine_version = $1, results = $2 WHERE id = $3', [
-      '0.2.0', Buffer.from(frb2.stored, 'base64'), old.id,
+      '0.2.0',
+      Buffer.from(frb2.stored, 'base64'),
+      old.id,
     ]);
     const q = ctx.ds.createQueryRunner();
     try {
@@ -54,7 +56,9 @@ describe('runs rated by an earlier engine version', () => {
     // the printed report names the engine that rated it, and says the methods list is the current engine's
     const oldText = JSON.stringify(runReportDoc(b.body, null, 'SI'));
     expect(oldText).toContain('engine 0.2.0');
-    expect(oldText).toContain(`This run was rated by engine 0.2.0; the methods below are described as in engine ${ENGINE_VERSION}`);
+    expect(oldText).toContain(
+      `This run was rated by engine 0.2.0; the methods below are described as in engine ${ENGINE_VERSION}`,
+    );
     expect(JSON.stringify(runReportDoc(a.body, null, 'SI'))).not.toContain('This run was rated by engine');
     const list = await engineer.get(`/api/columns/${plant.columnId}`);
     expect(list.status).toBe(200);

@@ -74,7 +74,10 @@ describe('absolute session lifetime', () => {
   it('a sign-in opens a session that ends SESSION_MAX_HOURS later', async () => {
     const u = await makeUser(ctx.ds, 'viewer');
     await signIn(u.email);
-    const [row] = (await ctx.ds.query(`SELECT extract(epoch FROM expires_at - created_at) AS s FROM user_sessions WHERE user_id = $1`, [u.id])) as { s: string }[];
+    const [row] = (await ctx.ds.query(
+      `SELECT extract(epoch FROM expires_at - created_at) AS s FROM user_sessions WHERE user_id = $1`,
+      [u.id],
+    )) as { s: string }[];
     expect(Number(row!.s)).toBeCloseTo(config.sessionMaxHours * 3600, -1);
   });
 
@@ -117,7 +120,10 @@ describe('password change by the signed-in user', () => {
     expect(detail(own).message).toMatch(/too easy to guess/);
     const long = await change(cookie, TEST_PASSWORD, 'ü'.repeat(40)); // 40 characters, 80 bytes
     expect(long.status).toBe(400);
-    expect(detail(long)).toEqual({ path: 'newPassword', message: expect.stringMatching(/80 bytes long in UTF-8; at most 72 bytes/) });
+    expect(detail(long)).toEqual({
+      path: 'newPassword',
+      message: expect.stringMatching(/80 bytes long in UTF-8; at most 72 bytes/),
+    });
     expect((await request(ctx.app).post('/api/auth/sign-in').send({ email: u.email, password: TEST_PASSWORD })).status).toBe(200);
   });
 
@@ -153,7 +159,10 @@ describe('password reset by an administrator', () => {
     const blocked = await request(ctx.app).get('/api/columns').set('Cookie', cookie);
     expect(blocked.status).toBe(403);
     expect(blocked.body.error).toMatch(/Change the temporary password/);
-    const changed = await request(ctx.app).post('/api/auth/password').set('Cookie', cookie).send({ currentPassword: temp, newPassword: STRONG });
+    const changed = await request(ctx.app)
+      .post('/api/auth/password')
+      .set('Cookie', cookie)
+      .send({ currentPassword: temp, newPassword: STRONG });
     expect(changed.status).toBe(200);
     expect(changed.body.user.mustChangePassword).toBe(false);
     expect((await request(ctx.app).get('/api/columns').set('Cookie', cookie)).status).toBe(200);
@@ -164,11 +173,15 @@ describe('password reset by an administrator', () => {
     const own = await agent.post(`/api/users/${user.id}/password`).send({ password: STRONG });
     expect(own.status).toBe(409);
     expect(own.body.error).toMatch(/Change password/);
-    expect((await admin.post('/api/users/6f1c2a9e-3b4d-4e5f-8a7b-9c0d1e2f3a4b/password').send({ password: STRONG })).status).toBe(404);
+    expect((await admin.post('/api/users/6f1c2a9e-3b4d-4e5f-8a7b-9c0d1e2f3a4b/password').send({ password: STRONG })).status).toBe(
+      404,
+    );
   });
 
   it('a new user gets a password the policy accepts', async () => {
-    const res = await admin.post('/api/users').send({ email: `weak-${Date.now()}@test.example`, name: 'Weak Pass', role: 'viewer', password: 'qwertyuiop12' });
+    const res = await admin
+      .post('/api/users')
+      .send({ email: `weak-${Date.now()}@test.example`, name: 'Weak Pass', role: 'viewer', password: 'qwertyuiop12' });
     expect(res.status).toBe(400);
     expect(res.body.details[0]).toMatchObject({ path: 'password', message: expect.stringMatching(/too easy to guess/) });
   });

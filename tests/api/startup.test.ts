@@ -4,7 +4,13 @@ import { describe, expect, it } from 'vitest';
 /** Starts server/main.ts as `npm start` does (production) with the given secret; returns how it ended. */
 function startServer(jwtSecret: string) {
   const r = spawnSync('node_modules/.bin/tsx', ['server/main.ts'], {
-    env: { ...process.env, NODE_ENV: 'production', JWT_SECRET: jwtSecret, PORT: '1', DATABASE_URL: 'postgres://nobody@127.0.0.1:1/none' },
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      JWT_SECRET: jwtSecret,
+      PORT: '1',
+      DATABASE_URL: 'postgres://nobody@127.0.0.1:1/none',
+    },
     encoding: 'utf8',
     timeout: 20000,
   });

@@ -17,7 +17,16 @@ import { loads, makePlant, section } from './columnsFixture.js';
 import { cleanFindings, makeInspectionColumn, noMeasurements } from './inspection-fixture.js';
 
 /** Drafting notes, our notes files and provenance tags: never in what users read. */
-const DRAFTING = [/from memory/i, /to confirm/i, /not yet confirmed/i, /\brecalled\b/i, /\[seen/i, /\[S\d+\]/, /\.md\b/i, /reference sheet/i];
+const DRAFTING = [
+  /from memory/i,
+  /to confirm/i,
+  /not yet confirmed/i,
+  /\brecalled\b/i,
+  /\[seen/i,
+  /\[S\d+\]/,
+  /\.md\b/i,
+  /reference sheet/i,
+];
 /** Internal ids: camelCase identifiers (jetFlood, weirLoadingVolumetric) and bare engine statuses. */
 const CAMEL_ID = /\b[a-z]+[A-Z][A-Za-z]*\b/;
 
@@ -48,7 +57,13 @@ beforeAll(async () => {
   for (const s of [section(1, 8, 'Top'), section(9, 20, 'Lower')])
     expect((await specialist.post(`/api/columns/${plant.columnId}/sections`).send(s)).status).toBe(201);
   // invented loads: trays 1–3 pushed past flood, tray 5 with no liquid, no loads for trays 15–20
-  const l = loads(1, 14).map((x) => (x.tray <= 3 ? { ...x, vapourMassFlow_kg_h: x.vapourMassFlow_kg_h * 1.6 } : x.tray === 5 ? { ...x, liquidMassFlow_kg_h: 0 } : x));
+  const l = loads(1, 14).map((x) =>
+    x.tray <= 3
+      ? { ...x, vapourMassFlow_kg_h: x.vapourMassFlow_kg_h * 1.6 }
+      : x.tray === 5
+        ? { ...x, liquidMassFlow_kg_h: 0 }
+        : x,
+  );
   const lc = await specialist
     .post(`/api/columns/${plant.columnId}/load-cases`)
     .send({ name: 'Stress', basis: 'maximum', source: 'typed', loads: l });
@@ -74,7 +89,11 @@ describe('one verdict per tray, over the API', () => {
     expect(byTray.get(5)!.checks.liquidLoad!.status).toBe('na');
     expect(run.results.traysOver).toEqual(expect.arrayContaining([1, 2, 3, 5]));
     const lower = run.results.sections.find((s) => s.name === 'Lower')!;
-    const c = sectionCoverage(lower.firstTray, lower.lastTray, run.results.trays.map((t) => t.tray));
+    const c = sectionCoverage(
+      lower.firstTray,
+      lower.lastTray,
+      run.results.trays.map((t) => t.tray),
+    );
     expect(coverageSentence(c)).toBe('rated 6 of 12 trays; no loads for trays 15–20');
   });
 
@@ -147,7 +166,9 @@ describe('no drafting notes and no internal ids in what users read', () => {
     const eng = await makeUser(ctx.ds, 'process-engineer');
     const fx = await makeInspectionColumn(ctx.ds, eng.id);
     const inspector = (await signedIn(ctx, 'inspector', [fx.siteId])).agent;
-    const c = await inspector.post('/api/inspections').send({ columnId: fx.columnId, turnaround: 'TA-text', startDate: '2026-03-02', permitRef: 'P-1', gasTestRef: 'G-1' });
+    const c = await inspector
+      .post('/api/inspections')
+      .send({ columnId: fx.columnId, turnaround: 'TA-text', startDate: '2026-03-02', permitRef: 'P-1', gasTestRef: 'G-1' });
     expect(c.status).toBe(201);
     const t = await inspector.put(`/api/inspections/${c.body.id}/trays/3/1`).send({
       findings: { ...cleanFindings, damage: 'uplift' },

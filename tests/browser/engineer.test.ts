@@ -193,7 +193,9 @@ describe('engineer path in Chromium', () => {
     await b.page.locator('[data-test="run-flooded"]').waitFor();
     expect(await b.page.locator('[data-test="verdict-1"]').textContent()).toMatch(/Jet flood · flooded/);
     expect(await b.page.locator('[data-test="trays-over-list"]').textContent()).toMatch(/flooded: 1/);
-    expect(await b.page.locator('[data-test="run-coverage"]').textContent()).toMatch(/all trays of the 4 rated sections have loads/);
+    expect(await b.page.locator('[data-test="run-coverage"]').textContent()).toMatch(
+      /all trays of the 4 rated sections have loads/,
+    );
     // "at least" limits in words; a seal check that does not apply is not shown with a "≥ 0" limit
     const table = (await b.page.locator('[data-test="tray-table"]').textContent()) ?? '';
     expect(table).toMatch(/at least/);

@@ -18,7 +18,9 @@ describe('turnaround inspection on a tablet', () => {
     await signInAs(b.page, 'inspector');
     await b.page.goto(`${FROTHLINE_URL}/inspections`);
     await b.page.getByText('Marrowby TA-2025 (autumn)').waitFor();
-    expect(await b.page.locator('[data-test="inspection-safety"]').textContent()).toMatch(/permit-required confined-space.*rescue plan.*Hydrogen sulfide.*Pyrophoric iron sulfide.*fall protection/s);
+    expect(await b.page.locator('[data-test="inspection-safety"]').textContent()).toMatch(
+      /permit-required confined-space.*rescue plan.*Hydrogen sulfide.*Pyrophoric iron sulfide.*fall protection/s,
+    );
     await shot(b.page, 'inspection-list');
     await b.page.getByRole('button', { name: 'New inspection' }).click();
     await b.page.getByLabel('Column').click();
@@ -62,7 +64,9 @@ describe('turnaround inspection on a tablet', () => {
     const input = p.locator('input[type=file]');
     expect(await input.getAttribute('capture')).toBe('environment');
     expect(await input.getAttribute('accept')).toBe('image/*');
-    const png = await sharp({ create: { width: 400, height: 300, channels: 3, background: '#6b5b3e' } }).png().toBuffer();
+    const png = await sharp({ create: { width: 400, height: 300, channels: 3, background: '#6b5b3e' } })
+      .png()
+      .toBuffer();
     await input.setInputFiles({ name: 'tray5-deck.png', mimeType: 'image/png', buffer: png });
     await p.getByLabel('Finding').fill('fouling');
     await p.getByLabel('Caption').fill('Tray 5 deck, inlet side');
@@ -70,7 +74,9 @@ describe('turnaround inspection on a tablet', () => {
     await p.getByText('Photo stored').waitFor();
     const img = p.getByRole('img', { name: 'Tray 5 deck, inlet side' });
     await img.waitFor();
-    await p.waitForFunction(() => [...document.querySelectorAll('img')].some((i) => i.alt === 'Tray 5 deck, inlet side' && i.complete && i.naturalWidth > 0));
+    await p.waitForFunction(() =>
+      [...document.querySelectorAll('img')].some((i) => i.alt === 'Tray 5 deck, inlet side' && i.complete && i.naturalWidth > 0),
+    );
     await p.locator('.q-img__loading').waitFor({ state: 'detached' });
     await shot(p, 'inspection-photo');
   });
@@ -93,7 +99,10 @@ describe('turnaround inspection on a tablet', () => {
     await p.goto(inspectionUrl);
     await p.getByRole('tab', { name: 'Sign-off' }).click();
     await p.getByRole('button', { name: 'Countersign as engineer' }).click();
-    await p.locator('.q-dialog', { hasText: 'you have reviewed the tray records' }).getByRole('button', { name: 'Countersign', exact: true }).click();
+    await p
+      .locator('.q-dialog', { hasText: 'you have reviewed the tray records' })
+      .getByRole('button', { name: 'Countersign', exact: true })
+      .click();
     await p.locator('[data-test="signature-engineer"]').waitFor();
     await p.getByText('Signed off', { exact: true }).waitFor();
     await shot(p, 'inspection-engineer-signed');
@@ -102,13 +111,18 @@ describe('turnaround inspection on a tablet', () => {
     await p.getByRole('tab', { name: 'Rating as found' }).click();
     await p.getByRole('button', { name: 'Rate as found' }).click();
     await p.getByText(/Design controls at tray \d+/).waitFor();
-    const row = p.getByRole('row').filter({ has: p.getByRole('cell', { name: '5', exact: true }) }).first();
+    const row = p
+      .getByRole('row')
+      .filter({ has: p.getByRole('cell', { name: '5', exact: true }) })
+      .first();
     const cells = await row.getByRole('cell').allTextContents();
     expect(Number(cells[2])).toBeGreaterThan(Number(cells[1]));
     await shot(p, 'inspection-as-found');
 
     // the two runs it made do not clutter the column's run list or drive its profile
-    const cols = (await (await p.request.get(`${FROTHLINE_URL}/api/columns?q=T-701`)).json()) as { items: { id: string; tag: string }[] };
+    const cols = (await (await p.request.get(`${FROTHLINE_URL}/api/columns?q=T-701`)).json()) as {
+      items: { id: string; tag: string }[];
+    };
     await p.goto(`${FROTHLINE_URL}/columns/${cols.items.find((c) => c.tag === 'T-701')!.id}`);
     await p.getByText('Rating runs').waitFor();
     const designLabel = `Design — for inspection ${turnaround}`;

@@ -14,13 +14,29 @@ let column: ColumnDetail;
 let twoPass: TraySectionRecord;
 
 const geometry: SectionBody['geometry'] = {
-  trayType: 'sieve', passes: 2, columnDiameter_m: 2.8, traySpacing_mm: 610, activeArea_m2: 4.4, downcomerTopArea_m2: 0.75,
-  downcomerBottomArea_m2: 0.7, outletWeirLength_m: 4, weirHeight_mm: 50, downcomerClearance_mm: 40, holeArea_m2: 0.5,
-  holeDiameter_mm: 12.7, deckThickness_mm: 3, systemFactor: 1, foaming: 'moderate',
+  trayType: 'sieve',
+  passes: 2,
+  columnDiameter_m: 2.8,
+  traySpacing_mm: 610,
+  activeArea_m2: 4.4,
+  downcomerTopArea_m2: 0.75,
+  downcomerBottomArea_m2: 0.7,
+  outletWeirLength_m: 4,
+  weirHeight_mm: 50,
+  downcomerClearance_mm: 40,
+  holeArea_m2: 0.5,
+  holeDiameter_mm: 12.7,
+  deckThickness_mm: 3,
+  systemFactor: 1,
+  foaming: 'moderate',
 };
 const loads: CreateLoadCaseBody['loads'] = Array.from({ length: 6 }, (_, i) => ({
-  tray: i + 1, vapourMassFlow_kg_h: 52000 + 300 * i, liquidMassFlow_kg_h: 98000 - 400 * i,
-  vapourDensity_kg_m3: 3.4, liquidDensity_kg_m3: 700, surfaceTension_mN_m: 17,
+  tray: i + 1,
+  vapourMassFlow_kg_h: 52000 + 300 * i,
+  liquidMassFlow_kg_h: 98000 - 400 * i,
+  vapourDensity_kg_m3: 3.4,
+  liquidDensity_kg_m3: 700,
+  surfaceTension_mN_m: 17,
 }));
 
 async function call<T>(method: 'get' | 'post', url: string, data?: unknown): Promise<T> {
@@ -39,10 +55,18 @@ describe('multipass trays in Chromium', () => {
     await signInAs(b.page, 'internals-specialist');
     const t701 = (await call<ApiPage<ColumnSummary>>('get', '/columns?q=T-701')).items[0]!;
     column = await call<ColumnDetail>('post', '/columns', {
-      unitId: t701.unitId, tag: TAG, service: 'Throwaway splitter (multipass test)', numbering: 'top-down', trayCount: 6,
+      unitId: t701.unitId,
+      tag: TAG,
+      service: 'Throwaway splitter (multipass test)',
+      numbering: 'top-down',
+      trayCount: 6,
     });
     twoPass = await call<TraySectionRecord>('post', `/columns/${column.id}/sections`, {
-      name: 'Two-pass trays', firstTray: 1, lastTray: 6, provenance: 'design', geometry,
+      name: 'Two-pass trays',
+      firstTray: 1,
+      lastTray: 6,
+      provenance: 'design',
+      geometry,
     });
     await b.page.goto(`${FROTHLINE_URL}/columns/${column.id}/sections/${twoPass.id}`);
     await b.page.getByRole('heading', { name: 'Two-pass trays' }).waitFor();
@@ -62,12 +86,20 @@ describe('multipass trays in Chromium', () => {
     await b.page.waitForURL(new RegExp(`/columns/${column.id}$`));
     const saved = (await call<ColumnDetail>('get', `/columns/${column.id}`)).sections[0]!;
     expect(saved.geometry.passLayout).toEqual({
-      sideDowncomerWidth_mm: 420, centreDowncomerWidth_mm: 330, oddTrayOutlets: 'side', liquidSplit: [0.45, 0.55],
+      sideDowncomerWidth_mm: 420,
+      centreDowncomerWidth_mm: 330,
+      oddTrayOutlets: 'side',
+      liquidSplit: [0.45, 0.55],
     });
   });
 
   it('the run page lists each pass of each tray, with where it drains', async () => {
-    const lc = await call<{ id: string }>('post', `/columns/${column.id}/load-cases`, { name: 'Trial', basis: 'normal', source: 'typed', loads });
+    const lc = await call<{ id: string }>('post', `/columns/${column.id}/load-cases`, {
+      name: 'Trial',
+      basis: 'normal',
+      source: 'typed',
+      loads,
+    });
     const run = await call<{ id: string }>('post', '/runs', { columnId: column.id, loadCaseId: lc.id });
     await b.page.goto(`${FROTHLINE_URL}/runs/${run.id}`);
     await b.page.getByRole('tab', { name: 'Per pass' }).click();

@@ -60,7 +60,11 @@ describe('passwords in the browser', () => {
   it('the account menu offers Change password, and the new password signs in', async () => {
     const p = b.page;
     await p.getByRole('button', { name: /^Account:/ }).click();
-    await p.getByRole('menuitem', { name: 'Change password' }).or(p.getByText('Change password', { exact: true })).first().click();
+    await p
+      .getByRole('menuitem', { name: 'Change password' })
+      .or(p.getByText('Change password', { exact: true }))
+      .first()
+      .click();
     const dlg = p.locator('.q-dialog', { hasText: 'Current password' });
     await dlg.waitFor();
     await shot(p, 'password-change-dialog');

@@ -99,7 +99,10 @@ describe('on a phone-sized screen (390 × 844)', () => {
   it("a study's title keeps whole lines, with its chip and actions below it", async () => {
     await m.page.goto(`${FROTHLINE_URL}/`);
     await m.page.getByText('T-701', { exact: true }).first().click();
-    await m.page.getByText(/how far can the duty go\?/).first().click();
+    await m.page
+      .getByText(/how far can the duty go\?/)
+      .first()
+      .click();
     await m.page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
     const title = m.page.locator('[data-test="study-label"]');
     await title.waitFor();

@@ -14,8 +14,16 @@ let rec: InspectionRecord;
 const turnaround = `TA-refusal-${Date.now().toString(36)}`;
 const none = { weirHeight_mm: [], downcomerClearance_mm: [], levelness_mm: null, traySpacing_mm: null };
 const findings = {
-  fouling: false, blockedPercent: 0, corrosion: false, damage: 'none', valvesMissing: 0, valvesStuck: 0,
-  looseFasteners: false, manwayInstalled: true, closureWitnessed: true, debris: false,
+  fouling: false,
+  blockedPercent: 0,
+  corrosion: false,
+  damage: 'none',
+  valvesMissing: 0,
+  valvesStuck: 0,
+  looseFasteners: false,
+  manwayInstalled: true,
+  closureWitnessed: true,
+  debris: false,
 };
 
 async function call<T>(method: 'get' | 'post' | 'put', url: string, data?: unknown): Promise<T> {
@@ -31,11 +39,20 @@ beforeAll(async () => {
   const cols = await call<ApiPage<ColumnSummary>>('get', '/columns?q=T-701');
   const col = cols.items.find((c) => c.tag === 'T-701')!;
   rec = await call<InspectionRecord>('post', '/inspections', {
-    columnId: col.id, turnaround, startDate: '2026-05-04', permitRef: 'CSE-26-0504', gasTestRef: 'GT-26-0504-02',
+    columnId: col.id,
+    turnaround,
+    startDate: '2026-05-04',
+    permitRef: 'CSE-26-0504',
+    gasTestRef: 'GT-26-0504-02',
   });
   rec = await call<InspectionRecord>('put', `/inspections/${rec.id}/trays/3/1`, { findings, asFound: none, asLeft: none });
   rec = await call<InspectionRecord>('post', `/inspections/${rec.id}/punch`, {
-    tray: 3, pass: null, finding: 'Two deck clamps missing', action: 'Fit new clamps', priority: 'before-box-up', owner: 'Crew B',
+    tray: 3,
+    pass: null,
+    finding: 'Two deck clamps missing',
+    action: 'Fit new clamps',
+    priority: 'before-box-up',
+    owner: 'Crew B',
   });
 });
 afterAll(() => b?.close());

@@ -23,7 +23,9 @@ describe('small layout faults', () => {
     await dlg.getByText(/becomes Inspector instead of Viewer/).waitFor();
     await dlg.getByRole('button', { name: 'Keep the role' }).click();
     await dlg.waitFor({ state: 'detached' });
-    const users = (await (await p.request.get(`${FROTHLINE_URL}/api/users`)).json()) as { items: { email: string; role: string }[] };
+    const users = (await (await p.request.get(`${FROTHLINE_URL}/api/users`)).json()) as {
+      items: { email: string; role: string }[];
+    };
     expect(users.items.find((u) => u.email === viewer)?.role).toBe('viewer');
   });
 

@@ -4,7 +4,10 @@ import http from 'node:http';
 import { describe, expect, it } from 'vitest';
 import { FROTHLINE_URL } from '../helpers/browser.js';
 
-function get(path: string, acceptEncoding: string): Promise<{ status: number; headers: http.IncomingHttpHeaders; bytes: number; body: string }> {
+function get(
+  path: string,
+  acceptEncoding: string,
+): Promise<{ status: number; headers: http.IncomingHttpHeaders; bytes: number; body: string }> {
   return new Promise((resolve, reject) => {
     http
       .get(`${FROTHLINE_URL}${path}`, { headers: { 'Accept-Encoding': acceptEncoding } }, (res) => {

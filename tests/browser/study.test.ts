@@ -122,7 +122,9 @@ describe('pump-around study page in Chromium', () => {
     expect(made.recommendedDuty_kW!).toBeLessThan(21800);
     await b.page.goto(`${FROTHLINE_URL}/studies/${made.id}`);
     await b.page.getByText('What the sweep found').waitFor();
-    expect(await b.page.locator('[data-test=base-above-suggested]').innerText()).toMatch(/already above the suggested duty[\s\S]*less than today/);
+    expect(await b.page.locator('[data-test=base-above-suggested]').innerText()).toMatch(
+      /already above the suggested duty[\s\S]*less than today/,
+    );
     expect(await b.page.locator('[data-test=recommended-recovered]').innerText()).toMatch(/less than today/);
     expect(await b.page.locator('[data-test=recommended-recovered]').innerText()).not.toMatch(/−/);
     // limits over at the base or suggested duty are on the card, watched or not
@@ -148,7 +150,9 @@ describe('pump-around study page in Chromium', () => {
     // the server's error for latentHeat_kJ_kg is shown at the λ field itself
     await b.page.locator('.q-field--error').filter({ hasText: 'Latent heat λ' }).getByText('is required').waitFor();
     // the copy keeps the earlier study's answer to the zone-liquid question
-    expect(await b.page.getByRole('radio', { name: /Yes: it includes the circulation/ }).getAttribute('aria-checked')).toBe('true');
+    expect(await b.page.getByRole('radio', { name: /Yes: it includes the circulation/ }).getAttribute('aria-checked')).toBe(
+      'true',
+    );
     await b.page.waitForTimeout(400); // let the field's error message finish its entrance
     await shot(b.page, 'study-new-error');
     await lambda.fill(value);

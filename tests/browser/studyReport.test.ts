@@ -44,7 +44,9 @@ describe('study report and exports', () => {
     expect(csv).toMatch(/Zone liquid in the load case,includes the circulation/);
     expect(csv).toMatch(/\r\nSuggested duty,"[\d,]+ kW",lower of 70 %/);
     expect(csv).toMatch(/\r\nLimiting duty,"[\d,]+ kW","tray \d+, /);
-    expect(csv).toMatch(/Traffic at the base duty\r\nTray,Where,Vapour \(kg\/h\),Liquid \(kg\/h\),Controlling check,% of limit\r\n1,above the zone,\d+,\d+,/);
+    expect(csv).toMatch(
+      /Traffic at the base duty\r\nTray,Where,Vapour \(kg\/h\),Liquid \(kg\/h\),Controlling check,% of limit\r\n1,above the zone,\d+,\d+,/,
+    );
     expect(csv).toMatch(/management-of-change review/);
   });
 

@@ -39,7 +39,8 @@ describe('zone liquid question on a new study', () => {
     await p.getByLabel('Liquid heat capacity c_p (kJ/(kg·K))').fill('2.6');
     await p.getByLabel('Return temperature drop ΔT, held fixed (K)').fill('110');
     await p.waitForFunction(
-      () => /most likely includes the circulation/.test(document.querySelector('[data-test=zone-liquid-hint]')?.textContent ?? ''),
+      () =>
+        /most likely includes the circulation/.test(document.querySelector('[data-test=zone-liquid-hint]')?.textContent ?? ''),
       undefined,
       { timeout: 60000 },
     );

@@ -34,13 +34,19 @@ let hash: string | null = null;
 /** A fresh user with a unique e-mail, optionally a member of some sites. */
 export async function makeUser(ds: DataSource, role: Role, siteIds: string[] = []): Promise<User> {
   hash ??= await bcrypt.hash(TEST_PASSWORD, 10);
-  const u = await ds.getRepository(User).save({ email: `${role}-${randomUUID().slice(0, 8)}@test.example`, name: `Test ${role}`, role, passwordHash: hash });
+  const u = await ds
+    .getRepository(User)
+    .save({ email: `${role}-${randomUUID().slice(0, 8)}@test.example`, name: `Test ${role}`, role, passwordHash: hash });
   for (const siteId of siteIds) await ds.getRepository(SiteMember).insert({ siteId, userId: u.id });
   return u;
 }
 
 /** A supertest agent carrying a session cookie for a new user of the given role. */
-export async function signedIn(ctx: TestContext, role: Role, siteIds: string[] = []): Promise<{ agent: ReturnType<typeof request.agent>; user: User }> {
+export async function signedIn(
+  ctx: TestContext,
+  role: Role,
+  siteIds: string[] = [],
+): Promise<{ agent: ReturnType<typeof request.agent>; user: User }> {
   const user = await makeUser(ctx.ds, role, siteIds);
   const agent = request.agent(ctx.app);
   const res = await agent.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
@@ -59,11 +65,19 @@ export async function sessionCookie(
 ): Promise<string> {
   const sessionId = randomUUID();
   const now = Math.floor(Date.now() / 1000);
-  await ds.query(`INSERT INTO user_sessions (id, user_id, expires_at) VALUES ($1, $2, to_timestamp($3))`, [sessionId, user.id, now + endsInSec]);
-  const token = jwt.sign({ role: user.role, end: now + endsInSec, iat: now - ageSec, exp: now - ageSec + lifeSec }, config.jwtSecret, {
-    subject: user.id,
-    jwtid: sessionId,
-    algorithm: 'HS256',
-  });
+  await ds.query(`INSERT INTO user_sessions (id, user_id, expires_at) VALUES ($1, $2, to_timestamp($3))`, [
+    sessionId,
+    user.id,
+    now + endsInSec,
+  ]);
+  const token = jwt.sign(
+    { role: user.role, end: now + endsInSec, iat: now - ageSec, exp: now - ageSec + lifeSec },
+    config.jwtSecret,
+    {
+      subject: user.id,
+      jwtid: sessionId,
+      algorithm: 'HS256',
+    },
+  );
   return `frothline_session=${token}`;
 }

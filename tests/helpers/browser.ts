@@ -5,7 +5,10 @@ import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
 export const FROTHLINE_URL = process.env.FROTHLINE_URL ?? 'http://127.0.0.1:5180';
 const SHOTS = process.env.SCREENSHOT_DIR ?? path.resolve('test-results/screenshots');
-const demo = JSON.parse(readFileSync('server/db/seed/demo-users.json', 'utf8')) as { password: string; users: { email: string; role: string }[] };
+const demo = JSON.parse(readFileSync('server/db/seed/demo-users.json', 'utf8')) as {
+  password: string;
+  users: { email: string; role: string }[];
+};
 
 export interface Browser {
   context: BrowserContext;
@@ -20,7 +23,16 @@ export async function launch(viewport = { width: 1366, height: 860 }): Promise<B
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     viewport,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {

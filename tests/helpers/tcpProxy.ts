@@ -36,5 +36,12 @@ export async function startTcpProxy(targetHost: string, targetPort: number): Pro
       server.close(() => resolve());
     });
   await listen();
-  return { get port() { return port; }, cut: stop, restore: listen, close: stop };
+  return {
+    get port() {
+      return port;
+    },
+    cut: stop,
+    restore: listen,
+    close: stop,
+  };
 }

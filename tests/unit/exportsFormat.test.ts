@@ -4,7 +4,12 @@ import { describe, expect, it } from 'vitest';
 import { toCsv, toXlsx, type Table } from '../../server/services/exportsFormat.js';
 
 const hostile = ['=1+1', '+SUM(A1)', '-2+3', '@cmd', '\tx', '\rx', '＝1', 'plain', 'a,"b"'];
-const table: Table = { sheet: 'T', headers: ['Tray', 'Section'], rows: [...hostile.map((s, i) => [i + 1, s]), [-1.5, null], [Infinity, 'x']], notes: ['=note'] };
+const table: Table = {
+  sheet: 'T',
+  headers: ['Tray', 'Section'],
+  rows: [...hostile.map((s, i) => [i + 1, s]), [-1.5, null], [Infinity, 'x']],
+  notes: ['=note'],
+};
 
 describe('CSV export neutralises formulas', () => {
   const rows = parse(toCsv(table).toString('utf8'), { relax_column_count: true }) as string[][];

@@ -5,15 +5,48 @@ import type { TrayFindings, TrayMeasurements } from '../../shared/types/inspecti
 
 // invented geometry (our own numbers)
 const valveTray: SectionGeometry = {
-  trayType: 'moving-valve', passes: 1, columnDiameter_m: 2, traySpacing_mm: 610, activeArea_m2: 2.5, downcomerTopArea_m2: 0.3,
-  downcomerBottomArea_m2: 0.3, outletWeirLength_m: 1.45, weirHeight_mm: 50, downcomerClearance_mm: 40, holeArea_m2: 0.3,
-  holeDiameter_mm: 39, deckThickness_mm: 2.7, valves: { count: 200, orificeDiameter_mm: 39, valveThickness_mm: 1.5, materialDensity_kg_m3: 8000, legFactor: 1.2, orificeShape: 'flat' },
+  trayType: 'moving-valve',
+  passes: 1,
+  columnDiameter_m: 2,
+  traySpacing_mm: 610,
+  activeArea_m2: 2.5,
+  downcomerTopArea_m2: 0.3,
+  downcomerBottomArea_m2: 0.3,
+  outletWeirLength_m: 1.45,
+  weirHeight_mm: 50,
+  downcomerClearance_mm: 40,
+  holeArea_m2: 0.3,
+  holeDiameter_mm: 39,
+  deckThickness_mm: 2.7,
+  valves: {
+    count: 200,
+    orificeDiameter_mm: 39,
+    valveThickness_mm: 1.5,
+    materialDensity_kg_m3: 8000,
+    legFactor: 1.2,
+    orificeShape: 'flat',
+  },
 };
 const f = (p: Partial<TrayFindings>): TrayFindings => ({
-  fouling: false, blockedPercent: 0, corrosion: false, damage: 'none', valvesMissing: 0, valvesStuck: 0, looseFasteners: false,
-  manwayInstalled: true, closureWitnessed: true, debris: false, notes: '', ...p,
+  fouling: false,
+  blockedPercent: 0,
+  corrosion: false,
+  damage: 'none',
+  valvesMissing: 0,
+  valvesStuck: 0,
+  looseFasteners: false,
+  manwayInstalled: true,
+  closureWitnessed: true,
+  debris: false,
+  notes: '',
+  ...p,
 });
-const m = (w: number[], c: number[]): TrayMeasurements => ({ weirHeight_mm: w, downcomerClearance_mm: c, levelness_mm: null, traySpacing_mm: null });
+const m = (w: number[], c: number[]): TrayMeasurements => ({
+  weirHeight_mm: w,
+  downcomerClearance_mm: c,
+  levelness_mm: null,
+  traySpacing_mm: null,
+});
 const none = m([], []);
 
 describe('as-found geometry from inspection records', () => {

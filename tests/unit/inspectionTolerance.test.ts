@@ -3,7 +3,13 @@ import { checkMeasurements, levelnessLimit, PUBLISHED_TOLERANCES } from '../../s
 import type { TrayDesign } from '../../shared/types/inspections.js';
 
 const rule = (item: string) => PUBLISHED_TOLERANCES.rules.find((r) => r.item === item)!;
-const design: TrayDesign = { sectionId: null, weirHeight_mm: 50, downcomerClearance_mm: 38, traySpacing_mm: 610, columnDiameter_mm: 2000 };
+const design: TrayDesign = {
+  sectionId: null,
+  weirHeight_mm: 50,
+  downcomerClearance_mm: 38,
+  traySpacing_mm: 610,
+  columnDiameter_mm: 2000,
+};
 const none = { weirHeight_mm: [], downcomerClearance_mm: [], levelness_mm: null, traySpacing_mm: null };
 
 describe('installed-tray tolerances, PIP VEFV1102 / VEFV1102M (as listed in field-practice.md §4.2 [S9])', () => {
@@ -28,7 +34,12 @@ describe('installed-tray tolerances, PIP VEFV1102 / VEFV1102M (as listed in fiel
   });
 
   it('a weir 1.5 mm high passes, 1.7 mm high fails; clearance 2 mm low fails', () => {
-    const c = checkMeasurements({ ...none, weirHeight_mm: [51.5, 51.7], downcomerClearance_mm: [36] }, design, PUBLISHED_TOLERANCES, 'A');
+    const c = checkMeasurements(
+      { ...none, weirHeight_mm: [51.5, 51.7], downcomerClearance_mm: [36] },
+      design,
+      PUBLISHED_TOLERANCES,
+      'A',
+    );
     expect(c.map((x) => [x.item, x.point, x.pass])).toEqual([
       ['weirHeight', 0, true],
       ['weirHeight', 1, false],
@@ -51,7 +62,12 @@ describe('installed-tray tolerances, PIP VEFV1102 / VEFV1102M (as listed in fiel
   });
 
   it('a project rule set replaces the published one', () => {
-    const project = { id: 'p', name: 'Project sheet', source: 'project spec (user entered)', rules: [{ item: 'weirHeight' as const, label: 'w', plusMinus_mm: 1, source: 'project' }] };
+    const project = {
+      id: 'p',
+      name: 'Project sheet',
+      source: 'project spec (user entered)',
+      rules: [{ item: 'weirHeight' as const, label: 'w', plusMinus_mm: 1, source: 'project' }],
+    };
     expect(checkMeasurements({ ...none, weirHeight_mm: [51.5] }, design, project, 'A')[0]?.pass).toBe(false);
   });
 });

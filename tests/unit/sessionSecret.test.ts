@@ -18,13 +18,17 @@ describe('session-signing secret rules', () => {
   });
 
   it('refuses to start in production with a missing, example or short secret; warns in development', () => {
-    const prod = (jwtSecret: string, jwtSecretGenerated = false) => checkStartup({ jwtSecret, jwtSecretGenerated, isProduction: true });
+    const prod = (jwtSecret: string, jwtSecretGenerated = false) =>
+      checkStartup({ jwtSecret, jwtSecretGenerated, isProduction: true });
     expect(prod('random-of-this-process-xxxxxxxxxxxxxxxxxxxxxx', true).fatal).toMatch(/Refusing to start: JWT_SECRET is not set/);
     expect(prod('change-me-to-a-long-random-string').fatal).toMatch(/Refusing to start: JWT_SECRET is the published example/);
     expect(prod('0123456789').fatal).toMatch(/at least 32/);
     expect(prod(strong)).toEqual({});
-    const dev = (jwtSecret: string, jwtSecretGenerated = false) => checkStartup({ jwtSecret, jwtSecretGenerated, isProduction: false });
-    expect(dev('random-of-this-process-xxxxxxxxxxxxxxxxxxxxxx', true)).toEqual({ warning: expect.stringMatching(/random secret of this process/) });
+    const dev = (jwtSecret: string, jwtSecretGenerated = false) =>
+      checkStartup({ jwtSecret, jwtSecretGenerated, isProduction: false });
+    expect(dev('random-of-this-process-xxxxxxxxxxxxxxxxxxxxxx', true)).toEqual({
+      warning: expect.stringMatching(/random secret of this process/),
+    });
     expect(dev('dev-only-secret-change-me').fatal).toMatch(/published example/);
     expect(dev('0123456789').warning).toMatch(/at least 32/);
   });

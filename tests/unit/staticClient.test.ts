@@ -17,7 +17,8 @@ writeFileSync(path.join(dir, 'assets/chart-abc123.js.gz'), gzipSync(js));
 const app = express().use(...clientStatic(dir));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-const asset = (acceptEncoding: string) => request(app).get('/assets/chart-abc123.js').set('Accept-Encoding', acceptEncoding).buffer(true);
+const asset = (acceptEncoding: string) =>
+  request(app).get('/assets/chart-abc123.js').set('Accept-Encoding', acceptEncoding).buffer(true);
 
 describe('static client files', () => {
   it('serves the precompressed Brotli file first, with a year-long immutable cache', async () => {

@@ -5,7 +5,8 @@ import { ValidationError } from '../../server/errors.js';
 
 describe('text rules', () => {
   it('single-line text refuses every control character; multi-line text allows tab, LF and CR', () => {
-    for (const s of ['a\u0000', '\u0001', 'a\tb', 'a\nb', 'a\rb', '\u007f', '\u0085']) expect(textFault(s, false), JSON.stringify(s)).toMatch(/control/);
+    for (const s of ['a\u0000', '\u0001', 'a\tb', 'a\nb', 'a\rb', '\u007f', '\u0085'])
+      expect(textFault(s, false), JSON.stringify(s)).toMatch(/control/);
     for (const s of ['a\tb', 'a\r\nb', 'plain ünïcödé 😀']) expect(textFault(s, true), JSON.stringify(s)).toBeNull();
     for (const s of ['a\u0000', '\u000b', '\u001b[31m']) expect(textFault(s, true), JSON.stringify(s)).toMatch(/control/);
   });
@@ -19,7 +20,12 @@ describe('text rules', () => {
   it('withTextRules marks every string schema, nested ones too, except enums and those already marked', () => {
     const s = withTextRules({
       type: 'object',
-      properties: { a: { type: 'string' }, b: { type: 'array', items: { type: 'string' } }, c: { type: 'string', enum: ['x'] }, d: { type: 'string', 'x-text': 'multiline' } },
+      properties: {
+        a: { type: 'string' },
+        b: { type: 'array', items: { type: 'string' } },
+        c: { type: 'string', enum: ['x'] },
+        d: { type: 'string', 'x-text': 'multiline' },
+      },
     });
     expect(s.properties.a).toEqual({ type: 'string', 'x-text': 'line' });
     expect(s.properties.b.items).toEqual({ type: 'string', 'x-text': 'line' });
@@ -28,7 +34,10 @@ describe('text rules', () => {
   });
 
   it('validate names the field; uuids have no urn: prefix; coerced query numbers must be finite', () => {
-    const schema = { type: 'object', properties: { name: { type: 'string' }, id: { type: 'string', format: 'uuid' }, n: { type: 'integer' } } };
+    const schema = {
+      type: 'object',
+      properties: { name: { type: 'string' }, id: { type: 'string', format: 'uuid' }, n: { type: 'integer' } },
+    };
     const fault = (data: object, where = 'body') => {
       try {
         validate(schema, data, where);

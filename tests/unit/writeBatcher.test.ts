@@ -9,7 +9,11 @@ function fakeSend(fail: (item: number) => boolean = () => false) {
   const send = (items: number[]) => {
     batches.push(items);
     return new Promise<(string | null)[]>((resolve, reject) => {
-      waiting.push(() => (items.some(fail) ? reject(new Error(`bad item in ${items.join(',')}`)) : resolve(items.map((i) => (i % 10 === 0 ? null : `row ${i}`)))));
+      waiting.push(() =>
+        items.some(fail)
+          ? reject(new Error(`bad item in ${items.join(',')}`))
+          : resolve(items.map((i) => (i % 10 === 0 ? null : `row ${i}`))),
+      );
     });
   };
   const releaseAll = async () => {
@@ -55,7 +59,12 @@ describe('WriteBatcher', () => {
     const f = fakeSend((i) => i === 3);
     const b = new WriteBatcher({ send: f.send, maxInFlight: 1 });
     const first = b.write(1);
-    const ps = [2, 3, 4].map((i) => b.write(i).then((r) => ({ ok: r }), (e: Error) => ({ error: e.message })));
+    const ps = [2, 3, 4].map((i) =>
+      b.write(i).then(
+        (r) => ({ ok: r }),
+        (e: Error) => ({ error: e.message }),
+      ),
+    );
     await f.releaseAll();
     await first;
     expect(await Promise.all(ps)).toEqual([{ ok: 'row 2' }, { error: 'bad item in 3' }, { ok: 'row 4' }]);

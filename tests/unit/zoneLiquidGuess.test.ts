@@ -2,12 +2,16 @@ import { describe, expect, it } from 'vitest';
 import { baseCirculation, guessZoneLiquid } from '../../shared/zoneLiquidGuess';
 
 // invented trays: 100 t/h of liquid above a zone on trays 4–6 (return 4, draw 6), numbered from the top
-const loads = (zone: number) => [1, 2, 3, 4, 5, 6, 7].map((tray) => ({ tray, liquidMassFlow_kg_h: tray >= 4 && tray <= 6 ? zone : 100000 }));
+const loads = (zone: number) =>
+  [1, 2, 3, 4, 5, 6, 7].map((tray) => ({ tray, liquidMassFlow_kg_h: tray >= 4 && tray <= 6 ? zone : 100000 }));
 const pa = { returnTray: 4, drawTray: 6 };
 
 describe('zone liquid against the liquid above the zone', () => {
   it('base circulation Q0/(c_p ΔT): 6000 kW, 2.6 kJ/(kg·K), 80 K → 103,846 kg/h', () => {
-    expect(baseCirculation({ baseDuty_kW: 6000, cp_kJ_kgK: 2.6, returnDrop_K: 80, circulation_kg_h: null })).toBeCloseTo(103846, 0);
+    expect(baseCirculation({ baseDuty_kW: 6000, cp_kJ_kgK: 2.6, returnDrop_K: 80, circulation_kg_h: null })).toBeCloseTo(
+      103846,
+      0,
+    );
     expect(baseCirculation({ baseDuty_kW: 6000, cp_kJ_kgK: null, returnDrop_K: 80, circulation_kg_h: null })).toBeNull();
     expect(baseCirculation({ baseDuty_kW: null, cp_kJ_kgK: null, returnDrop_K: null, circulation_kg_h: 5e4 })).toBe(5e4);
   });

@@ -24,4 +24,22 @@ export { PumpAroundStudy };
 export { AuditEntry, ProcessUnit, Site, SiteMember, TowerColumn, User };
 
 /** Every entity; add new ones here. */
-export const entities = [User, Site, SiteMember, ProcessUnit, TowerColumn, AuditEntry, MailOutbox, PumpAroundStudy, TraySection, PumpAround, LoadCase, RatingRun, Inspection, InspectionTray, InspectionPhoto, PunchItemEntity, ImportPreviewEntity];
+export const entities = [
+  User,
+  Site,
+  SiteMember,
+  ProcessUnit,
+  TowerColumn,
+  AuditEntry,
+  MailOutbox,
+  PumpAroundStudy,
+  TraySection,
+  PumpAround,
+  LoadCase,
+  RatingRun,
+  Inspection,
+  InspectionTray,
+  InspectionPhoto,
+  PunchItemEntity,
+  ImportPreviewEntity,
+];

@@ -75,6 +75,7 @@ export class Inspections1764650000001 implements MigrationInterface {
   }
 
   async down(q: QueryRunner): Promise<void> {
-    for (const t of ['punch_items', 'inspection_photos', 'inspection_trays', 'inspections']) await q.query(`DROP TABLE IF EXISTS ${t}`);
+    for (const t of ['punch_items', 'inspection_photos', 'inspection_trays', 'inspections'])
+      await q.query(`DROP TABLE IF EXISTS ${t}`);
   }
 }

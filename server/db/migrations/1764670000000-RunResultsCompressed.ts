@@ -22,18 +22,28 @@ export class RunResultsCompressed1764670000000 implements MigrationInterface {
   }
 
   async down(q: QueryRunner): Promise<void> {
-    const rows = (await q.query(`SELECT id, results FROM rating_runs WHERE substring(results FROM 1 FOR 1) <> '\\x7b'::bytea`)) as {
+    const rows = (await q.query(
+      `SELECT id, results FROM rating_runs WHERE substring(results FROM 1 FOR 1) <> '\\x7b'::bytea`,
+    )) as {
       id: string;
       results: Buffer;
     }[];
     for (const r of rows)
-      await q.query(`UPDATE rating_runs SET results = $2 WHERE id = $1`, [r.id, Buffer.from(JSON.stringify(decodeResultsBeforeFrb4(r.results)))]);
-    const snaps = (await q.query(`SELECT id, snapshot FROM rating_runs WHERE substring(snapshot FROM 1 FOR 1) <> '\\x7b'::bytea`)) as {
+      await q.query(`UPDATE rating_runs SET results = $2 WHERE id = $1`, [
+        r.id,
+        Buffer.from(JSON.stringify(decodeResultsBeforeFrb4(r.results))),
+      ]);
+    const snaps = (await q.query(
+      `SELECT id, snapshot FROM rating_runs WHERE substring(snapshot FROM 1 FOR 1) <> '\\x7b'::bytea`,
+    )) as {
       id: string;
       snapshot: Buffer;
     }[];
     for (const r of snaps)
-      await q.query(`UPDATE rating_runs SET snapshot = $2 WHERE id = $1`, [r.id, Buffer.from(JSON.stringify(decodeFrj1(r.snapshot) ?? JSON.parse(r.snapshot.toString('utf8'))))]);
+      await q.query(`UPDATE rating_runs SET snapshot = $2 WHERE id = $1`, [
+        r.id,
+        Buffer.from(JSON.stringify(decodeFrj1(r.snapshot) ?? JSON.parse(r.snapshot.toString('utf8')))),
+      ]);
     for (const c of ['results', 'snapshot']) {
       await q.query(`ALTER TABLE rating_runs ALTER COLUMN ${c} SET STORAGE EXTENDED`);
       await q.query(`ALTER TABLE rating_runs ALTER COLUMN ${c} TYPE jsonb USING convert_from(${c}, 'UTF8')::jsonb`);

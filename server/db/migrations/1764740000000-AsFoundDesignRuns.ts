@@ -10,8 +10,12 @@ export class AsFoundDesignRuns1764740000000 implements MigrationInterface {
 
   async up(q: QueryRunner): Promise<void> {
     await q.query(`ALTER TABLE rating_runs DROP CONSTRAINT IF EXISTS rating_runs_kind_check`);
-    await q.query(`ALTER TABLE rating_runs ADD CONSTRAINT rating_runs_kind_check CHECK (kind IN ('rating','as-found','as-found-design'))`);
-    await q.query(`UPDATE rating_runs SET kind = 'as-found-design' WHERE kind = 'rating' AND label LIKE 'Design — for inspection %'`);
+    await q.query(
+      `ALTER TABLE rating_runs ADD CONSTRAINT rating_runs_kind_check CHECK (kind IN ('rating','as-found','as-found-design'))`,
+    );
+    await q.query(
+      `UPDATE rating_runs SET kind = 'as-found-design' WHERE kind = 'rating' AND label LIKE 'Design — for inspection %'`,
+    );
   }
 
   async down(q: QueryRunner): Promise<void> {

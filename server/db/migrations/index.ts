@@ -10,4 +10,15 @@ import { ImportPreviews1764690000000 } from './1764690000000-ImportPreviews.js';
 import { RunResultsByName1764750000000 } from './1764750000000-RunResultsByName.js';
 
 /** Every migration in order; add new ones at the end. */
-export const migrations = [Foundation1764633600000, MailOutbox1764650000000, PumpAroundStudies1764660000000, ColumnsLoadsRuns1764640000000, Inspections1764650000001, RunResultsCompressed1764670000000, AsFoundDesignRuns1764740000000, UserSessions1764680000000, ImportPreviews1764690000000, RunResultsByName1764750000000];
+export const migrations = [
+  Foundation1764633600000,
+  MailOutbox1764650000000,
+  PumpAroundStudies1764660000000,
+  ColumnsLoadsRuns1764640000000,
+  Inspections1764650000001,
+  RunResultsCompressed1764670000000,
+  AsFoundDesignRuns1764740000000,
+  UserSessions1764680000000,
+  ImportPreviews1764690000000,
+  RunResultsByName1764750000000,
+];

@@ -21,10 +21,8 @@ export const ZONE_OVERLOAD_CHECKS: readonly CheckName[] = [
 
 /** The checks of a tray in a region that the study watches (none below the draw: unchanged by duty). */
 export function watchedChecks(region: TrayRegion, rating: TrayResult): CheckName[] {
-  if (region === 'above')
-    return MINIMUM_LIQUID_CHECKS.filter((c) => c !== 'weirLoading' || rating.checks[c]?.sense === 'min');
-  if (region === 'zone')
-    return ZONE_OVERLOAD_CHECKS.filter((c) => c !== 'weirLoading' || rating.checks[c]?.sense === 'max');
+  if (region === 'above') return MINIMUM_LIQUID_CHECKS.filter((c) => c !== 'weirLoading' || rating.checks[c]?.sense === 'min');
+  if (region === 'zone') return ZONE_OVERLOAD_CHECKS.filter((c) => c !== 'weirLoading' || rating.checks[c]?.sense === 'max');
   return [];
 }
 

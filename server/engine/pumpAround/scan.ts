@@ -43,7 +43,9 @@ export function scanWatchedChecks(
   rate: (load: TrayLoad) => TrayResult,
 ): ScanResult {
   const out: ScanResult = { minimumLiquid: null, zoneOverload: null, clearing: [], alwaysOver: [] };
-  const xs = Array.from({ length: SCAN_INTERVALS + 1 }, (_, i) => (i === SCAN_INTERVALS ? qHi : qLo + ((qHi - qLo) * i) / SCAN_INTERVALS));
+  const xs = Array.from({ length: SCAN_INTERVALS + 1 }, (_, i) =>
+    i === SCAN_INTERVALS ? qHi : qLo + ((qHi - qLo) * i) / SCAN_INTERVALS,
+  );
   const grid = xs.map((q) => trays.map((t) => shiftOne(t, q)));
   const tol = SOLVE_RTOL * Math.max(1, qHi);
   trays.forEach((base, idx) => {

@@ -65,7 +65,7 @@ export function runStudyWith<P>(input: StudyInput, mapPoint: (p: StudyPoint) => 
   const baseTrays = input.trays.filter((t) => shiftOne(t, pa.baseDuty_kW).region !== 'below');
 
   const notes: string[] = [
-    'Screening estimate: a pump-around duty change goes through management-of-change review and the site\'s procedures; confirm with the internals vendor and licensed engineers. Fractionation above the zone suffers as its L/V falls.',
+    "Screening estimate: a pump-around duty change goes through management-of-change review and the site's procedures; confirm with the internals vendor and licensed engineers. Fractionation above the zone suffers as its L/V falls.",
     'Vapour and liquid properties held at base-case values; constant latent heat; sensible heats neglected.',
     'Extra condensation spread evenly over the pump-around zone trays (return to draw); the circulation is added to the base (net) liquid of every zone tray.',
   ];
@@ -76,7 +76,9 @@ export function runStudyWith<P>(input: StudyInput, mapPoint: (p: StudyPoint) => 
   let scan: ScanResult = { minimumLiquid: null, zoneOverload: null, clearing: [], alwaysOver: [] };
   if (dry && dry.duty_kW > qLo) {
     scan = scanWatchedChecks(qLo, dry.duty_kW, baseTrays, shiftOne, rate);
-    notes.push(`Limits searched from ${fmt(qLo)} (lowest of base duty, sweep start and margin × dry-out duty) to the dry-out duty ${fmt(dry.duty_kW)}.`);
+    notes.push(
+      `Limits searched from ${fmt(qLo)} (lowest of base duty, sweep start and margin × dry-out duty) to the dry-out duty ${fmt(dry.duty_kW)}.`,
+    );
   } else if (dry) {
     notes.push(`Tray ${dry.tray} above the zone has no liquid at the base case: dry-out at the base duty.`);
   }
@@ -88,8 +90,10 @@ export function runStudyWith<P>(input: StudyInput, mapPoint: (p: StudyPoint) => 
   const limiting = candidates.reduce<(typeof candidates)[number] | null>((a, c) => (!a || c.duty_kW < a.duty_kW ? c : a), null);
 
   // notes are read by users: checks by their labels, never their ids
-  for (const c of scan.clearing) notes.push(`Tray ${c.tray}: ${CHECK_LABELS[c.check]} is over its limit below ${fmt(c.duty_kW)} and clears above it.`);
-  for (const c of scan.alwaysOver) notes.push(`Tray ${c.tray}: ${CHECK_LABELS[c.check]} is over its limit over the whole range searched.`);
+  for (const c of scan.clearing)
+    notes.push(`Tray ${c.tray}: ${CHECK_LABELS[c.check]} is over its limit below ${fmt(c.duty_kW)} and clears above it.`);
+  for (const c of scan.alwaysOver)
+    notes.push(`Tray ${c.tray}: ${CHECK_LABELS[c.check]} is over its limit over the whole range searched.`);
   const feasibleFrom = Math.max(qLo, ...scan.clearing.map((c) => c.duty_kW));
   const highestFree = scan.alwaysOver.length === 0 && limiting && limiting.duty_kW > feasibleFrom ? limiting.duty_kW : null;
   let recommended = dry && highestFree !== null ? Math.min(margin * dry.duty_kW, highestFree) : null;
@@ -109,7 +113,10 @@ export function runStudyWith<P>(input: StudyInput, mapPoint: (p: StudyPoint) => 
       // a check solved to lie exactly at its limit here is at 100 %, not over it
       return Object.entries(r.checks)
         .filter(([, c]) => c.percentOfLimit > 100 + AT_LIMIT_PERCENT)
-        .map(([name]) => `tray ${t.tray} ${name}${w.has(name) ? '' : t.region === 'below' ? ' (below the draw, not changed by the duty)' : ' (not watched)'}`);
+        .map(
+          ([name]) =>
+            `tray ${t.tray} ${name}${w.has(name) ? '' : t.region === 'below' ? ' (below the draw, not changed by the duty)' : ' (not watched)'}`,
+        );
     });
     return over.length ? [`Checks over their limit at the ${label} duty ${fmt(q)}: ${over.join('; ')}.`] : [];
   }

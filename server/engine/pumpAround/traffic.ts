@@ -158,7 +158,11 @@ export function dryOutDuty(
   for (const load of base) {
     if (shiftFraction(load.tray, pumpAround, numbering).region !== 'above') continue;
     const nearer = best && topDownPosition(load.tray, numbering) > topDownPosition(best.tray, numbering);
-    if (!best || load.liquidMassFlow_kg_h < best.liquidMassFlow_kg_h || (load.liquidMassFlow_kg_h === best.liquidMassFlow_kg_h && nearer))
+    if (
+      !best ||
+      load.liquidMassFlow_kg_h < best.liquidMassFlow_kg_h ||
+      (load.liquidMassFlow_kg_h === best.liquidMassFlow_kg_h && nearer)
+    )
       best = load;
   }
   if (!best) return null;

@@ -61,14 +61,45 @@ export function seaderRequest(): RatingRequest {
 export function inventedRequest(): RatingRequest {
   return {
     section: {
-      trayType: 'moving-valve', passes: 2, columnDiameter_m: 3.2, traySpacing_mm: 610, activeArea_m2: 5.9,
-      downcomerTopArea_m2: 1.05, downcomerBottomArea_m2: 0.9, outletWeirLength_m: 4.6, weirHeight_mm: 50,
-      downcomerClearance_mm: 45, holeArea_m2: 0.78, holeDiameter_mm: 39, deckThickness_mm: 2.7,
-      valves: { count: 650, orificeDiameter_mm: 39, valveThickness_mm: 1.5, materialDensity_kg_m3: 8000, legFactor: 1.2, orificeShape: 'flat' },
+      trayType: 'moving-valve',
+      passes: 2,
+      columnDiameter_m: 3.2,
+      traySpacing_mm: 610,
+      activeArea_m2: 5.9,
+      downcomerTopArea_m2: 1.05,
+      downcomerBottomArea_m2: 0.9,
+      outletWeirLength_m: 4.6,
+      weirHeight_mm: 50,
+      downcomerClearance_mm: 45,
+      holeArea_m2: 0.78,
+      holeDiameter_mm: 39,
+      deckThickness_mm: 2.7,
+      valves: {
+        count: 650,
+        orificeDiameter_mm: 39,
+        valveThickness_mm: 1.5,
+        materialDensity_kg_m3: 8000,
+        legFactor: 1.2,
+        orificeShape: 'flat',
+      },
     },
     trays: [
-      { tray: 11, vapourMassFlow_kg_h: 98000, liquidMassFlow_kg_h: 140000, vapourDensity_kg_m3: 4.2, liquidDensity_kg_m3: 690, surfaceTension_mN_m: 14 },
-      { tray: 12, vapourMassFlow_kg_h: 101000, liquidMassFlow_kg_h: 146000, vapourDensity_kg_m3: 4.4, liquidDensity_kg_m3: 685, surfaceTension_mN_m: 13.5 },
+      {
+        tray: 11,
+        vapourMassFlow_kg_h: 98000,
+        liquidMassFlow_kg_h: 140000,
+        vapourDensity_kg_m3: 4.2,
+        liquidDensity_kg_m3: 690,
+        surfaceTension_mN_m: 14,
+      },
+      {
+        tray: 12,
+        vapourMassFlow_kg_h: 101000,
+        liquidMassFlow_kg_h: 146000,
+        vapourDensity_kg_m3: 4.4,
+        liquidDensity_kg_m3: 685,
+        surfaceTension_mN_m: 13.5,
+      },
     ],
   };
 }

@@ -5,7 +5,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import {
-  fairFloodCapacityLygerosMagoulas, fairHoleAreaCorrection, fairSurfaceTensionCorrection, transitionClearLiquidHeightKisterHaas,
+  fairFloodCapacityLygerosMagoulas,
+  fairHoleAreaCorrection,
+  fairSurfaceTensionCorrection,
+  transitionClearLiquidHeightKisterHaas,
 } from '../../../server/engine/flooding.js';
 import { rateTray } from '../../../server/engine/index.js';
 import type { SectionGeometry, TrayLoad } from '../../../shared/types/rating.js';
@@ -47,8 +50,9 @@ describe('high-pressure derating warning (Kister 1992 Table 6.7 and §6.5)', () 
   it('is given with Kister & Haas, and with Fair when σ ≥ 20 mN/m', () => {
     expect(codes(rateTray(req.section, hp, { jetFlood: 'kister-haas' }).warnings)).toContain('system-factor-high-pressure');
     expect(codes(rateTray(req.section, { ...hp, surfaceTension_mN_m: 22 }).warnings)).toContain('system-factor-high-pressure');
-    expect(codes(rateTray({ ...req.section, systemFactor: 0.9 }, { ...hp, surfaceTension_mN_m: 22 }).warnings))
-      .not.toContain('system-factor-high-pressure');
+    expect(codes(rateTray({ ...req.section, systemFactor: 0.9 }, { ...hp, surfaceTension_mN_m: 22 }).warnings)).not.toContain(
+      'system-factor-high-pressure',
+    );
   });
 });
 
@@ -92,7 +96,7 @@ describe("valve trays: fractional open area A_f = slot area / bubbling area (Per
   it('Kister & Haas h_ct uses the slot ratio', () => {
     const a = rateTray(slotted, load, { jetFlood: 'kister-haas' });
     const b = rateTray({ ...slotted, slotArea_m2: 0.12 * base.section.activeArea_m2 }, load, { jetFlood: 'kister-haas' });
-    const q = (load.liquidMassFlow_kg_h / load.liquidDensity_kg_m3) / base.section.outletWeirLength_m;
+    const q = load.liquidMassFlow_kg_h / load.liquidDensity_kg_m3 / base.section.outletWeirLength_m;
     const h = (af: number) => transitionClearLiquidHeightKisterHaas(39, af, q, load.liquidDensity_kg_m3);
     // C_SB ∝ h_ct^−0.5 (Perry 8th eq. 14-81)
     expect(a.details.floodCapacityFactor_m_s! / b.details.floodCapacityFactor_m_s!).toBeCloseTo(Math.sqrt(h(0.12) / h(0.08)), 9);

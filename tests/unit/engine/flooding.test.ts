@@ -1,14 +1,22 @@
 import { describe, expect, it } from 'vitest';
 import {
-  fairFloodCapacityLygerosMagoulas, fairHoleAreaCorrection, fairSurfaceTensionCorrection, floodVelocitySoudersBrown,
-  highPressureSystemFactorKister, kisterHaasFloodCapacity, transitionClearLiquidHeightKisterHaas,
+  fairFloodCapacityLygerosMagoulas,
+  fairHoleAreaCorrection,
+  fairSurfaceTensionCorrection,
+  floodVelocitySoudersBrown,
+  highPressureSystemFactorKister,
+  kisterHaasFloodCapacity,
+  transitionClearLiquidHeightKisterHaas,
 } from '../../../server/engine/flooding.js';
 import { rel } from './fixtures.js';
 
 /** Log-polynomial fit of Fair's chart, trade article "Sieve tray flooding correlation" (2012), published coefficients. */
 function fairLogPolynomial(x: number, y: number): number {
   const l = Math.log(x);
-  return (((1.10748e-6 * y + 0.00045284) * l + (4.04865e-6 * y + 0.000799395)) * l + (-3.09381e-5 * y - 0.00625024)) * l + (3.00232e-5 * y + 0.0140453);
+  return (
+    (((1.10748e-6 * y + 0.00045284) * l + (4.04865e-6 * y + 0.000799395)) * l + (-3.09381e-5 * y - 0.00625024)) * l +
+    (3.00232e-5 * y + 0.0140453)
+  );
 }
 
 describe('Fair flood capacity, Lygeros & Magoulas fit (Perry 8th eq. 14-90)', () => {
@@ -23,7 +31,14 @@ describe('Fair flood capacity, Lygeros & Magoulas fit (Perry 8th eq. 14-90)', ()
 
   it('agrees with the published log-polynomial fit of the same chart within ±10 %', () => {
     // trade article "Sieve tray flooding correlation" (2012) coefficients; points of the reference sheet §2.3 table
-    for (const [ts, flv] of [[304.8, 0.1], [457.2, 0.1], [609.6, 0.01], [609.6, 0.1], [609.6, 1.0], [914.4, 0.2]] as const) {
+    for (const [ts, flv] of [
+      [304.8, 0.1],
+      [457.2, 0.1],
+      [609.6, 0.01],
+      [609.6, 0.1],
+      [609.6, 1.0],
+      [914.4, 0.2],
+    ] as const) {
       expect(Math.abs(rel(fairFloodCapacityLygerosMagoulas(flv, ts), fairLogPolynomial(flv, ts)))).toBeLessThan(0.1);
     }
   });
@@ -67,12 +82,21 @@ describe('Fair corrections and Souders–Brown', () => {
 describe('Kister & Haas flood correlation (coefficients from memory)', () => {
   it('SI form agrees with the English form (both recalled; Kister & Haas, CEP 86(9) 63, 1990) within 0.5 %', () => {
     // case: d_H 12.7 mm, σ 15 mN/m, ρL 600, ρV 20 kg/m³, TS 610 mm, A_f 0.1, Q_L 30 m³/(h·m)
-    const dIn = 0.5, sigma = 15, rhoL = 600, rhoV = 20, tsIn = 24.0157, af = 0.1, q = 30;
-    const rhoLe = rhoL / 16.0185, rhoVe = rhoV / 16.0185, qe = q / 8.942;
+    const dIn = 0.5,
+      sigma = 15,
+      rhoL = 600,
+      rhoV = 20,
+      tsIn = 24.0157,
+      af = 0.1,
+      q = 30;
+    const rhoLe = rhoL / 16.0185,
+      rhoVe = rhoV / 16.0185,
+      qe = q / 8.942;
     const hctW = (0.291 * Math.pow(af, -0.791) * Math.pow(dIn, 0.833)) / (1 + 0.0036 * Math.pow(qe, -0.59) * Math.pow(af, -1.79));
     const n = (0.0231 * dIn) / af;
     const hct = hctW * Math.pow(62.2 / rhoLe, 0.5 * (1 - n));
-    const english = 0.144 * Math.pow((dIn * dIn * sigma) / rhoLe, 0.125) * Math.pow(rhoVe / rhoLe, 0.1) * Math.sqrt(tsIn / hct) * 0.3048;
+    const english =
+      0.144 * Math.pow((dIn * dIn * sigma) / rhoLe, 0.125) * Math.pow(rhoVe / rhoLe, 0.1) * Math.sqrt(tsIn / hct) * 0.3048;
     const hctSi = transitionClearLiquidHeightKisterHaas(12.7, af, q, rhoL);
     expect(Math.abs(rel(hctSi, hct * 25.4))).toBeLessThan(0.005);
     expect(Math.abs(rel(kisterHaasFloodCapacity(12.7, sigma, rhoL, rhoV, 610, hctSi), english))).toBeLessThan(0.005);

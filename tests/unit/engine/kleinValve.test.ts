@@ -9,8 +9,13 @@
 import { describe, expect, it } from 'vitest';
 import kTable from '../../../reference-tables/klein-valve-k.json' with { type: 'json' };
 import {
-  dryTrayHeadKleinValve, kleinBalanceHead, kleinClosedBalanceVelocity, kleinClosedValveK, kleinEddyLossCoefficient,
-  kleinOpenBalanceVelocity, kleinOpenValveK,
+  dryTrayHeadKleinValve,
+  kleinBalanceHead,
+  kleinClosedBalanceVelocity,
+  kleinClosedValveK,
+  kleinEddyLossCoefficient,
+  kleinOpenBalanceVelocity,
+  kleinOpenValveK,
 } from '../../../server/engine/pressureDrop.js';
 import { rateTray } from '../../../server/engine/index.js';
 import { FT_S, IN, LB_FT3, rel } from './fixtures.js';
@@ -45,7 +50,10 @@ describe('Klein moving-valve balance points, Ludwig Vol. 2 3rd ed. Example 8-41'
     // printed: 3.06 (3.077/0.448)^0.5 = 8.01 ft/s
     expect(Math.abs(rel(kleinOpenBalanceVelocity(uA, 3.077, 0.448) / FT_S, 8.01))).toBeLessThan(0.01);
     const uB = kleinOpenBalanceVelocity(
-      kleinClosedBalanceVelocity(Rvw, tv, rhoM, kleinClosedValveK('venturi'), rhoV, 1.3), kleinClosedValveK('venturi'), kleinOpenValveK('venturi', 2));
+      kleinClosedBalanceVelocity(Rvw, tv, rhoM, kleinClosedValveK('venturi'), rhoV, 1.3),
+      kleinClosedValveK('venturi'),
+      kleinOpenValveK('venturi', 2),
+    );
     expect(Math.abs(rel(uB / FT_S, 8.01))).toBeLessThan(0.015);
   });
 
@@ -55,7 +63,7 @@ describe('Klein moving-valve balance points, Ludwig Vol. 2 3rd ed. Example 8-41'
     const bal = kleinBalanceHead(Rvw, tv, rhoM, rhoL, 1.3);
     // computed here (not a printed value): C_vw R_vw t_v ρ_M/ρL = 1.3 × 1.45 × 0.060 × 490/31.0 = 1.788 in
     expect(Math.abs(rel(bal / IN, 1.788))).toBeLessThan(0.002);
-    const h = dryTrayHeadKleinValve(4.40 * FT_S, rhoV, rhoL, Kc, Ko, bal);
+    const h = dryTrayHeadKleinValve(4.4 * FT_S, rhoV, rhoL, Kc, Ko, bal);
     expect(h).toBeCloseTo(bal, 9);
     // continuity at the printed balance points (±1 % on the printed velocities)
     const closedAtA = Kc * (rhoV / rhoL) * (3.07 * FT_S) ** 2;
@@ -68,14 +76,35 @@ describe('Klein moving-valve balance points, Ludwig Vol. 2 3rd ed. Example 8-41'
 describe('moving-valve tray rating reports the Klein balance points', () => {
   // invented section; vapour and liquid properties of Ludwig Example 8-41 so the balance points can be checked
   const section: SectionGeometry = {
-    trayType: 'moving-valve', passes: 1, columnDiameter_m: 1.8, traySpacing_mm: 610, activeArea_m2: 1.9,
-    downcomerTopArea_m2: 0.3, downcomerBottomArea_m2: 0.3, outletWeirLength_m: 1.3, weirHeight_mm: 50,
-    downcomerClearance_mm: 38, holeArea_m2: 0.26, holeDiameter_mm: 39, deckThickness_mm: 2.64,
-    valves: { count: 218, orificeDiameter_mm: 39, valveThickness_mm: tv, materialDensity_kg_m3: rhoM, legFactor: Rvw, orificeShape: 'venturi' },
+    trayType: 'moving-valve',
+    passes: 1,
+    columnDiameter_m: 1.8,
+    traySpacing_mm: 610,
+    activeArea_m2: 1.9,
+    downcomerTopArea_m2: 0.3,
+    downcomerBottomArea_m2: 0.3,
+    outletWeirLength_m: 1.3,
+    weirHeight_mm: 50,
+    downcomerClearance_mm: 38,
+    holeArea_m2: 0.26,
+    holeDiameter_mm: 39,
+    deckThickness_mm: 2.64,
+    valves: {
+      count: 218,
+      orificeDiameter_mm: 39,
+      valveThickness_mm: tv,
+      materialDensity_kg_m3: rhoM,
+      legFactor: Rvw,
+      orificeShape: 'venturi',
+    },
   };
   const load: TrayLoad = {
-    tray: 1, vapourMassFlow_kg_h: 20000, liquidMassFlow_kg_h: 20000, vapourDensity_kg_m3: rhoV,
-    liquidDensity_kg_m3: rhoL, surfaceTension_mN_m: 10,
+    tray: 1,
+    vapourMassFlow_kg_h: 20000,
+    liquidMassFlow_kg_h: 20000,
+    vapourDensity_kg_m3: rhoV,
+    liquidDensity_kg_m3: rhoL,
+    surfaceTension_mN_m: 10,
   };
   it('weep limit = V_pt,A of Ludwig Example 8-41 (3.06 ft/s), all-open velocity and partly-open head reported', () => {
     const t = rateTray(section, load);

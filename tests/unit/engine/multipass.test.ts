@@ -4,7 +4,13 @@
  * imbalance, computed here independently of the engine's formulas.
  */
 import { describe, expect, it } from 'vitest';
-import { areaBetweenChords, chordLength, passImbalancePercent, passTray, preparePasses } from '../../../server/engine/multipass.js';
+import {
+  areaBetweenChords,
+  chordLength,
+  passImbalancePercent,
+  passTray,
+  preparePasses,
+} from '../../../server/engine/multipass.js';
 import { rateTray } from '../../../server/engine/rateTray.js';
 import { operatingWindow } from '../../../server/engine/operatingWindow.js';
 import { validateRatingRequest } from '../../../server/engine/validate.js';
@@ -34,17 +40,36 @@ const twoPass = (): SectionGeometry => ({
 
 /** Invented four-pass crude tray, 6 m: off-centre downcomers placed for equal flow paths (0.95 m, derived). */
 const fourPass = (liquidSplit?: number[]): SectionGeometry => ({
-  trayType: 'fixed-valve', passes: 4, columnDiameter_m: 6, traySpacing_mm: 760, activeArea_m2: 19,
-  downcomerTopArea_m2: 4.4, downcomerBottomArea_m2: 4.4, outletWeirLength_m: 21, weirHeight_mm: 50,
-  downcomerClearance_mm: 50, holeArea_m2: 2.6, holeDiameter_mm: 39, deckThickness_mm: 3,
+  trayType: 'fixed-valve',
+  passes: 4,
+  columnDiameter_m: 6,
+  traySpacing_mm: 760,
+  activeArea_m2: 19,
+  downcomerTopArea_m2: 4.4,
+  downcomerBottomArea_m2: 4.4,
+  outletWeirLength_m: 21,
+  weirHeight_mm: 50,
+  downcomerClearance_mm: 50,
+  holeArea_m2: 2.6,
+  holeDiameter_mm: 39,
+  deckThickness_mm: 3,
   passLayout: {
-    sideDowncomerWidth_mm: 500, centreDowncomerWidth_mm: 400, offCentreDowncomerWidth_mm: 400,
-    offCentreDowncomerOffset_mm: 1350, oddTrayOutlets: 'side', ...(liquidSplit ? { liquidSplit } : {}),
+    sideDowncomerWidth_mm: 500,
+    centreDowncomerWidth_mm: 400,
+    offCentreDowncomerWidth_mm: 400,
+    offCentreDowncomerOffset_mm: 1350,
+    oddTrayOutlets: 'side',
+    ...(liquidSplit ? { liquidSplit } : {}),
   },
 });
 
 const load = (tray: number, liquid = 400000): TrayLoad => ({
-  tray, vapourMassFlow_kg_h: 250000, liquidMassFlow_kg_h: liquid, vapourDensity_kg_m3: 3.5, liquidDensity_kg_m3: 700, surfaceTension_mN_m: 15,
+  tray,
+  vapourMassFlow_kg_h: 250000,
+  liquidMassFlow_kg_h: liquid,
+  vapourDensity_kg_m3: 3.5,
+  liquidDensity_kg_m3: 700,
+  surfaceTension_mN_m: 15,
 });
 
 describe('circle geometry (derived identities)', () => {
@@ -73,7 +98,8 @@ describe('two-pass layout', () => {
       else hi = m;
     }
     const section: SectionGeometry = {
-      ...twoPass(), columnDiameter_m: 2 * r,
+      ...twoPass(),
+      columnDiameter_m: 2 * r,
       passLayout: { sideDowncomerWidth_mm: ws * 1000, centreDowncomerWidth_mm: lo * 1000, oddTrayOutlets: 'side' },
     };
     const side = passTray(section, section.passLayout!, 'side');
@@ -124,11 +150,21 @@ describe('four-pass layout', () => {
     expect(odd.panels[0]!.areaFraction).toBeCloseTo(outer / (2 * (outer + inner)), 12);
     expect(odd.panels[1]!.areaFraction).toBeCloseTo(inner / (2 * (outer + inner)), 12);
     // odd trays: outer passes to the side weirs, inner passes to the centre weirs (centre downcomer shared)
-    expect(odd.panels.map((p) => p.weirLength)).toEqual([chordLength(r, 2.5), chordLength(r, 0.2), chordLength(r, 0.2), chordLength(r, 2.5)]);
+    expect(odd.panels.map((p) => p.weirLength)).toEqual([
+      chordLength(r, 2.5),
+      chordLength(r, 0.2),
+      chordLength(r, 0.2),
+      chordLength(r, 2.5),
+    ]);
     expect(odd.downcomers.map((d) => d.kind)).toEqual([0, 1, 0]);
     expect(odd.panels.map((p) => p.downcomer)).toEqual([0, 1, 1, 2]);
     // even trays: every pass to an off-centre downcomer, outer passes over its outer wall
-    expect(even.panels.map((p) => p.weirLength)).toEqual([chordLength(r, 1.55), chordLength(r, 1.15), chordLength(r, 1.15), chordLength(r, 1.55)]);
+    expect(even.panels.map((p) => p.weirLength)).toEqual([
+      chordLength(r, 1.55),
+      chordLength(r, 1.15),
+      chordLength(r, 1.15),
+      chordLength(r, 1.55),
+    ]);
     expect(even.downcomers.map((d) => d.kind)).toEqual([2, 2]);
     expect(even.downcomers[0]!.area).toBeCloseTo(segment(r, 1.15) - segment(r, 1.55), 12);
   });
@@ -140,7 +176,10 @@ describe('four-pass layout', () => {
     expect(pp.imbalance_percent).toBeCloseTo(expected, 12);
     expect(passImbalancePercent([0.25, 0.25, 0.25, 0.25], [0.22, 0.28, 0.28, 0.22])).toBeCloseTo(13.636, 3);
     // exactly at the 10 % limit (0.55 of the liquid on half the area) is not beyond it
-    const atLimit = rateTray({ ...twoPass(), passLayout: { ...twoPass().passLayout!, liquidSplit: [0.45, 0.55] } }, load(1, 140000));
+    const atLimit = rateTray(
+      { ...twoPass(), passLayout: { ...twoPass().passLayout!, liquidSplit: [0.45, 0.55] } },
+      load(1, 140000),
+    );
     expect(atLimit.details.passImbalance_percent).toBeCloseTo(10, 9);
     expect(atLimit.warnings.some((w) => w.code === 'pass-imbalance')).toBe(false);
     expect(pp.imbalance_percent).toBeGreaterThan(10); // equal flow paths give unequal panel areas
@@ -159,11 +198,17 @@ describe('four-pass layout', () => {
     const loads = [0, 1, 2, 3].map((i) => weirLoadingVolumetric(split[i]! * q, t.details[`pass${i + 1}WeirLength_m`]!));
     expect(t.checks.weirLoading.value).toBeCloseTo(Math.max(...loads), 9);
     expect(t.details.pass2CrestOverWeir_mm).toBeCloseTo(crestOverWeirFrancis(0.3 * q, chordLength(3, 0.2)), 9);
-    expect(t.checks.liquidLoad.value).toBeCloseTo(Math.min(...[0, 1, 2, 3].map((i) => t.details[`pass${i + 1}CrestOverWeir_mm`]!)), 9);
+    expect(t.checks.liquidLoad.value).toBeCloseTo(
+      Math.min(...[0, 1, 2, 3].map((i) => t.details[`pass${i + 1}CrestOverWeir_mm`]!)),
+      9,
+    );
     // even tray: one off-centre downcomer takes passes 1 and 2 (half the liquid)
     const e = rateTray(fourPass(split), load(4));
     expect(e.details.pass1DowncomerInletVelocity_m_s).toBeCloseTo((0.5 * q) / (segment(3, 1.15) - segment(3, 1.55)), 9);
-    expect(e.checks.downcomerBackup.value).toBeCloseTo(Math.max(e.details.pass1DowncomerBackupPercent!, e.details.pass2DowncomerBackupPercent!), 9);
+    expect(e.checks.downcomerBackup.value).toBeCloseTo(
+      Math.max(e.details.pass1DowncomerBackupPercent!, e.details.pass2DowncomerBackupPercent!),
+      9,
+    );
   });
 
   it("draws the operating window's weir-loading line where the worst pass reaches the limit", () => {
@@ -178,7 +223,15 @@ describe('four-pass layout', () => {
 describe('passes and layout input', () => {
   it('warns (never blocks) on passes unusual for the diameter', () => {
     const req = inventedRequest();
-    const small = { ...req.section, passes: 4 as const, columnDiameter_m: 2.5, activeArea_m2: 3, downcomerTopArea_m2: 0.9, downcomerBottomArea_m2: 0.8, outletWeirLength_m: 6 };
+    const small = {
+      ...req.section,
+      passes: 4 as const,
+      columnDiameter_m: 2.5,
+      activeArea_m2: 3,
+      downcomerTopArea_m2: 0.9,
+      downcomerBottomArea_m2: 0.8,
+      outletWeirLength_m: 6,
+    };
     expect(validateRatingRequest({ section: small, trays: req.trays }).ok).toBe(true);
     expect(rateTray(small, req.trays[0]!).warnings.some((w) => w.code === 'passes-for-diameter')).toBe(true);
     expect(rateTray(req.section, req.trays[0]!).warnings.some((w) => w.code === 'passes-for-diameter')).toBe(false);
@@ -194,7 +247,10 @@ describe('passes and layout input', () => {
     expect(onePass).toHaveLength(1);
     expect(onePass[0]).toMatchObject({ path: '/section/passLayout' });
     expect(onePass[0]!.message).toMatch(/two- and four-pass/);
-    const noDeck = errs({ ...twoPass(), passLayout: { sideDowncomerWidth_mm: 1200, centreDowncomerWidth_mm: 900, oddTrayOutlets: 'side' } });
+    const noDeck = errs({
+      ...twoPass(),
+      passLayout: { sideDowncomerWidth_mm: 1200, centreDowncomerWidth_mm: 900, oddTrayOutlets: 'side' },
+    });
     expect(noDeck[0]?.path).toBe('/section/passLayout/centreDowncomerWidth_mm');
     const split = errs({ ...twoPass(), passLayout: { ...twoPass().passLayout!, liquidSplit: [0.5, 0.6] } });
     expect(split[0]?.path).toBe('/section/passLayout/liquidSplit');
@@ -207,6 +263,8 @@ describe('passes and layout input', () => {
     const overlap = errs({ ...four, passLayout: { ...four.passLayout!, offCentreDowncomerOffset_mm: 300 } });
     expect(overlap[0]?.path).toBe('/section/passLayout/offCentreDowncomerOffset_mm');
     expect(errs(four)).toEqual([]);
-    expect(errs({ ...twoPass(), passLayout: { ...twoPass().passLayout!, oddTrayOutlets: 'centre' as 'side' } })[0]?.path).toBe('/section/passLayout/oddTrayOutlets');
+    expect(errs({ ...twoPass(), passLayout: { ...twoPass().passLayout!, oddTrayOutlets: 'centre' as 'side' } })[0]?.path).toBe(
+      '/section/passLayout/oddTrayOutlets',
+    );
   });
 });

@@ -15,7 +15,16 @@ describe('operating window', () => {
   const curve = (name: string) => w.curves.find((c) => c.limit === name)!;
 
   it('has every limit curve, finite points and the operating point', () => {
-    for (const name of ['flood', 'floodDesign', 'entrainment', 'downcomerBackup', 'downcomerInletVelocity', 'weep', 'minWeirLoading', 'maxWeirLoading']) {
+    for (const name of [
+      'flood',
+      'floodDesign',
+      'entrainment',
+      'downcomerBackup',
+      'downcomerInletVelocity',
+      'weep',
+      'minWeirLoading',
+      'maxWeirLoading',
+    ]) {
       const c = curve(name);
       expect(c, name).toBeDefined();
       expect(c.liquid_kg_h.length).toBe(c.vapour_kg_h.length);
@@ -30,7 +39,8 @@ describe('operating window', () => {
     const d = curve('floodDesign');
     const wp = curve('weep');
     for (const i of [1, 5, 10]) {
-      const at = (v: number, l: number) => rateTray(seaderTray, { ...seader748Bottom, vapourMassFlow_kg_h: v, liquidMassFlow_kg_h: l });
+      const at = (v: number, l: number) =>
+        rateTray(seaderTray, { ...seader748Bottom, vapourMassFlow_kg_h: v, liquidMassFlow_kg_h: l });
       expect(at(f.vapour_kg_h[i]!, f.liquid_kg_h[i]!).checks.jetFlood.value).toBeCloseTo(100, 3);
       expect(at(d.vapour_kg_h[i]!, d.liquid_kg_h[i]!).checks.jetFlood.value).toBeCloseTo(80, 3);
       expect(at(wp.vapour_kg_h[i]!, wp.liquid_kg_h[i]!).checks.weeping.value).toBeCloseTo(1, 6);

@@ -23,15 +23,18 @@ const sectionArb: fc.Arbitrary<SectionGeometry> = fc
     foaming: fc.constantFrom('low' as const, 'moderate' as const, 'high' as const, 'very-high' as const),
     shape: fc.constantFrom('flat' as const, 'venturi' as const),
     // pass layout (two and four passes): fractions of the room left, so that every panel has deck
-    layout: fc.option(fc.record({
-      fSide: fc.double({ min: 0.05, max: 0.4, noNaN: true }),
-      fCentre: fc.double({ min: 0.05, max: 0.6, noNaN: true }),
-      fOff: fc.double({ min: 0.05, max: 0.5, noNaN: true }),
-      fPos: fc.double({ min: 0.05, max: 0.95, noNaN: true }),
-      split: fc.array(fc.double({ min: 0.05, max: 1, noNaN: true }), { minLength: 4, maxLength: 4 }),
-      equal: fc.boolean(),
-      odd: fc.constantFrom('side' as const, 'inner' as const),
-    }), { nil: undefined }),
+    layout: fc.option(
+      fc.record({
+        fSide: fc.double({ min: 0.05, max: 0.4, noNaN: true }),
+        fCentre: fc.double({ min: 0.05, max: 0.6, noNaN: true }),
+        fOff: fc.double({ min: 0.05, max: 0.5, noNaN: true }),
+        fPos: fc.double({ min: 0.05, max: 0.95, noNaN: true }),
+        split: fc.array(fc.double({ min: 0.05, max: 1, noNaN: true }), { minLength: 4, maxLength: 4 }),
+        equal: fc.boolean(),
+        odd: fc.constantFrom('side' as const, 'inner' as const),
+      }),
+      { nil: undefined },
+    ),
   })
   .map((g) => {
     const at = (Math.PI / 4) * g.d * g.d;
@@ -40,11 +43,29 @@ const sectionArb: fc.Arbitrary<SectionGeometry> = fc
     const active = g.fActive * (at - top - bottom);
     const hw = Math.min(300, g.fHw * g.ts);
     return {
-      trayType: g.trayType, passes: g.passes, columnDiameter_m: g.d, traySpacing_mm: g.ts, activeArea_m2: active,
-      downcomerTopArea_m2: top, downcomerBottomArea_m2: bottom, outletWeirLength_m: g.fWeir * g.passes * g.d,
-      weirHeight_mm: hw, downcomerClearance_mm: Math.max(1, g.fClear * g.ts), holeArea_m2: Math.max(1e-6, g.fHole * active),
-      holeDiameter_mm: g.dh, deckThickness_mm: g.deck, systemFactor: g.sf, foaming: g.foaming,
-      valves: { count: 100, orificeDiameter_mm: 39, valveThickness_mm: 1.5, materialDensity_kg_m3: 8000, legFactor: 1.2, orificeShape: g.shape },
+      trayType: g.trayType,
+      passes: g.passes,
+      columnDiameter_m: g.d,
+      traySpacing_mm: g.ts,
+      activeArea_m2: active,
+      downcomerTopArea_m2: top,
+      downcomerBottomArea_m2: bottom,
+      outletWeirLength_m: g.fWeir * g.passes * g.d,
+      weirHeight_mm: hw,
+      downcomerClearance_mm: Math.max(1, g.fClear * g.ts),
+      holeArea_m2: Math.max(1e-6, g.fHole * active),
+      holeDiameter_mm: g.dh,
+      deckThickness_mm: g.deck,
+      systemFactor: g.sf,
+      foaming: g.foaming,
+      valves: {
+        count: 100,
+        orificeDiameter_mm: 39,
+        valveThickness_mm: 1.5,
+        materialDensity_kg_m3: 8000,
+        legFactor: 1.2,
+        orificeShape: g.shape,
+      },
       ...(g.layout && g.passes > 1 ? { passLayout: layoutOf(g.layout, g.passes as 2 | 4, g.d) } : {}),
     };
   });
@@ -72,7 +93,11 @@ function layoutOf(
   return out;
 }
 
-const flowArb = fc.oneof(fc.constant(0), fc.double({ min: 0, max: 1e6, noNaN: true }), fc.double({ min: 0, max: 1e8, noNaN: true }));
+const flowArb = fc.oneof(
+  fc.constant(0),
+  fc.double({ min: 0, max: 1e6, noNaN: true }),
+  fc.double({ min: 0, max: 1e8, noNaN: true }),
+);
 
 const loadArb: fc.Arbitrary<TrayLoad> = fc
   .record({
@@ -86,7 +111,14 @@ const loadArb: fc.Arbitrary<TrayLoad> = fc
   .map((x) => {
     const rhoL = Math.min(3000, Math.max(50, x.rhoV * x.ratio));
     const rhoV = Math.min(x.rhoV, rhoL / 1.05);
-    const t: TrayLoad = { tray: 1, vapourMassFlow_kg_h: x.v, liquidMassFlow_kg_h: x.l, vapourDensity_kg_m3: rhoV, liquidDensity_kg_m3: rhoL, surfaceTension_mN_m: x.sigma };
+    const t: TrayLoad = {
+      tray: 1,
+      vapourMassFlow_kg_h: x.v,
+      liquidMassFlow_kg_h: x.l,
+      vapourDensity_kg_m3: rhoV,
+      liquidDensity_kg_m3: rhoL,
+      surfaceTension_mN_m: x.sigma,
+    };
     if (x.p !== undefined) t.pressure_kPa = x.p;
     return t;
   });
@@ -104,43 +136,67 @@ const RUNS = { numRuns: 400 };
 
 describe('property tests over the valid input space (fast-check)', () => {
   it('generated requests are valid requests', () => {
-    fc.assert(fc.property(sectionArb, loadArb, (s, l) => {
-      const v = validateRatingRequest({ section: s, trays: [l] });
-      expect(v.ok ? [] : v.errors).toEqual([]);
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(sectionArb, loadArb, (s, l) => {
+        const v = validateRatingRequest({ section: s, trays: [l] });
+        expect(v.ok ? [] : v.errors).toEqual([]);
+      }),
+      { numRuns: 200 },
+    );
   });
 
   it('no NaN or Infinity anywhere in a result, including zero liquid and zero vapour', () => {
-    fc.assert(fc.property(sectionArb, loadArb, methodArb, (s, l, m) => {
-      const req: RatingRequest = { section: s, trays: [l, { ...l, tray: 2, vapourMassFlow_kg_h: 0 }, { ...l, tray: 3, liquidMassFlow_kg_h: 0 }, { ...l, tray: 4, vapourMassFlow_kg_h: 0, liquidMassFlow_kg_h: 0 }], methods: { jetFlood: m } };
-      expect(allNumbersFinite(rateSection(req))).toBe(true);
-    }), RUNS);
+    fc.assert(
+      fc.property(sectionArb, loadArb, methodArb, (s, l, m) => {
+        const req: RatingRequest = {
+          section: s,
+          trays: [
+            l,
+            { ...l, tray: 2, vapourMassFlow_kg_h: 0 },
+            { ...l, tray: 3, liquidMassFlow_kg_h: 0 },
+            { ...l, tray: 4, vapourMassFlow_kg_h: 0, liquidMassFlow_kg_h: 0 },
+          ],
+          methods: { jetFlood: m },
+        };
+        expect(allNumbersFinite(rateSection(req))).toBe(true);
+      }),
+      RUNS,
+    );
   });
 
   it('more vapour never lowers percent flood nor raises the weeping percent of limit', () => {
-    fc.assert(fc.property(sectionArb, loadArb, methodArb, fc.double({ min: 1, max: 10, noNaN: true }), (s, l, m, k) => {
-      const methods = { jetFlood: m };
-      const a = rateTray(s, l, methods);
-      const b = rateTray(s, { ...l, vapourMassFlow_kg_h: l.vapourMassFlow_kg_h * k + 1 }, methods);
-      expect(b.checks.jetFlood.value).toBeGreaterThanOrEqual(a.checks.jetFlood.value * (1 - 1e-12));
-      expect(b.checks.weeping.percentOfLimit).toBeLessThanOrEqual(a.checks.weeping.percentOfLimit * (1 + 1e-12) + 1e-12);
-    }), RUNS);
+    fc.assert(
+      fc.property(sectionArb, loadArb, methodArb, fc.double({ min: 1, max: 10, noNaN: true }), (s, l, m, k) => {
+        const methods = { jetFlood: m };
+        const a = rateTray(s, l, methods);
+        const b = rateTray(s, { ...l, vapourMassFlow_kg_h: l.vapourMassFlow_kg_h * k + 1 }, methods);
+        expect(b.checks.jetFlood.value).toBeGreaterThanOrEqual(a.checks.jetFlood.value * (1 - 1e-12));
+        expect(b.checks.weeping.percentOfLimit).toBeLessThanOrEqual(a.checks.weeping.percentOfLimit * (1 + 1e-12) + 1e-12);
+      }),
+      RUNS,
+    );
   });
 
   it('more liquid never lowers downcomer backup', () => {
-    fc.assert(fc.property(sectionArb, loadArb, fc.double({ min: 1, max: 10, noNaN: true }), (s, l, k) => {
-      const a = rateTray(s, l);
-      const b = rateTray(s, { ...l, liquidMassFlow_kg_h: l.liquidMassFlow_kg_h * k + 1 });
-      expect(b.checks.downcomerBackup.value).toBeGreaterThanOrEqual(a.checks.downcomerBackup.value * (1 - 1e-12));
-    }), RUNS);
+    fc.assert(
+      fc.property(sectionArb, loadArb, fc.double({ min: 1, max: 10, noNaN: true }), (s, l, k) => {
+        const a = rateTray(s, l);
+        const b = rateTray(s, { ...l, liquidMassFlow_kg_h: l.liquidMassFlow_kg_h * k + 1 });
+        expect(b.checks.downcomerBackup.value).toBeGreaterThanOrEqual(a.checks.downcomerBackup.value * (1 - 1e-12));
+      }),
+      RUNS,
+    );
   });
 
   it('status follows percent of limit (near at ≥ 90 %, over at ≥ 100 %); a check that does not apply is at 0 %', () => {
-    fc.assert(fc.property(sectionArb, loadArb, (s, l) => {
-      for (const c of Object.values(rateTray(s, l).checks)) {
-        if (c.status === 'na') expect(c.percentOfLimit).toBe(0);
-        else expect(c.status).toBe(c.percentOfLimit >= 100 ? 'over' : c.percentOfLimit >= 90 ? 'near' : 'ok');
-      }
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(sectionArb, loadArb, (s, l) => {
+        for (const c of Object.values(rateTray(s, l).checks)) {
+          if (c.status === 'na') expect(c.percentOfLimit).toBe(0);
+          else expect(c.status).toBe(c.percentOfLimit >= 100 ? 'over' : c.percentOfLimit >= 90 ? 'near' : 'ok');
+        }
+      }),
+      { numRuns: 200 },
+    );
   });
 });

@@ -39,7 +39,11 @@ describe('method registry', () => {
   });
 
   it('every CheckResult.method is a registry key', () => {
-    for (const req of [seaderRequest(), inventedRequest(), { ...seaderRequest(), methods: { jetFlood: 'kister-haas' as const } }]) {
+    for (const req of [
+      seaderRequest(),
+      inventedRequest(),
+      { ...seaderRequest(), methods: { jetFlood: 'kister-haas' as const } },
+    ]) {
       for (const t of rateSection(req).trays) {
         for (const c of Object.values(t.checks)) expect(Object.keys(METHOD_REGISTRY)).toContain(c.method);
       }

@@ -34,7 +34,10 @@ describe('validateRatingRequest', () => {
     const req = inventedRequest();
     req.trays[0]!.liquidMassFlow_kg_h = -5;
     const errors = errorsOf(req);
-    expect(errors).toContainEqual({ path: '/trays/0/liquidMassFlow_kg_h', message: 'tray 11, liquidMassFlow_kg_h: must be >= 0' });
+    expect(errors).toContainEqual({
+      path: '/trays/0/liquidMassFlow_kg_h',
+      message: 'tray 11, liquidMassFlow_kg_h: must be >= 0',
+    });
   });
 
   it('areas that do not fit in the column, hole area above active area, weir height not below tray spacing', () => {
@@ -76,7 +79,10 @@ describe('validateRatingRequest', () => {
     expect(errorsOf(req)[0]).toMatchObject({ path: '/trays/1/tray' });
     const missing = inventedRequest() as unknown as { trays: Record<string, unknown>[] };
     delete missing.trays[0]!.surfaceTension_mN_m;
-    expect(errorsOf(missing)).toContainEqual({ path: '/trays/0/surfaceTension_mN_m', message: 'tray 11, surfaceTension_mN_m: is required' });
+    expect(errorsOf(missing)).toContainEqual({
+      path: '/trays/0/surfaceTension_mN_m',
+      message: 'tray 11, surfaceTension_mN_m: is required',
+    });
     expect(errorsOf(null)[0]!.path).toBe('/');
   });
 });

@@ -12,7 +12,12 @@ import { inventedRequest, seader748Bottom, seaderTray } from './fixtures.js';
 /** The invented demo column T-701 rated with one of its load cases (as the demo runs are). */
 function demoRun(loadCase: string, jetFlood: JetFloodMethod) {
   const lc = DEMO_LOAD_CASES.find((c) => c.name === loadCase)!;
-  const sections = DEMO_SECTIONS.map((s, i) => ({ ...s, sectionId: `s${i}`, provenanceDate: s.provenanceDate ?? null, overridden: false }));
+  const sections = DEMO_SECTIONS.map((s, i) => ({
+    ...s,
+    sectionId: `s${i}`,
+    provenanceDate: s.provenanceDate ?? null,
+    overridden: false,
+  }));
   return rateSnapshot({
     column: { id: 'c', tag: 'T-701', numbering: 'top-down', trayCount: 46 },
     loadCase: { id: 'l', name: loadCase, basis: lc.basis, version: 1 },
@@ -57,12 +62,15 @@ describe('flooded trays', () => {
 });
 
 describe('flood and entrainment on one basis', () => {
-  it('with Kister & Haas chosen, entrainment is read from Kister & Haas percent flood (not Fair\'s)', () => {
+  it("with Kister & Haas chosen, entrainment is read from Kister & Haas percent flood (not Fair's)", () => {
     const req = { section: seaderTray, trays: [seader748Bottom] };
     const kh = rateSection({ ...req, methods: { jetFlood: 'kister-haas' } }).trays[0]!;
     const fair = rateSection(req).trays[0]!;
     const flvEnt = Math.min(Math.max(kh.details.flowParameter, 0.01), 0.2);
-    expect(kh.details.entrainmentFraction).toBeCloseTo(fairEntrainmentOwnFit(flvEnt, kh.details.percentFloodKisterHaas! / 100), 12);
+    expect(kh.details.entrainmentFraction).toBeCloseTo(
+      fairEntrainmentOwnFit(flvEnt, kh.details.percentFloodKisterHaas! / 100),
+      12,
+    );
     expect(fair.details.entrainmentFraction).toBeCloseTo(fairEntrainmentOwnFit(flvEnt, fair.details.percentFloodFair! / 100), 12);
     expect(kh.details.percentFloodKisterHaas).not.toBeCloseTo(kh.details.percentFloodFair!, 0);
   });
@@ -77,7 +85,16 @@ describe('dry trays', () => {
     expect(dry.details.residualHead_mm).toBe(0);
     expect(dry.details.totalHead_mm).toBeCloseTo(dry.details.dryPressureDrop_mm, 12);
     expect(dry.details.entrainmentFraction).toBe(0);
-    for (const c of ['entrainment', 'weeping', 'weirLoading', 'liquidLoad', 'downcomerBackup', 'downcomerInletVelocity', 'downcomerResidenceTime', 'downcomerSeal'] as const)
+    for (const c of [
+      'entrainment',
+      'weeping',
+      'weirLoading',
+      'liquidLoad',
+      'downcomerBackup',
+      'downcomerInletVelocity',
+      'downcomerResidenceTime',
+      'downcomerSeal',
+    ] as const)
       expect(dry.checks[c].status, c).toBe('na');
     expect(dry.checks.jetFlood.status).not.toBe('na');
     expect(dry.checks.pressureDrop.status).not.toBe('na');

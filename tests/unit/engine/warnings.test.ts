@@ -14,12 +14,18 @@ describe('range warnings and multipass', () => {
   });
 
   it('warns for Kister & Haas outside its Perry Table 14-10 range and for Fair hole area below 0.06', () => {
-    const req = { section: { ...seaderTray, traySpacing_mm: 300, holeArea_m2: 0.05 * seaderTray.activeArea_m2 }, trays: [seader748Bottom], methods: { jetFlood: 'kister-haas' as const } };
+    const req = {
+      section: { ...seaderTray, traySpacing_mm: 300, holeArea_m2: 0.05 * seaderTray.activeArea_m2 },
+      trays: [seader748Bottom],
+      methods: { jetFlood: 'kister-haas' as const },
+    };
     const r = rateSection(req);
-    expect(codes(r.warnings)).toEqual(expect.arrayContaining([
-      'range:kisterHaasFloodCapacity:traySpacing_mm',
-      'range:fairFloodCapacityLygerosMagoulas:holeAreaRatio',
-    ]));
+    expect(codes(r.warnings)).toEqual(
+      expect.arrayContaining([
+        'range:kisterHaasFloodCapacity:traySpacing_mm',
+        'range:fairFloodCapacityLygerosMagoulas:holeAreaRatio',
+      ]),
+    );
     expect(r.trays[0]!.checks.jetFlood.method).toBe('kisterHaasFloodCapacity');
     // The h_ct uncertainty (leading coefficient about 1.5 %, Perry 8th eqs. 14-82 to 14-84 via a
     // secondary source) is stated once in the method's source for the methods list, no longer as a warning

@@ -30,19 +30,34 @@ describe('Eduljee weep point (Sinnott form)', () => {
 describe('Fair weep criterion (h_d + h_σ = h_L)', () => {
   it('predicts no weeping for Seader & Henley (1998) solution 7.48, bottom tray', () => {
     // solution: h_d + h_σ = 1.35 + 0.31 = 1.66 in > h_L = 1.22 in at u_o = 75.0 ft/s → no weeping
-    const rhoV = 0.0408 * 16.0185, rhoL = 59.5 * 16.0185;
+    const rhoV = 0.0408 * 16.0185,
+      rhoL = 59.5 * 16.0185;
     const uWeep = weepPointHoleVelocityFair({
-      dryK: 50.8 / 0.73 ** 2, holeAreaRatio: 0.1, vapourDensity: rhoV, liquidDensity: rhoL, weirHeight_mm: 50.8,
-      liquid_m3_s: 97.9 * 6.30902e-5, weirLength_m: 1.0795, residualHead_mm: residualHeadBennett(58, 954, 4.7625),
+      dryK: 50.8 / 0.73 ** 2,
+      holeAreaRatio: 0.1,
+      vapourDensity: rhoV,
+      liquidDensity: rhoL,
+      weirHeight_mm: 50.8,
+      liquid_m3_s: 97.9 * 6.30902e-5,
+      weirLength_m: 1.0795,
+      residualHead_mm: residualHeadBennett(58, 954, 4.7625),
     });
     expect(uWeep).toBeGreaterThan(0);
     expect(uWeep).toBeLessThan(75 * 0.3048);
   });
   it('returns 0 when the residual head alone exceeds the clear liquid (no weeping possible)', () => {
-    expect(weepPointHoleVelocityFair({
-      dryK: 95, holeAreaRatio: 0.1, vapourDensity: 2, liquidDensity: 700, weirHeight_mm: 0, liquid_m3_s: 0,
-      weirLength_m: 1, residualHead_mm: 5,
-    })).toBe(0);
+    expect(
+      weepPointHoleVelocityFair({
+        dryK: 95,
+        holeAreaRatio: 0.1,
+        vapourDensity: 2,
+        liquidDensity: 700,
+        weirHeight_mm: 0,
+        liquid_m3_s: 0,
+        weirLength_m: 1,
+        residualHead_mm: 5,
+      }),
+    ).toBe(0);
   });
 });
 
@@ -53,6 +68,8 @@ describe('Klein closed-valve balance point', () => {
     expect(Math.abs(rel(kleinClosedBalanceVelocity(1.25, 1.5, 8000, kleinClosedValveK('flat'), 3, 1), 1.72))).toBeLessThan(0.01);
     // ... and 1.72 × 1.3^0.5 = 1.96 m/s with C_vw = 1.3 as printed in Ludwig Vol. 2 3rd ed. Example 8-41 (derived);
     // the printed example itself is reproduced in kleinValve.test.ts
-    expect(Math.abs(rel(kleinClosedBalanceVelocity(1.25, 1.5, 8000, kleinClosedValveK('flat'), 3, 1.3), 1.961))).toBeLessThan(0.01);
+    expect(Math.abs(rel(kleinClosedBalanceVelocity(1.25, 1.5, 8000, kleinClosedValveK('flat'), 3, 1.3), 1.961))).toBeLessThan(
+      0.01,
+    );
   });
 });

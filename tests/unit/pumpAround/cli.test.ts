@@ -5,7 +5,11 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 
 function cli(...args: string[]) {
-  return spawnSync('npx', ['tsx', 'server/cli.ts', 'pump-around', ...args], { encoding: 'utf8', timeout: 60000, maxBuffer: 64 * 1024 * 1024 });
+  return spawnSync('npx', ['tsx', 'server/cli.ts', 'pump-around', ...args], {
+    encoding: 'utf8',
+    timeout: 60000,
+    maxBuffer: 64 * 1024 * 1024,
+  });
 }
 
 describe('pump-around batch command', () => {
@@ -17,7 +21,14 @@ describe('pump-around batch command', () => {
     const out = JSON.parse(r.stdout);
     expect(out.dryOutDuty_kW).toBeCloseTo(9475, 6);
     expect(out.dryOutTray).toBe(6);
-    for (const key of ['minimumLiquidDuty_kW', 'zoneOverloadDuty_kW', 'limitingDuty_kW', 'limitingTray', 'limitingCheck', 'recommendedDuty_kW'])
+    for (const key of [
+      'minimumLiquidDuty_kW',
+      'zoneOverloadDuty_kW',
+      'limitingDuty_kW',
+      'limitingTray',
+      'limitingCheck',
+      'recommendedDuty_kW',
+    ])
       expect(out).toHaveProperty(key);
     expect(out.points).toHaveLength(23);
     expect(out.points[0].trays[0]).toHaveProperty('rating.checks.jetFlood');

@@ -1,7 +1,13 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { rateTray } from '../../../server/engine/index.js';
-import { dryOutDuty, runStudy, runStudyWith, sectionForTray, validateStudyInput } from '../../../server/engine/pumpAround/index.js';
+import {
+  dryOutDuty,
+  runStudy,
+  runStudyWith,
+  sectionForTray,
+  validateStudyInput,
+} from '../../../server/engine/pumpAround/index.js';
 import { slimPoint } from '../../../server/services/studyResult.js';
 import type { StudyInput, StudyResult } from '../../../shared/types/pumpAround.js';
 import type { CheckName, TrayLoad } from '../../../shared/types/rating.js';
@@ -125,7 +131,10 @@ describe('runStudy on the invented example column', () => {
   it('a limit that is never reached before dry-out is null', () => {
     const loose = runStudy({
       ...input,
-      methods: { ...input.methods, limits: { downcomerBackup: 500, jetFlood: 500, downcomerInletVelocity: 50, weirLoading: 5000 } },
+      methods: {
+        ...input.methods,
+        limits: { downcomerBackup: 500, jetFlood: 500, downcomerInletVelocity: 50, weirLoading: 5000 },
+      },
     });
     expect(loose.zoneOverloadDuty_kW).toBeNull();
     expect(loose.zoneOverloadTray).toBeNull();
@@ -179,7 +188,11 @@ describe('runStudy on the invented example column', () => {
       numbering: 'bottom-up',
       sections: input.sections.map((s) => ({ ...s, fromTray: flip(s.fromTray), toTray: flip(s.toTray) })),
       trays: input.trays.map((t) => ({ ...t, tray: flip(t.tray) })),
-      pumpAround: { ...input.pumpAround, drawTray: flip(input.pumpAround.drawTray), returnTray: flip(input.pumpAround.returnTray) },
+      pumpAround: {
+        ...input.pumpAround,
+        drawTray: flip(input.pumpAround.drawTray),
+        returnTray: flip(input.pumpAround.returnTray),
+      },
     };
     const u = runStudy(up);
     expect(u.dryOutDuty_kW).toBe(r.dryOutDuty_kW);
@@ -203,18 +216,42 @@ describe('hand-worked minimum crest duty (our own numbers)', () => {
    *   dry-out duty        = 2000 + 300 × 20 000/3600 = 3666.67 kW
    */
   const section = {
-    name: 'S', fromTray: 1, toTray: 6, trayType: 'sieve' as const, passes: 1 as const, columnDiameter_m: 4.2,
-    traySpacing_mm: 610, activeArea_m2: 10.5, downcomerTopArea_m2: 1.66, downcomerBottomArea_m2: 1.66,
-    outletWeirLength_m: 3.2, weirHeight_mm: 50, downcomerClearance_mm: 50, holeArea_m2: 1.0,
-    holeDiameter_mm: 12.7, deckThickness_mm: 3,
+    name: 'S',
+    fromTray: 1,
+    toTray: 6,
+    trayType: 'sieve' as const,
+    passes: 1 as const,
+    columnDiameter_m: 4.2,
+    traySpacing_mm: 610,
+    activeArea_m2: 10.5,
+    downcomerTopArea_m2: 1.66,
+    downcomerBottomArea_m2: 1.66,
+    outletWeirLength_m: 3.2,
+    weirHeight_mm: 50,
+    downcomerClearance_mm: 50,
+    holeArea_m2: 1.0,
+    holeDiameter_mm: 12.7,
+    deckThickness_mm: 3,
   };
   const load = (tray: number, v: number, l: number): TrayLoad => ({
-    tray, vapourMassFlow_kg_h: v, liquidMassFlow_kg_h: l, vapourDensity_kg_m3: 3.5, liquidDensity_kg_m3: 700, surfaceTension_mN_m: 18,
+    tray,
+    vapourMassFlow_kg_h: v,
+    liquidMassFlow_kg_h: l,
+    vapourDensity_kg_m3: 3.5,
+    liquidDensity_kg_m3: 700,
+    surfaceTension_mN_m: 18,
   });
   const input: StudyInput = {
     sections: [section],
     trays: [load(1, 60000, 24000), load(2, 56000, 20000), load(3, 60000, 30000), load(4, 64000, 34000), load(5, 66000, 36000)],
-    pumpAround: { name: 'PA-H', drawTray: 4, returnTray: 3, baseDuty_kW: 2000, liquidHeatCapacity_kJ_kgK: 2.5, returnTemperatureDrop_K: 60 },
+    pumpAround: {
+      name: 'PA-H',
+      drawTray: 4,
+      returnTray: 3,
+      baseDuty_kW: 2000,
+      liquidHeatCapacity_kJ_kgK: 2.5,
+      returnTemperatureDrop_K: 60,
+    },
     latentHeat_kJ_kg: 300,
     sweep: { fromDuty_kW: 2000, toDuty_kW: 3000, steps: 4 },
     methods: { limits: { weeping: 0 } },
