@@ -23,7 +23,7 @@ export const createStudySchema = {
     returnTemperatureDrop_K: pa.returnTemperatureDrop_K,
     circulation_kg_h: pa.circulation_kg_h,
     baseDuty_kW: pa.baseDuty_kW,
-    zoneLiquidIncludesCirculation: { type: 'boolean', default: false },
+    zoneLiquidIncludesCirculation: { type: 'boolean' },
     sweep: {
       ...dutySweepSchema,
       properties: { ...dutySweepSchema.properties, steps: { type: 'integer', minimum: 1, maximum: STORED_STUDY_MAX_STEPS } },
@@ -31,7 +31,7 @@ export const createStudySchema = {
     margin: { type: 'number', exclusiveMinimum: 0, maximum: 1, default: 0.7 },
     methods: methodOptionsSchema,
   },
-  required: ['loadCaseId', 'pumpAroundId', 'latentHeat_kJ_kg', 'liquidHeatCapacity_kJ_kgK', 'sweep'],
+  required: ['loadCaseId', 'pumpAroundId', 'latentHeat_kJ_kg', 'liquidHeatCapacity_kJ_kgK', 'zoneLiquidIncludesCirculation', 'sweep'],
   additionalProperties: false,
 } as const;
 

@@ -25,10 +25,11 @@ export interface CreateStudyBody {
   baseDuty_kW?: number;
   /**
    * true when the load case's liquid on the zone trays already carries the pump-around circulation (as a
-   * rating case does); the base circulation is then taken off before the study. Default false: the zone
-   * liquid is the net internal liquid, as the engine expects.
+   * rating case does); the base circulation is then taken off before the study. false: the zone liquid is
+   * the net internal liquid, as the engine expects. Required, no default: a wrong guess either doubles the
+   * circulation or leaves it out, so the caller must say which.
    */
-  zoneLiquidIncludesCirculation?: boolean;
+  zoneLiquidIncludesCirculation: boolean;
   sweep: DutySweep;
   /** fraction of the dry-out duty recommended at most; default 0.7 (common practice) */
   margin?: number;

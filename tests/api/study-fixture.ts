@@ -58,6 +58,8 @@ export function exampleBody(f: StudyFixture): Record<string, unknown> {
     latentHeat_kJ_kg: EXAMPLE.latentHeat_kJ_kg,
     liquidHeatCapacity_kJ_kgK: pa.liquidHeatCapacity_kJ_kgK,
     returnTemperatureDrop_K: pa.returnTemperatureDrop_K,
+    // the example's zone liquid is the net internal liquid, as the engine takes it
+    zoneLiquidIncludesCirculation: false,
     sweep: EXAMPLE.sweep,
     methods: EXAMPLE.methods,
   };

@@ -171,6 +171,20 @@ describe('POST /studies/latent-heat', () => {
 });
 
 describe('zone liquid that already carries the circulation', () => {
+  it('has no default: a request without the flag gets a 400 naming zoneLiquidIncludesCirculation, and nothing is stored', async () => {
+    const { zoneLiquidIncludesCirculation: _drop, ...body } = exampleBody(fx);
+    const before = (await author.get(`/api/columns/${fx.columnId}/studies`)).body.length as number;
+    const res = await create(author, body);
+    expect(res.status).toBe(400);
+    expect(paths(res)).toEqual(['zoneLiquidIncludesCirculation']);
+    expect(res.body.details[0].message).toMatch(/required/);
+    expect((await author.get(`/api/columns/${fx.columnId}/studies`)).body.length).toBe(before);
+    // a wrong type is named too
+    const bad = await create(author, { ...body, zoneLiquidIncludesCirculation: 'yes' });
+    expect(bad.status).toBe(400);
+    expect(paths(bad)).toEqual(['zoneLiquidIncludesCirculation']);
+  });
+
   it('takes the base circulation m0 = Q0·3600/(c_p ΔT) off each zone tray before the study', async () => {
     // the fixture's zone trays 7–9 carry 60–68 t/h; ΔT = 130 K gives m0 = 5200 × 3600 / (2.55 × 130) = 56 471 kg/h, less than each
     const res = await create(author, { ...exampleBody(fx), returnTemperatureDrop_K: 130, zoneLiquidIncludesCirculation: true });

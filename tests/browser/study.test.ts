@@ -114,6 +114,7 @@ describe('pump-around study page in Chromium', () => {
         liquidHeatCapacity_kJ_kgK: 2.7,
         returnTemperatureDrop_K: 95,
         baseDuty_kW: 21800,
+        zoneLiquidIncludesCirculation: false,
         sweep: { fromDuty_kW: 21800, toDuty_kW: 40000, steps: 40 },
       },
     });
