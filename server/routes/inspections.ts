@@ -3,7 +3,7 @@ import { rateAsFound } from '../services/inspectionAsFound.js';
 import { inspectionPdf } from '../services/inspectionPdf.js';
 import { createInspection, getInspection, listInspections, saveTray, updateInspection } from '../services/inspections.js';
 import { signAsEngineer, signAsInspector } from '../services/inspectionSign.js';
-import { addPunchItem, updatePunchItem } from '../services/punch.js';
+import { addPunchItem, updatePunchItem, voidPunchItem } from '../services/punch.js';
 import { PUBLISHED_TOLERANCES } from '../../shared/inspectionTolerance.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import {
@@ -17,6 +17,7 @@ import {
   trayParams,
   updateInspectionBody,
   updatePunchBody,
+  voidPunchBody,
 } from '../../shared/schemas/inspections.js';
 import type * as T from '../../shared/types/inspections.js';
 
@@ -98,6 +99,18 @@ export const inspectionRoutes = defineRoutes([
     handler: async ({ ds, user, params, body }) => {
       const p = params as Id & { itemId: string };
       return updatePunchItem(ds, user, p.id, p.itemId, body as T.UpdatePunchBody);
+    },
+  },
+  {
+    method: 'post',
+    path: '/inspections/:id/punch/:itemId/void',
+    access: 'inspections.record',
+    summary: 'Void a punch-list item with a reason (draft only; kept on the list, no longer open)',
+    params: punchParams,
+    body: voidPunchBody,
+    handler: async ({ ds, user, params, body }) => {
+      const p = params as Id & { itemId: string };
+      return voidPunchItem(ds, user, p.id, p.itemId, body as T.VoidPunchBody);
     },
   },
   {

@@ -16,7 +16,7 @@ import {
 } from '../../shared/labels.js';
 import { ROLE_LABELS, type Role } from '../../shared/permissions.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { InspectionRecord, InspectionTrayRecord, MeasurementCheck } from '../../shared/types/inspections.js';
+import type { InspectionRecord, InspectionTrayRecord, MeasurementCheck, PunchItem } from '../../shared/types/inspections.js';
 
 /** Sentence form of the inspection's state (the chip's label, in lower case). */
 const statusWords = (st: InspectionRecord['status']) => INSPECTION_STATUS_LABELS[st].toLowerCase();
@@ -150,6 +150,9 @@ export function inspectionDoc(r: InspectionRecord, photos: Content[]): PdfParts 
       { text: 'Signatures', style: 'h2' },
       { table: { widths: ['auto', '*'], body: [sig('Inspector', r.inspectorSignature), sig('Engineer', r.engineerSignature)] } },
       { text: 'Punch list', style: 'h2' },
+      ...(r.punch.some((p) => p.status === 'void')
+        ? [{ text: 'Voided items are struck through and do not count as open.', fontSize: 8, margin: [0, 0, 0, 4] }]
+        : []),
       r.punch.length
         ? {
             table: {
@@ -157,18 +160,7 @@ export function inspectionDoc(r: InspectionRecord, photos: Content[]): PdfParts 
               widths: ['auto', 'auto', 'auto', '*', '*', 'auto', 'auto', 'auto'],
               body: [
                 ['#', 'Tray', 'Pass', 'Finding', 'Action', 'Priority', 'Owner', 'Status'].map((h) => ({ text: h, bold: true })),
-                ...r.punch.map((p) => [
-                  String(p.itemNo),
-                  String(p.tray ?? '—'),
-                  String(p.pass ?? '—'),
-                  p.finding,
-                  p.action,
-                  PUNCH_PRIORITY_LABELS[p.priority],
-                  p.owner,
-                  p.status === 'closed'
-                    ? `closed by ${p.closedByName ?? '—'}${p.closedAt ? `, ${pdfDateTime(p.closedAt)}` : ''}`
-                    : 'open',
-                ]),
+                ...r.punch.map((p) => punchRow(p)),
               ],
             },
             fontSize: 8,
@@ -186,4 +178,26 @@ export function inspectionDoc(r: InspectionRecord, photos: Content[]): PdfParts 
       },
     ],
   };
+}
+
+/** One punch-list row; a voided item is struck through and its status says who voided it, when and why. */
+function punchRow(p: PunchItem): Content[] {
+  const status =
+    p.status === 'closed'
+      ? `closed by ${p.closedByName ?? '—'}${p.closedAt ? `, ${pdfDateTime(p.closedAt)}` : ''}`
+      : p.status === 'void'
+        ? `voided by ${p.voidedByName ?? '—'}${p.voidedAt ? `, ${pdfDateTime(p.voidedAt)}` : ''}: ${p.voidReason}`
+        : 'open';
+  const strike = p.status === 'void' ? { decoration: 'lineThrough' as const, color: '#666666' } : {};
+  return [
+    String(p.itemNo),
+    String(p.tray ?? '—'),
+    String(p.pass ?? '—'),
+    p.finding,
+    p.action,
+    PUNCH_PRIORITY_LABELS[p.priority],
+    p.owner,
+  ]
+    .map((text) => ({ text, ...strike }))
+    .concat({ text: status });
 }

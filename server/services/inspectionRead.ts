@@ -87,6 +87,10 @@ export function punchRecord(p: PunchItemEntity, n: Map<string, string>): PunchIt
     closedBy: p.closedBy,
     closedByName: p.closedBy ? (n.get(p.closedBy) ?? null) : null,
     closedAt: p.closedAt ? iso(p.closedAt) : null,
+    voidedBy: p.voidedBy,
+    voidedByName: p.voidedBy ? (n.get(p.voidedBy) ?? null) : null,
+    voidedAt: p.voidedAt ? iso(p.voidedAt) : null,
+    voidReason: p.voidReason,
     version: p.version,
   };
 }
@@ -121,6 +125,7 @@ export async function toInspectionRecord(em: EntityManager, insp: Inspection): P
     insp.inspectorId,
     col?.engineer_id ?? null,
     ...punch.map((p) => p.closedBy),
+    ...punch.map((p) => p.voidedBy),
     ...photos.map((p) => p.uploadedBy),
   ]);
   const trayRecords = trays.map((t) => trayRecord(t, designFor(sections, t.tray), insp));

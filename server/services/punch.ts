@@ -1,13 +1,16 @@
-/** Punch list of an inspection: numbered items, closed by someone at a time; read-only once signed. */
+/**
+ * Punch list of an inspection: numbered items, closed by someone at a time, or voided with a reason (kept on
+ * the list, struck through, no longer open); read-only once signed, and a voided item can no longer change.
+ */
 import type { DataSource } from 'typeorm';
 import { PunchItemEntity } from '../db/entities/PunchItem.js';
-import { NotFoundError, ValidationError } from '../errors.js';
+import { ConflictError, NotFoundError, ValidationError } from '../errors.js';
 import { audit } from './audit.js';
 import { assertVersion } from './columnsCommon.js';
 import { toInspectionRecord } from './inspectionRead.js';
 import { assertDraft, visibleInspection } from './inspections.js';
 import type { SessionUser } from '../../shared/types/api.js';
-import type { CreatePunchBody, InspectionRecord, UpdatePunchBody } from '../../shared/types/inspections.js';
+import type { CreatePunchBody, InspectionRecord, UpdatePunchBody, VoidPunchBody } from '../../shared/types/inspections.js';
 
 export async function addPunchItem(
   ds: DataSource,
@@ -55,6 +58,7 @@ export async function updatePunchItem(
     const item = await em.findOneBy(PunchItemEntity, { id: itemId, inspectionId: id });
     if (!item) throw new NotFoundError('Punch item');
     assertVersion('punch item', item.version, body.version);
+    assertNotVoid(item);
     const { version: _v, status, ...rest } = body;
     void _v;
     Object.assign(item, rest, { updatedAt: new Date() }); // a changed timestamp makes every save a new version
@@ -65,6 +69,46 @@ export async function updatePunchItem(
     }
     await em.save(PunchItemEntity, item);
     await audit(em, user.id, status === 'closed' ? 'close' : 'update', 'punch-item', item.id, body);
+    return toInspectionRecord(em, insp);
+  });
+}
+
+function assertNotVoid(item: PunchItemEntity): void {
+  if (item.status === 'void')
+    throw new ConflictError(`Punch item ${item.itemNo} is voided and can no longer change`, [
+      { path: 'status', message: 'is void' },
+    ]);
+}
+
+/** Void a punch item (draft inspections only): who, when and why are kept, and an audit row written. */
+export async function voidPunchItem(
+  ds: DataSource,
+  user: SessionUser,
+  id: string,
+  itemId: string,
+  body: VoidPunchBody,
+): Promise<InspectionRecord> {
+  const reason = body.reason.trim();
+  if (!reason) throw new ValidationError('Invalid body', [{ path: 'reason', message: 'must not be empty' }]);
+  return ds.transaction(async (em) => {
+    const insp = await visibleInspection(em, user, id, true);
+    assertDraft(insp);
+    const item = await em.findOneBy(PunchItemEntity, { id: itemId, inspectionId: id });
+    if (!item) throw new NotFoundError('Punch item');
+    assertVersion('punch item', item.version, body.version);
+    assertNotVoid(item);
+    const was = item.status;
+    Object.assign(item, {
+      status: 'void',
+      voidedBy: user.id,
+      voidedAt: new Date(),
+      voidReason: reason,
+      closedBy: null,
+      closedAt: null,
+      updatedAt: new Date(),
+    });
+    await em.save(PunchItemEntity, item);
+    await audit(em, user.id, 'void', 'punch-item', item.id, { reason, was });
     return toInspectionRecord(em, insp);
   });
 }

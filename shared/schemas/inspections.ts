@@ -152,6 +152,16 @@ export const updatePunchBody = {
   additionalProperties: false,
 } as const;
 
+export const voidPunchBody = {
+  type: 'object',
+  properties: {
+    reason: lines(1000, 1),
+    version: { type: 'integer', minimum: 1 },
+  },
+  required: ['reason', 'version'],
+  additionalProperties: false,
+} as const;
+
 export const signBody = {
   type: 'object',
   properties: { version: { type: 'integer', minimum: 1 } },

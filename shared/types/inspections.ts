@@ -111,7 +111,8 @@ export interface InspectionTrayRecord {
 
 export const PUNCH_PRIORITIES = ['before-box-up', 'if-time-allows', 'next-turnaround'] as const;
 export type PunchPriority = (typeof PUNCH_PRIORITIES)[number];
-export type PunchStatus = 'open' | 'closed';
+/** 'void': withdrawn with a reason (a duplicate, a wrong entry); kept on the list, not counted as open. */
+export type PunchStatus = 'open' | 'closed' | 'void';
 
 export interface PunchItem {
   id: string;
@@ -126,6 +127,10 @@ export interface PunchItem {
   closedBy: string | null;
   closedByName: string | null;
   closedAt: string | null;
+  voidedBy: string | null;
+  voidedByName: string | null;
+  voidedAt: string | null;
+  voidReason: string;
   version: number;
 }
 
@@ -234,7 +239,14 @@ export interface UpdatePunchBody {
   action?: string;
   priority?: PunchPriority;
   owner?: string;
-  status?: PunchStatus;
+  /** open or closed; voiding goes through VoidPunchBody (it needs a reason) */
+  status?: Exclude<PunchStatus, 'void'>;
+  version: number;
+}
+
+/** POST /inspections/:id/punch/:itemId/void */
+export interface VoidPunchBody {
+  reason: string;
   version: number;
 }
 

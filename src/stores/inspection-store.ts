@@ -12,6 +12,7 @@ import type {
   SaveTrayBody,
   UpdateInspectionBody,
   UpdatePunchBody,
+  VoidPunchBody,
 } from '../../shared/types/inspections';
 
 /** The open inspection and its actions; every write returns the whole record, which replaces the local copy. */
@@ -38,6 +39,9 @@ export const useInspectionStore = defineStore('inspection', () => {
   async function updatePunch(itemId: string, body: UpdatePunchBody): Promise<void> {
     rec.value = await api.patch<InspectionRecord>(url(`/punch/${itemId}`), body);
   }
+  async function voidPunch(itemId: string, body: VoidPunchBody): Promise<void> {
+    rec.value = await api.post<InspectionRecord>(url(`/punch/${itemId}/void`), body);
+  }
   async function uploadPhoto(file: File, fields: Record<string, string>): Promise<PhotoRecord> {
     const fd = new FormData();
     for (const [k, v] of Object.entries(fields)) fd.append(k, v);
@@ -52,5 +56,5 @@ export const useInspectionStore = defineStore('inspection', () => {
   const asFound = (body: AsFoundBody) => api.post<AsFoundResult>(url('/as-found'), body);
   const photoUrl = (photoId: string, size: 'thumb' | 'original' = 'thumb') => `/api${url(`/photos/${photoId}`)}?size=${size}`;
 
-  return { rec, list, create, load, update, saveTray, addPunch, updatePunch, uploadPhoto, sign, asFound, photoUrl };
+  return { rec, list, create, load, update, saveTray, addPunch, updatePunch, voidPunch, uploadPhoto, sign, asFound, photoUrl };
 });

@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
 import type { PunchPriority, PunchStatus } from '../../../shared/types/inspections.js';
 
-/** One punch-list item of an inspection, closed by someone at a time. */
+/** One punch-list item of an inspection, closed (or voided, with a reason) by someone at a time. */
 @Entity({ name: 'punch_items' })
 export class PunchItemEntity {
   @PrimaryGeneratedColumn('uuid') id: string;
@@ -16,6 +16,9 @@ export class PunchItemEntity {
   @Column({ type: 'text', default: 'open' }) status: PunchStatus;
   @Column({ type: 'uuid', name: 'closed_by', nullable: true }) closedBy: string | null;
   @Column({ type: 'timestamptz', name: 'closed_at', nullable: true }) closedAt: Date | null;
+  @Column({ type: 'uuid', name: 'voided_by', nullable: true }) voidedBy: string | null;
+  @Column({ type: 'timestamptz', name: 'voided_at', nullable: true }) voidedAt: Date | null;
+  @Column({ type: 'text', name: 'void_reason', default: '' }) voidReason: string;
   @CreateDateColumn({ type: 'timestamptz', name: 'created_at' }) createdAt: Date;
   @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' }) updatedAt: Date;
   @VersionColumn({ type: 'integer' }) version: number;

@@ -8,6 +8,7 @@ import { AsFoundDesignRuns1764740000000 } from './1764740000000-AsFoundDesignRun
 import { UserSessions1764680000000 } from './1764680000000-UserSessions.js';
 import { ImportPreviews1764690000000 } from './1764690000000-ImportPreviews.js';
 import { RunResultsByName1764750000000 } from './1764750000000-RunResultsByName.js';
+import { PunchVoid1764840000000 } from './1764840000000-PunchVoid.js';
 
 /** Every migration in order; add new ones at the end. */
 export const migrations = [
@@ -21,4 +22,5 @@ export const migrations = [
   UserSessions1764680000000,
   ImportPreviews1764690000000,
   RunResultsByName1764750000000,
+  PunchVoid1764840000000,
 ];
