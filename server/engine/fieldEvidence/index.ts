@@ -1,0 +1,21 @@
+/**
+ * Field evidence against the rating (issue 16) — public API. Pure TypeScript, SI units, no I/O.
+ * Screening estimates: scans are interpreted by qualified people; operating changes need
+ * management-of-change review and confirmation by the internals vendor and licensed engineers.
+ */
+export { trayDeckElevations, traysTopDown, type ElevationSection } from './elevations.js';
+export { densityFromCountRateBeerLambert, countRateFromDensityBeerLambert, type CountCalibration } from './scanDensity.js';
+export {
+  readGammaScan,
+  decksInSpan,
+  floodedRegions,
+  THRESHOLD_FRACTION,
+  THRESHOLD_BASIS,
+  type ReadOptions,
+  type ScanReading,
+  type TrayPrediction,
+} from './reader.js';
+export { frothHeightFromClearLiquid, predictTrays, predictTray } from './prediction.js';
+export { syntheticGammaScan, syntheticDensity, seededNormal, seededUniform, type SyntheticScanSpec } from './synthetic.js';
+export { runGammaScan, scanToDensities, SCAN_CAUTION } from './gammaScan.js';
+export { validateGammaScanInput, columnFaults, type Validation } from './validate.js';
