@@ -12,6 +12,7 @@ export const PERMISSIONS = [
   'ratings.run',
   'reviews.approve',
   'inspections.record',
+  'evidence.record',
   'read',
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
@@ -31,14 +32,15 @@ export const PERMISSION_LABELS: Record<Permission, string> = {
   'ratings.run': 'Run ratings and studies',
   'reviews.approve': 'Review and approve',
   'inspections.record': 'Record inspections',
+  'evidence.record': 'Record field evidence',
   read: 'Read',
 };
 
 export const PERMISSION_MATRIX: Record<Role, readonly Permission[]> = {
   admin: ['users.manage', 'read'],
-  'process-engineer': ['loads.edit', 'ratings.run', 'read'],
-  'internals-specialist': ['geometry.edit', 'loads.edit', 'ratings.run', 'reviews.approve', 'read'],
-  inspector: ['inspections.record', 'read'],
+  'process-engineer': ['loads.edit', 'ratings.run', 'evidence.record', 'read'],
+  'internals-specialist': ['geometry.edit', 'loads.edit', 'ratings.run', 'reviews.approve', 'evidence.record', 'read'],
+  inspector: ['inspections.record', 'evidence.record', 'read'],
   viewer: ['read'],
 };
 

@@ -1,6 +1,7 @@
 import type { RouteDef } from '../http/route.js';
 import { authRoutes } from './auth.js';
 import { columnRoutes } from './columns.js';
+import { evidenceRoutes } from './evidence.js';
 import { healthRoutes } from './health.js';
 import { inspectionRoutes } from './inspections.js';
 import { photoRoutes } from './photos.js';
@@ -28,4 +29,5 @@ export const allRoutes: RouteDef[] = [
   ...studyRoutes,
   ...inspectionRoutes,
   ...photoRoutes,
+  ...evidenceRoutes,
 ];

@@ -12,6 +12,8 @@ describe('permission matrix', () => {
     expect(ROLES.filter((r) => can(r, 'users.manage'))).toEqual(['admin']);
     expect(ROLES.filter((r) => can(r, 'reviews.approve'))).toEqual(['internals-specialist']);
     expect(ROLES.filter((r) => can(r, 'inspections.record'))).toEqual(['inspector']);
+    // field evidence is written by those who collect it: inspectors, process engineers, internals specialists
+    expect(ROLES.filter((r) => can(r, 'evidence.record'))).toEqual(['process-engineer', 'internals-specialist', 'inspector']);
     expect(can(null, 'read')).toBe(false);
   });
 });

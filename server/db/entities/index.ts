@@ -5,6 +5,7 @@ import { PumpAround } from './PumpAround.js';
 import { RatingRun } from './RatingRun.js';
 import { TraySection } from './TraySection.js';
 import { MailOutbox } from './MailOutbox.js';
+import { FieldEvidence } from './FieldEvidence.js';
 import { Inspection } from './Inspection.js';
 import { InspectionPhoto } from './InspectionPhoto.js';
 import { InspectionTray } from './InspectionTray.js';
@@ -21,6 +22,7 @@ export { ImportPreviewEntity };
 export { Inspection, InspectionPhoto, InspectionTray, PunchItemEntity };
 export { LoadCase, PumpAround, RatingRun, TraySection };
 export { PumpAroundStudy };
+export { FieldEvidence };
 export { AuditEntry, ProcessUnit, Site, SiteMember, TowerColumn, User };
 
 /** Every entity; add new ones here. */
@@ -42,4 +44,5 @@ export const entities = [
   InspectionPhoto,
   PunchItemEntity,
   ImportPreviewEntity,
+  FieldEvidence,
 ];

@@ -9,6 +9,7 @@ import { UserSessions1764680000000 } from './1764680000000-UserSessions.js';
 import { ImportPreviews1764690000000 } from './1764690000000-ImportPreviews.js';
 import { RunResultsByName1764750000000 } from './1764750000000-RunResultsByName.js';
 import { PunchVoid1764840000000 } from './1764840000000-PunchVoid.js';
+import { FieldEvidence1764820000000 } from './1764820000000-FieldEvidence.js';
 
 /** Every migration in order; add new ones at the end. */
 export const migrations = [
@@ -23,4 +24,5 @@ export const migrations = [
   ImportPreviews1764690000000,
   RunResultsByName1764750000000,
   PunchVoid1764840000000,
+  FieldEvidence1764820000000,
 ];

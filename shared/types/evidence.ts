@@ -1,0 +1,81 @@
+/**
+ * Field evidence (issue 16): the request shapes come from the TypeBox schemas in shared/schemas/evidence.ts;
+ * the answers are declared here. SI throughout (m, kg/m³, Pa, °C).
+ */
+import type { Static } from '@sinclair/typebox';
+import type * as S from '../schemas/evidence.js';
+import type { ImportRowError } from './imports.js';
+
+export type EvidenceKind = (typeof S.EVIDENCE_KINDS)[number];
+export type ScanMeasure = (typeof S.SCAN_MEASURES)[number];
+export type InspectionTiming = (typeof S.INSPECTION_TIMINGS)[number];
+export type EvidenceDatum = Static<typeof S.datumSchema>;
+export type ScanPoint = Static<typeof S.scanPointSchema>;
+export type ScanCalibration = Static<typeof S.calibrationSchema>;
+export type ScanLine = Static<typeof S.scanLineSchema>;
+export type GammaScanData = Static<typeof S.gammaScanDataSchema>;
+export type DpReading = Static<typeof S.dpReadingSchema>;
+export type DpSurveyData = Static<typeof S.dpSurveyDataSchema>;
+export type TemperatureReading = Static<typeof S.temperatureReadingSchema>;
+export type TemperatureSurveyData = Static<typeof S.temperatureSurveyDataSchema>;
+export type CreateEvidenceBody = Static<typeof S.createEvidenceBody>;
+export type UpdateEvidenceBody = Static<typeof S.updateEvidenceBody>;
+export type ScanImportMapping = Static<typeof S.scanImportMapping>;
+export type ScanImportUnits = Static<typeof S.scanImportUnits>;
+export type ScanImportCommitBody = Static<typeof S.scanImportCommitBody>;
+
+export interface EvidenceDataByKind {
+  'gamma-scan': GammaScanData;
+  'dp-survey': DpSurveyData;
+  'temperature-survey': TemperatureSurveyData;
+}
+
+/** A stored record as listed (no data). */
+export interface EvidenceSummary {
+  id: string;
+  columnId: string;
+  kind: EvidenceKind;
+  title: string;
+  takenOn: string;
+  operatingCase: string;
+  runId: string | null;
+  inspectionId: string | null;
+  inspectionTiming: InspectionTiming | null;
+  authorName: string | null;
+  /** scan lines, ΔP readings or temperature readings */
+  itemCount: number;
+  createdAt: string;
+}
+
+/** A stored record with its data; `runLabel`/`inspectionLabel` name the linked records (null when unlinked or gone). */
+export type EvidenceRecord = {
+  [K in EvidenceKind]: EvidenceSummary & {
+    kind: K;
+    data: EvidenceDataByKind[K];
+    notes: string;
+    sourceFile: string | null;
+    runLabel: string | null;
+    inspectionLabel: string | null;
+    updatedAt: string;
+    version: number;
+  };
+}[EvidenceKind];
+
+/** Preview of a scan file: what was detected, the points read (SI), and every row error. */
+export interface ScanImportPreview {
+  token: string;
+  fileName: string;
+  format: 'csv' | 'xlsx';
+  sheet: string | null;
+  headerRow: number;
+  headers: string[];
+  rowCount: number;
+  cutAfterRow: number | null;
+  mapping: ScanImportMapping;
+  units: ScanImportUnits;
+  /** the lines found (one when the file has no line column), each with its points in SI */
+  lines: { label: string; measure: ScanMeasure; points: ScanPoint[] }[];
+  errors: ImportRowError[];
+  errorCount: number;
+  notes: string[];
+}
