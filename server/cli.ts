@@ -11,6 +11,8 @@ export const COMMANDS: Record<string, CliCommand> = {
   rate: rateCommand,
   // Pump-around study (server/cli/pumpAroundCommand.ts), loaded on demand so that `rate` never depends on it.
   'pump-around': async (args, io) => (await import('./cli/pumpAroundCommand.js')).pumpAroundCommand(args, io),
+  // Gamma-scan reading (server/cli/gammaScanCommand.ts), loaded on demand like pump-around.
+  'gamma-scan': async (args, io) => (await import('./cli/gammaScanCommand.js')).gammaScanCommand(args, io),
 };
 
 export async function main(argv: string[], io: CommandIo = processIo): Promise<number> {

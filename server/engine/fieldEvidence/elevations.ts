@@ -45,7 +45,7 @@ export function trayDeckElevations(
   for (let i = i0 - 1; i >= 0; i--) z[i] = z[i + 1]! + spacing[i + 1]!.spacing_m;
   return spacing.map((s, i) => ({
     tray: s.tray,
-    deckElevation_m: z[i]!,
+    deckElevation_m: Math.round(z[i]! * 1e6) / 1e6, // to the micrometre: no float dust in reports
     traySpacing_mm: s.spacing_m * 1000,
     section: s.section,
   }));

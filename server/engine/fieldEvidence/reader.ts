@@ -169,7 +169,7 @@ export function readGammaScan(profile: readonly DensityPoint[], decks: readonly 
       density_kg_m3: thr,
       vapourBaseline_kg_m3: rhoV,
       frothReference_kg_m3: reference,
-      resolution_mm: step * 1000,
+      resolution_mm: Math.round(step * 1e9) / 1e6,
       basis: THRESHOLD_BASIS,
     },
     trays,
