@@ -31,7 +31,14 @@ export const createStudySchema = {
     margin: { type: 'number', exclusiveMinimum: 0, maximum: 1, default: 0.7 },
     methods: methodOptionsSchema,
   },
-  required: ['loadCaseId', 'pumpAroundId', 'latentHeat_kJ_kg', 'liquidHeatCapacity_kJ_kgK', 'zoneLiquidIncludesCirculation', 'sweep'],
+  required: [
+    'loadCaseId',
+    'pumpAroundId',
+    'latentHeat_kJ_kg',
+    'liquidHeatCapacity_kJ_kgK',
+    'zoneLiquidIncludesCirculation',
+    'sweep',
+  ],
   additionalProperties: false,
 } as const;
 
