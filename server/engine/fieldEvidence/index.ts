@@ -18,4 +18,20 @@ export {
 export { frothHeightFromClearLiquid, predictTrays, predictTray } from './prediction.js';
 export { syntheticGammaScan, syntheticDensity, seededNormal, seededUniform, type SyntheticScanSpec } from './synthetic.js';
 export { runGammaScan, scanToDensities, SCAN_CAUTION } from './gammaScan.js';
-export { validateGammaScanInput, columnFaults, type Validation } from './validate.js';
+export {
+  validateGammaScanInput,
+  validatePressureDropSurveyInput,
+  validateTemperatureSurveyInput,
+  columnFaults,
+  type Validation,
+} from './validate.js';
+export {
+  runPressureDropSurvey,
+  traysBetween,
+  vapourStaticHead,
+  floodedTrayPressureDrop,
+  LOW_RATIO,
+  HIGH_RATIO,
+  FLOODING_FRACTION,
+} from './pressureSurvey.js';
+export { runTemperatureSurvey, DEFAULT_TOLERANCE_K, FLAT_PROFILE_FRACTION } from './temperatureSurvey.js';

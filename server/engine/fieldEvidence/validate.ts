@@ -17,6 +17,7 @@ import { physicsErrors, type FieldError } from '../index.js';
 import { sectionForTray } from '../pumpAround/column.js';
 import { traysTopDown, trayDeckElevations } from './elevations.js';
 import { decksInSpan } from './reader.js';
+import { traysBetween } from './pressureSurvey.js';
 import { medianStep, sortedProfile } from './profile.js';
 
 export type Validation<T> = { ok: true; value: T } | { ok: false; errors: FieldError[] };
@@ -63,8 +64,15 @@ const gammaSchema = schemaValidator<GammaScanInput>(gammaScanInputSchema);
 const pressureSchema = schemaValidator<PressureDropSurveyInput>(pressureDropSurveyInputSchema);
 const temperatureSchema = schemaValidator<TemperatureSurveyInput>(temperatureSurveyInputSchema);
 
+/** The field a path names: its last segment, or `list[i]` for a list entry (`/scan/3` → `scan[3]`). */
+function fieldOf(path: string): string {
+  const parts = path.split('/').filter(Boolean);
+  const last = parts.pop() ?? '(input)';
+  return /^\d+$/.test(last) ? `${parts.pop() ?? ''}[${last}]` : last;
+}
+
 const add = (faults: FieldError[], path: string, message: string): void => {
-  faults.push({ path, message: `${path.split('/').pop()}: ${message}` });
+  faults.push({ path, message: `${fieldOf(path)}: ${message}` });
 };
 
 function geometry(s: StudySection): SectionGeometry {
@@ -174,4 +182,68 @@ export function validateGammaScanInput(json: unknown): Validation<GammaScanInput
   return faults.length ? { ok: false, errors: faults } : { ok: true, value: input };
 }
 
-export { pressureSchema as validatePressureDropSurveySchema, temperatureSchema as validateTemperatureSurveySchema };
+/** Pressure-drop survey: schema, column and loads, each measurement's span and the loads it needs. */
+export function validatePressureDropSurveyInput(json: unknown): Validation<PressureDropSurveyInput> {
+  const v = pressureSchema(json);
+  if (!v.ok) return v;
+  const input = v.value;
+  const numbering = input.numbering ?? 'top-down';
+  const faults = columnFaults(input.sections, numbering, input.datum.tray, input.trays, input.trays);
+  if (faults.length) return { ok: false, errors: faults };
+  const decks = trayDeckElevations(input.sections, numbering, input.datum);
+  const loaded = new Set(input.trays.map((t) => t.tray));
+  input.measurements.forEach((m, i) => {
+    const at = `/measurements/${i}`;
+    const hasTaps = m.lowerElevation_m !== undefined || m.upperElevation_m !== undefined;
+    if (m.section !== undefined && hasTaps)
+      return add(faults, `${at}/section`, 'give either section or the two tap elevations, not both');
+    if (m.section === undefined) {
+      if (m.lowerElevation_m === undefined) return add(faults, `${at}/lowerElevation_m`, 'is required unless section is given');
+      if (m.upperElevation_m === undefined) return add(faults, `${at}/upperElevation_m`, 'is required unless section is given');
+      if (m.upperElevation_m <= m.lowerElevation_m)
+        return add(
+          faults,
+          `${at}/upperElevation_m`,
+          `must be above lowerElevation_m (${m.lowerElevation_m} m); got ${m.upperElevation_m}`,
+        );
+    } else if (!input.sections.some((s) => s.name === m.section))
+      return add(
+        faults,
+        `${at}/section`,
+        `no section is named "${m.section}" (sections: ${input.sections.map((s) => `"${s.name}"`).join(', ')})`,
+      );
+    const span = traysBetween(m, decks);
+    if (span.length === 0)
+      return add(
+        faults,
+        at,
+        `no tray deck lies between ${m.lowerElevation_m} and ${m.upperElevation_m} m; check the tap elevations and the datum`,
+      );
+    const missing = span.filter((d) => !loaded.has(d.tray)).map((d) => d.tray);
+    if (missing.length)
+      add(
+        faults,
+        at,
+        `trays ${missing.join(', ')} between the taps have no loads in trays; the prediction needs every tray between them`,
+      );
+  });
+  return faults.length ? { ok: false, errors: faults } : { ok: true, value: input };
+}
+
+/** Temperature survey: schema, then one measurement per tray. */
+export function validateTemperatureSurveyInput(json: unknown): Validation<TemperatureSurveyInput> {
+  const v = temperatureSchema(json);
+  if (!v.ok) return v;
+  const faults: FieldError[] = [];
+  const seen = new Set<number>();
+  v.value.measurements.forEach((m, i) => {
+    if (seen.has(m.tray)) add(faults, `/measurements/${i}/tray`, `tray ${m.tray} is measured twice`);
+    seen.add(m.tray);
+  });
+  const loads = new Set<number>();
+  v.value.trays.forEach((t, i) => {
+    if (loads.has(t.tray)) add(faults, `/trays/${i}/tray`, `tray ${t.tray} appears twice in the load case`);
+    loads.add(t.tray);
+  });
+  return faults.length ? { ok: false, errors: faults } : v;
+}
