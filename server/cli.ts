@@ -13,6 +13,8 @@ export const COMMANDS: Record<string, CliCommand> = {
   'pump-around': async (args, io) => (await import('./cli/pumpAroundCommand.js')).pumpAroundCommand(args, io),
   // Gamma-scan reading (server/cli/gammaScanCommand.ts), loaded on demand like pump-around.
   'gamma-scan': async (args, io) => (await import('./cli/gammaScanCommand.js')).gammaScanCommand(args, io),
+  // Heat-recovery plan (server/cli/heatPlanCommand.ts), loaded on demand likewise.
+  'heat-plan': async (args, io) => (await import('./cli/heatPlanCommand.js')).heatPlanCommand(args, io),
 };
 
 export async function main(argv: string[], io: CommandIo = processIo): Promise<number> {

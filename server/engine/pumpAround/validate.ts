@@ -11,7 +11,8 @@ import { studyInputFaults } from './faults.js';
 const ajv = new Ajv({ useDefaults: true, allErrors: true, strict: true });
 const schemaCheck = ajv.compile<StudyInput>(pumpAroundStudySchema);
 
-function fromAjv(raw: unknown, e: ErrorObject): { path: string; message: string } {
+/** One ajv error as a field error: JSON-pointer path and a message naming the field (and the tray). */
+export function ajvFieldError(raw: unknown, e: ErrorObject): { path: string; message: string } {
   let path = e.instancePath;
   let message = e.message ?? 'is invalid';
   const params = e.params as Record<string, unknown>;
@@ -33,7 +34,7 @@ function fromAjv(raw: unknown, e: ErrorObject): { path: string; message: string 
 
 export function validateStudyInput(json: unknown): StudyValidation {
   const copy: unknown = json === undefined ? undefined : structuredClone(json);
-  if (!schemaCheck(copy)) return { ok: false, errors: (schemaCheck.errors ?? []).map((e) => fromAjv(json, e)) };
+  if (!schemaCheck(copy)) return { ok: false, errors: (schemaCheck.errors ?? []).map((e) => ajvFieldError(json, e)) };
   const faults = studyInputFaults(copy);
   return faults.length ? { ok: false, errors: faults } : { ok: true, value: copy };
 }

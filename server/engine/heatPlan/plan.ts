@@ -1,0 +1,134 @@
+/**
+ * Heat-recovery plan (issue 17): rate the duty grid of one to three pump-arounds with full tray ratings,
+ * solve the feasible region's boundary exactly on the grid lines, give the heat level of each point and
+ * suggest the split that recovers most heat above the useful temperature while keeping the margin.
+ * The input must have passed validateHeatPlanInput. See README.md for the model and its limits.
+ */
+import type { BoundaryPoint, HeatPlanInput, HeatPlanResult, PlanPoint, PlanViolation } from '../../../shared/types/heatPlan.js';
+import { BoundarySolver } from './boundary.js';
+import { fractionationSignal, sectionMembers } from './fractionation.js';
+import { dutyGrid, GridRatings, nodeDuties, nodeIndices } from './grid.js';
+import { pumpAroundHeat, recoveredHeat } from './heatLevel.js';
+import { constraintName, DEFAULT_FRACTIONATION_THRESHOLD, marginResidual, planModel } from './model.js';
+import { overAtDuties, overAtNode, positiveAtNode } from './nodes.js';
+import { SENSITIVITY_MARGINS, suggestSplit } from './suggestion.js';
+
+export type HeatPlanResultOf<P> = Omit<HeatPlanResult, 'points'> & { points: P[] };
+
+export interface HeatPlanOptions {
+  /** share the rating of a tray between points whose duties it does not depend on (default true) */
+  reuseRatings?: boolean;
+}
+
+export const PLAN_NOTES = [
+  "Screening estimate: a change of pump-around duties goes through management-of-change review and the site's procedures; confirm with the internals vendor and licensed engineers before acting on it.",
+  'Traffic by a heat balance on each pump-around zone (after Lieberman, A Working Guide to Process Equipment), the pump-arounds added together: constant latent heat per zone, sensible heats neglected, properties held at base-case values.',
+  'Margin: the duties scaled together by 1/margin must leave every tray with liquid (for one pump-around, at most margin × its dry-out duty); the default of 70 % is common practice, not a published rule.',
+  'Boundary points are solved exactly along the grid lines; a limit crossed and recrossed within one grid step is not seen.',
+];
+
+/** The full plan: every grid point with the full rating of every tray (the CLI prints this). */
+export function runHeatPlan(input: HeatPlanInput, options: HeatPlanOptions = {}): HeatPlanResult {
+  return runHeatPlanWith(input, (p) => p, options);
+}
+
+/** The plan with each grid point passed through `mapPoint` as soon as it is rated (callers keeping less). */
+export function runHeatPlanWith<P>(
+  input: HeatPlanInput,
+  mapPoint: (p: PlanPoint) => P,
+  options: HeatPlanOptions = {},
+): HeatPlanResultOf<P> {
+  const m = planModel(input);
+  const grid = dutyGrid(m);
+  const ratings = new GridRatings(m, grid, options.reuseRatings ?? true);
+  const solver = new BoundarySolver(ratings);
+  const useful = input.usefulAboveTemperature_C;
+  const threshold = input.fractionationThreshold ?? DEFAULT_FRACTIONATION_THRESHOLD;
+  const sections = sectionMembers(input.sections, m.trays, m.roles);
+  const feasible: boolean[] = [];
+  const points: P[] = [];
+  for (let n = 0; n < grid.count; n++) {
+    const idx = nodeIndices(grid, n);
+    const duties = nodeDuties(grid, n);
+    const over = overAtNode(ratings, n, idx);
+    feasible.push(over.length === 0);
+    const trays = m.trays.map((_, k) => ratings.at(n, k, idx));
+    const withinMargin = m.watched.every((k) => marginResidual(m, k, duties, m.margin) <= 0);
+    points.push(
+      mapPoint({
+        duties_kW: duties,
+        ...recoveredHeat(m.pumpArounds, duties, useful),
+        feasible: over.length === 0,
+        withinMargin,
+        violations: over.map(([k, c]) => ({ tray: m.trays[k]!.tray, check: constraintName(c) })),
+        heat: m.pumpArounds.map((pa, i) => pumpAroundHeat(pa, duties[i]!, useful)),
+        fractionation: fractionationSignal(
+          sections,
+          trays.map((t) => t.shifted),
+          threshold,
+        ),
+        trays: trays.map(({ shifted: s, rating }) => ({
+          tray: s.tray,
+          vapourMassFlow_kg_h: s.vapourMassFlow_kg_h,
+          liquidMassFlow_kg_h: s.liquidMassFlow_kg_h,
+          dry: s.dry,
+          rating,
+        })),
+      }),
+    );
+  }
+
+  const boundary: BoundaryPoint[] = [];
+  for (let n = 0; n < grid.count; n++) {
+    const idx = nodeIndices(grid, n);
+    for (let ax = 0; ax < grid.sizes.length; ax++) {
+      if (idx[ax]! >= grid.sizes[ax]! - 1) continue;
+      const b = n + grid.strides[ax]!;
+      if (feasible[n] === feasible[b]) continue;
+      const [inside, outside] = feasible[n] ? [n, b] : [b, n];
+      const flip = solver.solve(inside, outside, ax, positiveAtNode(ratings, outside, solver.traysOfAxis[ax]!), m.margin);
+      if (flip.k < 0) continue;
+      boundary.push({
+        duties_kW: flip.duties_kW,
+        tray: m.trays[flip.k]!.tray,
+        check: constraintName(flip.c),
+        along: ax,
+        feasibleBelow: inside < outside,
+      });
+    }
+  }
+
+  const margins = [...new Set([...SENSITIVITY_MARGINS, m.margin])].sort((a, b) => a - b);
+  const marginSensitivity = margins.map((mg) => ({
+    margin: mg,
+    suggestion: suggestSplit(ratings, solver, feasible, mg, useful),
+  }));
+  const suggestion = marginSensitivity.find((s) => s.margin === m.margin)!.suggestion;
+  const notes = [...PLAN_NOTES];
+  if (!feasible.some(Boolean)) notes.push('No point of the duty grid is free of dry trays and watched limits: no suggestion.');
+  else if (!suggestion) notes.push('No feasible point of the duty grid keeps the margin: no suggestion.');
+  return {
+    pumpArounds: m.pumpArounds.map((pa) => pa.name),
+    baseDuties_kW: m.pumpArounds.map((pa) => pa.baseDuty_kW),
+    margin: m.margin,
+    usefulAboveTemperature_C: useful,
+    points,
+    boundary,
+    suggestion,
+    marginSensitivity,
+    notes,
+  };
+}
+
+/** Whether the plan's duties are feasible, and what is over: the model rated afresh at any duties. */
+export function planPointStatus(
+  input: HeatPlanInput,
+  duties_kW: readonly number[],
+): { feasible: boolean; violations: PlanViolation[] } {
+  const m = planModel(input);
+  const over = overAtDuties(m, duties_kW);
+  return {
+    feasible: over.length === 0,
+    violations: over.map(([k, c]) => ({ tray: m.trays[k]!.tray, check: constraintName(c) })),
+  };
+}

@@ -1,0 +1,128 @@
+/**
+ * Heat-recovery plan payloads (issue 17): several pump-arounds varied together over a duty grid, shared by
+ * the engine (server/engine/heatPlan/), the CLI, the API and the client. SI units; the unit is part of
+ * each field name. Duties are always listed in the input's pump-around order.
+ */
+import type { CheckName, MethodOptions, TrayLoad, TrayResult } from './rating.js';
+import type { DutySweep, PumpAroundSpec, StudySection, TrayNumbering } from './pumpAround.js';
+
+/** A pump-around of the plan: the study's pump-around plus its draw temperature and its duty sweep. */
+export interface PlanPumpAround extends PumpAroundSpec {
+  /** temperature of the liquid drawn (the draw tray's liquid, from the load case) [°C] */
+  drawTemperature_C: number;
+  sweep: DutySweep;
+  /** latent heat of the vapour condensed in this zone [kJ/kg]; the plan's latentHeat_kJ_kg when absent */
+  latentHeat_kJ_kg?: number;
+}
+
+export interface HeatPlanInput {
+  sections: StudySection[];
+  /** base load case at the base duties (vapour entering each tray, net liquid leaving it) */
+  trays: TrayLoad[];
+  numbering?: TrayNumbering;
+  /** latent heat of the condensed vapour [kJ/kg], for every zone without its own value */
+  latentHeat_kJ_kg: number;
+  /** fraction of the dry-out duties kept at most (default 0.7, common practice); see the engine README */
+  margin?: number;
+  methods?: MethodOptions;
+  /** one to three pump-arounds, zones not overlapping */
+  pumpArounds: PlanPumpAround[];
+  /** heat released above this temperature counts as useful (what the preheat train can take) [°C] */
+  usefulAboveTemperature_C: number;
+  /** a section's L/V below this fraction of its base-case L/V is flagged (default 0.8, our choice) */
+  fractionationThreshold?: number;
+}
+
+/** The constraint a boundary point is named by: a rating check, or 'dry-out' (no liquid or vapour left). */
+export type PlanCheck = CheckName | 'dry-out';
+
+export interface PlanTrayPoint {
+  tray: number;
+  vapourMassFlow_kg_h: number;
+  liquidMassFlow_kg_h: number;
+  /** the model's liquid (or vapour) went to zero or below on a tray whose traffic depends on a duty */
+  dry: boolean;
+  /** full rating; trays whose traffic does not depend on a duty share one rating object */
+  rating: TrayResult;
+}
+
+/** The heat of one pump-around at one duty. */
+export interface PumpAroundHeat {
+  name: string;
+  duty_kW: number;
+  circulation_kg_h: number;
+  drawTemperature_C: number;
+  returnTemperature_C: number;
+  /** the part of the duty released above usefulAboveTemperature_C [kW] */
+  aboveTemperature_kW: number;
+}
+
+/** Fractionation signal of one section: its L/V (mass, trays outside the pump-around zones) against base. */
+export interface SectionFractionation {
+  section: string;
+  liquidToVapour: number | null;
+  baseLiquidToVapour: number | null;
+  /** liquidToVapour / baseLiquidToVapour */
+  ratioToBase: number | null;
+  flagged: boolean;
+}
+
+/** A watched limit that is over at a point. */
+export interface PlanViolation {
+  tray: number;
+  check: PlanCheck;
+}
+
+export interface PlanPoint {
+  duties_kW: number[];
+  /** change of the overhead condenser duty from the base case = −Σ(Q − Q0) [kW] */
+  condenserDutyChange_kW: number;
+  /** total pump-around duty = Σ Q [kW] */
+  recoveredHeat_kW: number;
+  recoveredAboveTemperature_kW: number;
+  /** no tray dry and no watched check over its limit */
+  feasible: boolean;
+  /** the duties scaled together by 1/margin leave no tray dry */
+  withinMargin: boolean;
+  violations: PlanViolation[];
+  heat: PumpAroundHeat[];
+  fractionation: SectionFractionation[];
+  trays: PlanTrayPoint[];
+}
+
+export interface BoundaryPoint {
+  duties_kW: number[];
+  tray: number;
+  check: PlanCheck;
+  /** index (input order) of the pump-around whose duty was varied to find the point */
+  along: number;
+  /** true when the feasible side lies at the lower duty along that line */
+  feasibleBelow: boolean;
+}
+
+export interface PlanSuggestion {
+  duties_kW: number[];
+  recoveredHeat_kW: number;
+  recoveredAboveTemperature_kW: number;
+  condenserDutyChange_kW: number;
+  margin: number;
+  /** the constraint the suggestion lies on, when it is on a boundary (not a grid point or the sweep's end) */
+  limitedBy: (PlanViolation & { margin: boolean }) | null;
+}
+
+export interface HeatPlanResult {
+  pumpArounds: string[];
+  baseDuties_kW: number[];
+  margin: number;
+  usefulAboveTemperature_C: number;
+  /** lexicographic over the sweeps, the first pump-around's duty varying slowest */
+  points: PlanPoint[];
+  /** exact feasibility boundary on the grid lines */
+  boundary: BoundaryPoint[];
+  suggestion: PlanSuggestion | null;
+  /** the suggestion at other margins (the chosen margin included) */
+  marginSensitivity: { margin: number; suggestion: PlanSuggestion | null }[];
+  notes: string[];
+}
+
+export type HeatPlanValidation = { ok: true; value: HeatPlanInput } | { ok: false; errors: { path: string; message: string }[] };
