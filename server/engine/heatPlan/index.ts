@@ -16,7 +16,7 @@ export { heatAboveTemperature, pumpAroundHeat, recoveredHeat } from './heatLevel
 export type { RecoveredHeat } from './heatLevel.js';
 export { fractionationSignal, sectionMembers } from './fractionation.js';
 export { DEFAULT_FRACTIONATION_THRESHOLD, DEFAULT_MARGIN } from './model.js';
-export { PLAN_NOTES, planPointStatus, runHeatPlan, runHeatPlanWith } from './plan.js';
+export { heatPlanPointAt, PLAN_NOTES, planPointStatus, runHeatPlan, runHeatPlanWith } from './plan.js';
 export type { HeatPlanOptions, HeatPlanResultOf } from './plan.js';
 export { SENSITIVITY_MARGINS } from './suggestion.js';
 export { validateHeatPlanInput } from './validate.js';

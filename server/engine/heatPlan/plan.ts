@@ -6,10 +6,10 @@
  */
 import type { BoundaryPoint, HeatPlanInput, HeatPlanResult, PlanPoint, PlanViolation } from '../../../shared/types/heatPlan.js';
 import { BoundarySolver } from './boundary.js';
-import { fractionationSignal, sectionMembers } from './fractionation.js';
+import { sectionMembers } from './fractionation.js';
 import { dutyGrid, GridRatings, nodeDuties, nodeIndices } from './grid.js';
-import { pumpAroundHeat, recoveredHeat } from './heatLevel.js';
-import { constraintName, DEFAULT_FRACTIONATION_THRESHOLD, marginResidual, planModel } from './model.js';
+import { constraintName, planModel } from './model.js';
+import { planPoint, pointAt } from './points.js';
 import { overAtDuties, overAtNode, positiveAtNode } from './nodes.js';
 import { SENSITIVITY_MARGINS, suggestSplit } from './suggestion.js';
 
@@ -43,7 +43,6 @@ export function runHeatPlanWith<P>(
   const ratings = new GridRatings(m, grid, options.reuseRatings ?? true);
   const solver = new BoundarySolver(ratings);
   const useful = input.usefulAboveTemperature_C;
-  const threshold = input.fractionationThreshold ?? DEFAULT_FRACTIONATION_THRESHOLD;
   const sections = sectionMembers(input.sections, m.trays, m.roles);
   const feasible: boolean[] = [];
   const points: P[] = [];
@@ -53,29 +52,7 @@ export function runHeatPlanWith<P>(
     const over = overAtNode(ratings, n, idx);
     feasible.push(over.length === 0);
     const trays = m.trays.map((_, k) => ratings.at(n, k, idx));
-    const withinMargin = m.watched.every((k) => marginResidual(m, k, duties, m.margin) <= 0);
-    points.push(
-      mapPoint({
-        duties_kW: duties,
-        ...recoveredHeat(m.pumpArounds, duties, useful),
-        feasible: over.length === 0,
-        withinMargin,
-        violations: over.map(([k, c]) => ({ tray: m.trays[k]!.tray, check: constraintName(c) })),
-        heat: m.pumpArounds.map((pa, i) => pumpAroundHeat(pa, duties[i]!, useful)),
-        fractionation: fractionationSignal(
-          sections,
-          trays.map((t) => t.shifted),
-          threshold,
-        ),
-        trays: trays.map(({ shifted: s, rating }) => ({
-          tray: s.tray,
-          vapourMassFlow_kg_h: s.vapourMassFlow_kg_h,
-          liquidMassFlow_kg_h: s.liquidMassFlow_kg_h,
-          dry: s.dry,
-          rating,
-        })),
-      }),
-    );
+    points.push(mapPoint(planPoint(m, duties, trays, over, sections)));
   }
 
   const boundary: BoundaryPoint[] = [];
@@ -118,6 +95,11 @@ export function runHeatPlanWith<P>(
     marginSensitivity,
     notes,
   };
+}
+
+/** A full point (every tray's traffic and rating, heat level, feasibility) at any duties, rated afresh. */
+export function heatPlanPointAt(input: HeatPlanInput, duties_kW: readonly number[]): PlanPoint {
+  return pointAt(planModel(input), duties_kW);
 }
 
 /** Whether the plan's duties are feasible, and what is over: the model rated afresh at any duties. */

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import type { HeatPlanInput } from '../../../shared/types/heatPlan.js';
-import { planPointStatus, runHeatPlan, validateHeatPlanInput } from '../../../server/engine/heatPlan/index.js';
+import { heatPlanPointAt, planPointStatus, runHeatPlan, validateHeatPlanInput } from '../../../server/engine/heatPlan/index.js';
 
 /** The invented example column C-520 (examples/heat-plan.json) on a coarser grid. */
 function example(stepsA = 6, stepsB = 7): HeatPlanInput {
@@ -35,6 +35,14 @@ describe('heat-recovery plan over the duty grid', () => {
   it('grid points agree with a fresh evaluation at their duties', () => {
     for (const p of plan.points)
       expect(planPointStatus(input, p.duties_kW)).toEqual({ feasible: p.feasible, violations: p.violations });
+  });
+
+  it('a point at any duties is the grid point where the duties are a node', () => {
+    for (const n of [0, 13, 55])
+      expect(JSON.stringify(heatPlanPointAt(input, plan.points[n]!.duties_kW))).toBe(JSON.stringify(plan.points[n]));
+    const between = heatPlanPointAt(input, [4400, 6400]);
+    expect(between.condenserDutyChange_kW).toBe(0);
+    between.trays.forEach((t, i) => expect(t.vapourMassFlow_kg_h).toBeCloseTo(input.trays[i]!.vapourMassFlow_kg_h, 6));
   });
 
   it('has feasible and infeasible points, and boundary points between them', () => {
