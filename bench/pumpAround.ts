@@ -7,7 +7,7 @@
  */
 import { pathToFileURL } from 'node:url';
 import { runStudy } from '../server/engine/pumpAround/index.js';
-import { runSlimStudy } from '../server/services/studyResult.js';
+import { runSlimStudy } from '../server/services/studies/studyResult.js';
 import type { StudyInput, StudySection } from '../shared/types/pumpAround.js';
 import type { TrayLoad } from '../shared/types/rating.js';
 

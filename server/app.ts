@@ -16,7 +16,7 @@ import type { RouteDef } from './http/route.js';
 import { validate } from './http/validation.js';
 import { logger } from './logger.js';
 import { allRoutes } from './routes/index.js';
-import { activeSessionUser } from './services/users.js';
+import { activeSessionUser } from './services/auth/users.js';
 import { can, PERMISSION_LABELS, ROLE_LABELS } from '../shared/permissions.js';
 import type { SessionUser } from '../shared/types/api.js';
 

@@ -17,7 +17,7 @@ function secretKey(): KeyObject {
   return key.obj;
 }
 
-/** A signed-in session as the token states it; whether it is still open is checked by the caller (services/users.ts). */
+/** A signed-in session as the token states it; whether it is still open is checked by the caller (services/auth/users.ts). */
 export interface SessionClaims {
   userId: string;
   /** the user_sessions row (the token's jti) */

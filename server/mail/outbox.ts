@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { config } from '../config.js';
-import { canSeeColumn } from '../services/access.js';
+import { canSeeColumn } from '../services/access/access.js';
 import { PERMISSION_MATRIX, ROLES, type Role } from '../../shared/permissions.js';
 
 export interface Notice {

@@ -4,9 +4,9 @@ import { config } from '../config.js';
 import { ValidationError } from '../errors.js';
 import { clearSession, issueSession, readSession, type SessionClaims } from '../http/auth.js';
 import { defineRoutes } from '../http/route.js';
-import { changeOwnPassword } from '../services/passwords.js';
-import { closeSession, openSession } from '../services/sessions.js';
-import { setPreferences, signIn, toSessionUser } from '../services/users.js';
+import { changeOwnPassword } from '../services/auth/passwords.js';
+import { closeSession, openSession } from '../services/auth/sessions.js';
+import { setPreferences, signIn, toSessionUser } from '../services/auth/users.js';
 import { changePasswordBody, preferencesBody, signInBody } from '../../shared/schemas/auth.js';
 import type { ChangePasswordBody, SignInBody } from '../../shared/types/api.js';
 

@@ -7,8 +7,8 @@ import {
   listSites,
   listUnits,
   updateColumn,
-} from '../services/columns.js';
-import { listVisibleColumns } from '../services/columnsList.js';
+} from '../services/columns/columns.js';
+import { listVisibleColumns } from '../services/columns/columnsList.js';
 import {
   columnListQuery,
   createColumnBody,

@@ -3,7 +3,7 @@ import { config } from '../config.js';
 import { defineRoutes } from '../http/route.js';
 import { createEvidence, deleteEvidence, getEvidence, listEvidence, updateEvidence } from '../services/evidence/evidence.js';
 import { commitScanImport, previewScanImport } from '../services/evidence/scanImport.js';
-import { ImportRowsError } from '../services/imports.js';
+import { ImportRowsError } from '../services/imports/imports.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import {
   createEvidenceEnvelope,

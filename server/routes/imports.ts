@@ -1,7 +1,7 @@
 import multer from 'multer';
 import { config } from '../config.js';
 import { defineRoutes } from '../http/route.js';
-import { checkImport, commitImport, ImportRowsError, previewImport } from '../services/imports.js';
+import { checkImport, commitImport, ImportRowsError, previewImport } from '../services/imports/imports.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import { importCheckBody, importCommitBody, importPreviewQuery } from '../../shared/schemas/imports.js';
 import type { ImportCheckBody, ImportCommitBody } from '../../shared/types/imports.js';

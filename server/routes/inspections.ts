@@ -1,9 +1,15 @@
 import { defineRoutes } from '../http/route.js';
-import { rateAsFound } from '../services/inspectionAsFound.js';
-import { inspectionPdf } from '../services/inspectionPdf.js';
-import { createInspection, getInspection, listInspections, saveTray, updateInspection } from '../services/inspections.js';
-import { signAsEngineer, signAsInspector } from '../services/inspectionSign.js';
-import { addPunchItem, updatePunchItem, voidPunchItem } from '../services/punch.js';
+import { rateAsFound } from '../services/inspections/inspectionAsFound.js';
+import { inspectionPdf } from '../services/reports/inspectionPdf.js';
+import {
+  createInspection,
+  getInspection,
+  listInspections,
+  saveTray,
+  updateInspection,
+} from '../services/inspections/inspections.js';
+import { signAsEngineer, signAsInspector } from '../services/inspections/inspectionSign.js';
+import { addPunchItem, updatePunchItem, voidPunchItem } from '../services/inspections/punch.js';
 import { PUBLISHED_TOLERANCES } from '../../shared/inspectionTolerance.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import {

@@ -1,7 +1,7 @@
 import { defineRoutes } from '../http/route.js';
-import { exportLoadCase } from '../services/exports.js';
-import { createLoadCase, deleteLoadCase, putLoads, updateLoadCase } from '../services/loads.js';
-import { getLoadCase, listVisibleLoadCases } from '../services/loadsRead.js';
+import { exportLoadCase } from '../services/reports/exports.js';
+import { createLoadCase, deleteLoadCase, putLoads, updateLoadCase } from '../services/loads/loads.js';
+import { getLoadCase, listVisibleLoadCases } from '../services/loads/loadsRead.js';
 import { versionBody } from '../../shared/schemas/columns.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import { createLoadCaseBody, exportQuery, putLoadsBody, updateLoadCaseBody } from '../../shared/schemas/loads.js';

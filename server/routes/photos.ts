@@ -1,6 +1,6 @@
 import { defineRoutes } from '../http/route.js';
 import { photoUpload } from '../http/photoUpload.js';
-import { streamPhoto, uploadPhoto } from '../services/photos.js';
+import { streamPhoto, uploadPhoto } from '../services/inspections/photos.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import { photoFieldsBody, photoParams, photoQuery } from '../../shared/schemas/inspections.js';
 

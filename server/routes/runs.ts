@@ -1,10 +1,10 @@
 import { defineRoutes } from '../http/route.js';
-import { exportRun } from '../services/exports.js';
-import { relabelRun, reviewRun } from '../services/review.js';
-import { createRunFromBody } from '../services/runs.js';
-import { compareRuns } from '../services/runsCompare.js';
-import { getRun, listRuns, runWindow } from '../services/runsRead.js';
-import { runReportPdf } from '../services/runReportPdf.js';
+import { exportRun } from '../services/reports/exports.js';
+import { relabelRun, reviewRun } from '../services/runs/review.js';
+import { createRunFromBody } from '../services/runs/runs.js';
+import { compareRuns } from '../services/runs/runsCompare.js';
+import { getRun, listRuns, runWindow } from '../services/runs/runsRead.js';
+import { runReportPdf } from '../services/reports/runReportPdf.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import { exportQuery } from '../../shared/schemas/loads.js';
 import {

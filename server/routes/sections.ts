@@ -1,6 +1,6 @@
 import { defineRoutes } from '../http/route.js';
-import { createPumpAround, deletePumpAround, updatePumpAround } from '../services/sectionsPumpArounds.js';
-import { createSection, deleteSection, listVisibleSections, updateSection } from '../services/sections.js';
+import { createPumpAround, deletePumpAround, updatePumpAround } from '../services/columns/sectionsPumpArounds.js';
+import { createSection, deleteSection, listVisibleSections, updateSection } from '../services/columns/sections.js';
 import {
   pumpAroundBody,
   sectionBody,

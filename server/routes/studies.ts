@@ -1,9 +1,9 @@
 import { defineRoutes, type RouteDef } from '../http/route.js';
 import { estimateLatentHeat } from '../engine/pumpAround/index.js';
 import { ValidationError } from '../errors.js';
-import { createStudy, getStudy, listStudies } from '../services/studies.js';
-import { reviewStudy, type StudyAction } from '../services/studyReview.js';
-import { exportStudy, studyReportPdf } from '../services/studyReportFiles.js';
+import { createStudy, getStudy, listStudies } from '../services/studies/studies.js';
+import { reviewStudy, type StudyAction } from '../services/studies/studyReview.js';
+import { exportStudy, studyReportPdf } from '../services/reports/studyReportFiles.js';
 import { exportQuery } from '../../shared/schemas/loads.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import { createStudySchema, latentHeatSchema, studyReviewSchema } from '../../shared/schemas/studies.js';

@@ -1,7 +1,7 @@
 import { defineRoutes } from '../http/route.js';
-import { listSitesWithMembers, setUserSites } from '../services/siteAccess.js';
-import { resetPassword } from '../services/passwords.js';
-import { createUser, listUsers, updateUser } from '../services/users.js';
+import { listSitesWithMembers, setUserSites } from '../services/access/siteAccess.js';
+import { resetPassword } from '../services/auth/passwords.js';
+import { createUser, listUsers, updateUser } from '../services/auth/users.js';
 import { createUserBody, resetPasswordBody, updateUserBody, userSitesBody } from '../../shared/schemas/auth.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import type { CreateUserBody, ResetPasswordBody, UpdateUserBody } from '../../shared/types/api.js';

@@ -1,7 +1,7 @@
 import { roleSchema } from './common.js';
 
 /**
- * What a new password must meet (server/services/passwordPolicy.ts applies it; the client repeats the
+ * What a new password must meet (server/services/auth/passwordPolicy.ts applies it; the client repeats the
  * length checks as hints): bcrypt uses only the first 72 bytes of a password, so longer ones are refused.
  */
 export const PASSWORD_RULES = { minLength: 12, maxBytes: 72, minScore: 3 } as const;
@@ -55,7 +55,7 @@ export const userSitesBody = {
   additionalProperties: false,
 } as const;
 
-// lengths and strength are checked by the password policy (server/services/passwordPolicy.ts), which says why
+// lengths and strength are checked by the password policy (server/services/auth/passwordPolicy.ts), which says why
 export const changePasswordBody = {
   type: 'object',
   properties: {

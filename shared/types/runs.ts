@@ -128,7 +128,7 @@ export interface CreateRunBody {
   label?: string;
 }
 
-/** Input of services/runs.ts createRatingRun (also used by inspections for an as-found rating). */
+/** Input of services/runs/runs.ts createRatingRun (also used by inspections for an as-found rating). */
 export interface CreateRatingRunInput {
   columnId: string;
   loadCaseId: string;

@@ -4,7 +4,7 @@
  * the inspection is signed or the item is void.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inspectionDoc } from '../../server/services/inspectionPdf.js';
+import { inspectionDoc } from '../../server/services/reports/inspectionPdf.js';
 import type { InspectionRecord } from '../../shared/types/inspections.js';
 import { makeUser, setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { cleanFindings, makeInspectionColumn, noMeasurements } from './inspection-fixture.js';

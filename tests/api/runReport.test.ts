@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runReportDoc, trayRanges, valveTable } from '../../server/services/runReportPdf.js';
-import { pageFrame } from '../../server/services/pdfEngine.js';
+import { runReportDoc, trayRanges, valveTable } from '../../server/services/reports/runReportPdf.js';
+import { pageFrame } from '../../server/services/reports/pdfEngine.js';
 import { config } from '../../server/config.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { loads, makePlant, section, type Plant } from './columnsFixture.js';

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_SECTIONS } from '../../server/db/seed/demoColumn.js';
 import { DEMO_LOAD_CASES } from '../../server/db/seed/demoLoads.js';
-import { rateSnapshot } from '../../server/services/runs.js';
+import { rateSnapshot } from '../../server/services/runs/runs.js';
 
 function rate(name: string) {
   const lc = DEMO_LOAD_CASES.find((c) => c.name === name)!;

@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { RunResultsByName1764750000000 } from '../../server/db/migrations/1764750000000-RunResultsByName.js';
 import { ENGINE_VERSION } from '../../server/engine/index.js';
-import { runReportDoc } from '../../server/services/runReportPdf.js';
+import { runReportDoc } from '../../server/services/reports/runReportPdf.js';
 import { setupApp, type TestContext } from '../helpers/app.js';
 import { makePlant, twoRuns, type Plant } from './columnsFixture.js';
 

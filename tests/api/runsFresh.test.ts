@@ -1,6 +1,6 @@
 /**
- * Run creation reuses the column, section and load-case rows it read for earlier runs (server/services/
- * runsStore.ts) and the session user of earlier requests (services/sessionCache.ts). Every run must still
+ * Run creation reuses the column, section and load-case rows it read for earlier runs (server/services/runs/
+ * runsStore.ts) and the session user of earlier requests (services/auth/sessionCache.ts). Every run must still
  * be rated on the rows as they are when it is stored, and access changes must apply at once.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';

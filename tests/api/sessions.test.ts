@@ -2,7 +2,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { config } from '../../server/config.js';
-import { SESSION_CACHE_MS } from '../../server/services/sessionCache.js';
+import { SESSION_CACHE_MS } from '../../server/services/auth/sessionCache.js';
 import { makeUser, sessionCookie, setupApp, signedIn, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
 
 let ctx: TestContext;

@@ -4,8 +4,8 @@
  * and statuses, and the inspection PDF's text. Also: one verdict per tray and the section coverage, over the API.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inspectionDoc } from '../../server/services/inspectionPdf.js';
-import { runReportDoc } from '../../server/services/runReportPdf.js';
+import { inspectionDoc } from '../../server/services/reports/inspectionPdf.js';
+import { runReportDoc } from '../../server/services/reports/runReportPdf.js';
 import { CHECK_NAMES } from '../../shared/types/rating.js';
 import type { MethodsPayload } from '../../shared/types/methods.js';
 import type { RunRecord } from '../../shared/types/runs.js';

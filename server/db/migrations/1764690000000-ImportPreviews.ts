@@ -2,7 +2,7 @@ import type { MigrationInterface, QueryRunner } from 'typeorm';
 
 /**
  * Import previews kept in the database (not in one server process's memory), so that any server process can
- * commit a preview another made; each row expires (services/importsStash.ts deletes expired rows).
+ * commit a preview another made; each row expires (services/imports/importsStash.ts deletes expired rows).
  */
 export class ImportPreviews1764690000000 implements MigrationInterface {
   name = 'ImportPreviews1764690000000';

@@ -6,11 +6,11 @@
  */
 import type { EntityManager } from 'typeorm';
 import { PumpAround, TowerColumn, TraySection, type User } from '../entities/index.js';
-import { audit } from '../../services/audit.js';
-import { insertLoadCase } from '../../services/loads.js';
-import { applyReview } from '../../services/review.js';
-import { createRatingRun } from '../../services/runs.js';
-import { toSessionUser } from '../../services/users.js';
+import { audit } from '../../services/audit/audit.js';
+import { insertLoadCase } from '../../services/loads/loads.js';
+import { applyReview } from '../../services/runs/review.js';
+import { createRatingRun } from '../../services/runs/runs.js';
+import { toSessionUser } from '../../services/auth/users.js';
 import { DEMO_PUMP_AROUNDS, DEMO_SECTIONS, DEMO_TRAY_MARKS } from './demoColumn.js';
 import { DEMO_LOAD_CASES } from './demoLoads.js';
 

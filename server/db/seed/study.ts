@@ -7,7 +7,7 @@
 import type { EntityManager } from 'typeorm';
 import type { User } from '../entities/User.js';
 import { dryOutDuty } from '../../engine/pumpAround/index.js';
-import { buildStudy, insertStudy } from '../../services/studies.js';
+import { buildStudy, insertStudy } from '../../services/studies/studies.js';
 import { PumpAroundStudy } from '../entities/PumpAroundStudy.js';
 import { ValidationError } from '../../errors.js';
 import type { PumpAroundSpec } from '../../../shared/types/pumpAround.js';

@@ -14,6 +14,7 @@ export type { ShiftedTray, TrafficShift, TrayRegion } from './traffic.js';
 export { DEFAULT_MARGIN, runStudy, runStudyWith } from './study.js';
 export type { StudyResultOf } from './study.js';
 export { studyPoint, sweepDuties } from './points.js';
+export { minimumLiquidLines, pointsAt } from './keyPoints.js';
 export { SCAN_INTERVALS, scanWatchedChecks } from './scan.js';
 export { MINIMUM_LIQUID_CHECKS, ZONE_OVERLOAD_CHECKS, watchedChecks } from './checks.js';
 export { sectionForTray } from './column.js';

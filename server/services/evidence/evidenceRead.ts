@@ -1,7 +1,7 @@
 /** Field-evidence records as the API answers them: header, author, linked run and inspection named. */
 import type { EntityManager } from 'typeorm';
 import type { FieldEvidence } from '../../db/entities/FieldEvidence.js';
-import { iso } from '../columnsCommon.js';
+import { iso } from '../columns/columnsCommon.js';
 import type { EvidenceDataByKind, EvidenceRecord, EvidenceSummary } from '../../../shared/types/evidence.js';
 
 function itemCount(ev: FieldEvidence): number {

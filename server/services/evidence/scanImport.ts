@@ -5,10 +5,10 @@
  */
 import type { DataSource } from 'typeorm';
 import { ValidationError } from '../../errors.js';
-import { visibleColumn } from '../columnsCommon.js';
-import { ImportRowsError } from '../imports.js';
-import { parseUpload } from '../importsParse.js';
-import { keepPreview, previewRows } from '../importsStash.js';
+import { visibleColumn } from '../columns/columnsCommon.js';
+import { ImportRowsError } from '../imports/imports.js';
+import { parseUpload } from '../imports/importsParse.js';
+import { keepPreview, previewRows } from '../imports/importsStash.js';
 import { insertEvidence } from './evidence.js';
 import { toEvidenceRecord } from './evidenceRead.js';
 import { convertScanRows, detectScanHeader } from './scanImportRows.js';

@@ -3,8 +3,8 @@
  * detect units as the load import does (header text in brackets or after a comma, or a unit row under the
  * header; shared/units.ts), and convert rows to SI points with every fault listed as { row, column, message }.
  */
-import { splitHeader } from '../importsDetect.js';
-import { parseNumber } from '../importsRows.js';
+import { splitHeader } from '../imports/importsDetect.js';
+import { parseNumber } from '../imports/importsRows.js';
 import { findUnit, toSI } from '../../../shared/units.js';
 import type { ImportRowError } from '../../../shared/types/imports.js';
 import type { ScanImportMapping, ScanImportUnits, ScanMeasure, ScanPoint } from '../../../shared/types/evidence.js';

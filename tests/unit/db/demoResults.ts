@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { DEMO_SECTIONS } from '../../../server/db/seed/demoColumn.js';
 import { DEMO_LOAD_CASES } from '../../../server/db/seed/demoLoads.js';
-import { rateSnapshot } from '../../../server/services/runs.js';
+import { rateSnapshot } from '../../../server/services/runs/runs.js';
 import type { RunResults, RunSnapshot } from '../../../shared/types/runs.js';
 
 /** The demo column rated under each demo load case (engine only, no database). */

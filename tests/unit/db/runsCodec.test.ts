@@ -1,7 +1,7 @@
 import { brotliCompressSync, brotliDecompressSync } from 'node:zlib';
 import { afterEach, describe, expect, it } from 'vitest';
 import { decodeJson, decodeResults, encodeJson, encodeResults } from '../../../server/db/codec/index.js';
-import { rateSnapshot } from '../../../server/services/runs.js';
+import { rateSnapshot } from '../../../server/services/runs/runs.js';
 import { CHECK_NAMES } from '../../../shared/types/rating.js';
 import type { RunResults } from '../../../shared/types/runs.js';
 import { demoResults, demoSnapshots, storedFixture } from './demoResults.js';

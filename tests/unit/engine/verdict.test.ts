@@ -4,7 +4,7 @@ import { rateSection, rateTray } from '../../../server/engine/index.js';
 import { fairEntrainmentOwnFit } from '../../../server/engine/entrainment.js';
 import { DEMO_SECTIONS } from '../../../server/db/seed/demoColumn.js';
 import { DEMO_LOAD_CASES } from '../../../server/db/seed/demoLoads.js';
-import { rateSnapshot } from '../../../server/services/runs.js';
+import { rateSnapshot } from '../../../server/services/runs/runs.js';
 import { coverageSentence, sectionCoverage, trayRuns, trayState } from '../../../shared/verdict.js';
 import type { JetFloodMethod } from '../../../shared/types/rating.js';
 import { inventedRequest, seader748Bottom, seaderTray } from './fixtures.js';

@@ -8,7 +8,7 @@ import {
   sectionForTray,
   validateStudyInput,
 } from '../../../server/engine/pumpAround/index.js';
-import { slimPoint } from '../../../server/services/studyResult.js';
+import { slimPoint } from '../../../server/services/studies/studyResult.js';
 import type { StudyInput, StudyResult } from '../../../shared/types/pumpAround.js';
 import type { CheckName, TrayLoad } from '../../../shared/types/rating.js';
 

@@ -1,0 +1,90 @@
+/** The two charts of the rating report: percent of limit per tray, and the controlling tray's operating window. */
+import { chartSvg, legendSvg } from './reportCharts.js';
+import type { Content } from './pdfEngine.js';
+import { STATUS_LABELS } from '../../../shared/labels.js';
+import { formatQuantity, unitLabel } from '../../../shared/units.js';
+import type { CheckStatus } from '../../../shared/types/rating.js';
+import type { SessionUser } from '../../../shared/types/api.js';
+import type { RunRecord, RunWindow } from '../../../shared/types/runs.js';
+
+export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#b26a12', over: '#b3261e', na: '#8a8a8a' };
+const CURVE_HEX = ['#b3261e', '#e07a6f', '#8c4f7a', '#3c6e8f', '#2f8f9d', '#d9822b', '#6f8f72', '#5c5c3d'];
+
+export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser['unitSystem']): Content[] {
+  const trays = run.results.trays;
+  const pct = chartSvg({
+    width: 780,
+    height: 210,
+    xTitle: 'Tray',
+    yTitle: 'Highest percent of limit on the tray (%)',
+    xIntegers: true,
+    yMin: 0,
+    series: [
+      {
+        name: 'controlling',
+        color: STATUS_HEX.ok,
+        kind: 'bar',
+        points: trays.map((t) => [t.tray, t.checks[t.controllingCheck]?.percentOfLimit ?? 0]),
+        colors: trays.map((t) => STATUS_HEX[t.checks[t.controllingCheck]?.status ?? 'ok']),
+      },
+    ],
+    yLines: [{ y: 100, label: 'limit', color: STATUS_HEX.over }],
+    xLines: run.results.sections.slice(1).map((s) => ({ x: Math.min(s.firstTray, s.lastTray) - 0.5, label: s.name })),
+  });
+  const out: Content[] = [
+    {
+      unbreakable: true,
+      stack: [
+        { text: 'Percent of limit per tray (the controlling check of each tray)', style: 'h2' },
+        { svg: pct, width: 780 },
+        {
+          svg: legendSvg(
+            (['ok', 'near', 'over'] as CheckStatus[]).map((s) => ({
+              name: `${STATUS_LABELS[s]} the limit`,
+              color: STATUS_HEX[s],
+            })),
+            400,
+          ),
+        },
+      ],
+    },
+  ];
+  if (!w) return out;
+  const m = (v: number) => formatQuantity('massFlow', v, sys).replace(/,/g, '');
+  const curves = w.window.curves.filter((c) => c.liquid_kg_h.length > 1);
+  const svg = chartSvg({
+    width: 620,
+    height: 300,
+    xMin: 0,
+    yMin: 0,
+    xTitle: `Liquid (${unitLabel('massFlow', sys)})`,
+    yTitle: `Vapour (${unitLabel('massFlow', sys)})`,
+    series: [
+      ...curves.map((c, i) => ({
+        name: c.label,
+        color: CURVE_HEX[i % CURVE_HEX.length]!,
+        points: c.liquid_kg_h.map((x, k) => [Number(m(x)), Number(m(c.vapour_kg_h[k]!))] as [number, number]),
+      })),
+      {
+        name: 'operating point',
+        color: '#111111',
+        kind: 'marker' as const,
+        points: [[Number(m(w.window.operatingPoint.liquid_kg_h)), Number(m(w.window.operatingPoint.vapour_kg_h))]],
+      },
+    ],
+  });
+  out.push(
+    { text: `Operating window of the controlling tray ${w.window.tray}`, style: 'h2', pageBreak: 'before' },
+    { svg, width: 620 },
+    {
+      svg: legendSvg(
+        [
+          ...curves.map((c, i) => ({ name: c.label, color: CURVE_HEX[i % CURVE_HEX.length]! })),
+          { name: `operating point of tray ${w.window.tray}`, color: '#111111' },
+        ],
+        620,
+      ),
+    },
+  );
+  return out;
+}

@@ -1,0 +1,115 @@
+/**
+ * The engine's StudyInput for a stored study, built from the column's stored data: its tray sections
+ * (geometry and tray range), a base load case (per-tray loads) and one of its pump-arounds (draw, return,
+ * base duty), with λ, c_p, ΔT or circulation, the sweep, the margin and method options from the request.
+ */
+import type { DataSource, EntityManager } from 'typeorm';
+import { ValidationError } from '../../errors.js';
+import type { TrayLoad } from '../../../shared/types/rating.js';
+import type { PumpAroundSpec, StudyInput, StudySection } from '../../../shared/types/pumpAround.js';
+import { pumpAroundCirculation, shiftFraction } from '../../engine/pumpAround/index.js';
+import type { PumpAroundRecord, TraySectionRecord, TrayNumbering } from '../../../shared/types/columns.js';
+import type { CreateStudyBody } from '../../../shared/types/studies.js';
+
+export interface StudyParts {
+  column: { id: string; tag: string; numbering: TrayNumbering };
+  sections: Pick<TraySectionRecord, 'name' | 'firstTray' | 'lastTray' | 'geometry'>[];
+  loadCase: { id: string; name: string; loads: TrayLoad[] };
+  pumpAround: Pick<PumpAroundRecord, 'id' | 'name' | 'drawTray' | 'returnTray' | 'baseDuty_kW'>;
+}
+
+/** Column, sections, load case and pump-around; the ids must belong to the column (else 400 naming the field). */
+export async function loadStudyParts(
+  db: DataSource | EntityManager,
+  columnId: string,
+  loadCaseId: string,
+  pumpAroundId: string,
+): Promise<StudyParts> {
+  const [column] = (await db.query(`SELECT id, tag, numbering FROM columns WHERE id = $1`, [columnId])) as StudyParts['column'][];
+  const sections = (await db.query(
+    `SELECT name, first_tray AS "firstTray", last_tray AS "lastTray", geometry FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`,
+    [columnId],
+  )) as StudyParts['sections'];
+  const [loadCase] = (await db.query(`SELECT id, name, loads FROM load_cases WHERE id = $1 AND column_id = $2`, [
+    loadCaseId,
+    columnId,
+  ])) as StudyParts['loadCase'][];
+  const [pumpAround] = (await db.query(
+    `SELECT id, name, draw_tray AS "drawTray", return_tray AS "returnTray", base_duty_kw::float8 AS "baseDuty_kW" FROM pump_arounds WHERE id = $1 AND column_id = $2`,
+    [pumpAroundId, columnId],
+  )) as StudyParts['pumpAround'][];
+  const errors = [];
+  if (!loadCase) errors.push({ path: 'loadCaseId', message: 'is not a load case of this column' });
+  if (!pumpAround) errors.push({ path: 'pumpAroundId', message: 'is not a pump-around of this column' });
+  if (!sections.length)
+    errors.push({ path: 'column sections', message: 'the column has no tray sections: add its tray geometry first' });
+  if (errors.length || !column || !loadCase || !pumpAround)
+    throw new ValidationError('The study cannot be built from this column', errors);
+  return { column, sections, loadCase, pumpAround };
+}
+
+/**
+ * Zone liquid without the base circulation: a load case taken from a rating case often carries the
+ * pump-around circulation on the zone trays, while the engine wants the net internal liquid there (it adds
+ * the circulation at each duty itself). With zoneLiquidIncludesCirculation the base circulation
+ * m0 = Q0/(c_p ΔT) (or the fixed circulation) is taken off every zone tray; below zero is an error.
+ */
+function netZoneLiquid(trays: TrayLoad[], pa: PumpAroundSpec, numbering: TrayNumbering): { trays: TrayLoad[]; m0: number } {
+  const hasOne = (pa.returnTemperatureDrop_K !== undefined) !== (pa.circulation_kg_h !== undefined);
+  if (!hasOne || !(pa.liquidHeatCapacity_kJ_kgK > 0)) return { trays, m0: 0 };
+  const m0 = pumpAroundCirculation(pa, pa.baseDuty_kW).circulation_kg_h;
+  const short = trays.filter((t) => shiftFraction(t.tray, pa, numbering).region === 'zone' && t.liquidMassFlow_kg_h < m0);
+  if (short.length)
+    throw new ValidationError('The zone liquid cannot carry the base circulation', [
+      {
+        path: 'zoneLiquidIncludesCirculation',
+        message: `the base circulation ${Math.round(m0)} kg/h exceeds the liquid of zone tray${short.length > 1 ? 's' : ''} ${short.map((t) => `${t.tray} (${Math.round(t.liquidMassFlow_kg_h)} kg/h)`).join(', ')}`,
+      },
+    ]);
+  return {
+    trays: trays.map((t) =>
+      shiftFraction(t.tray, pa, numbering).region === 'zone' ? { ...t, liquidMassFlow_kg_h: t.liquidMassFlow_kg_h - m0 } : t,
+    ),
+    m0,
+  };
+}
+
+/** The engine input; load-case trays outside every section are left out (and listed). */
+export function studyInputFrom(
+  parts: StudyParts,
+  body: CreateStudyBody,
+): { input: StudyInput; excludedTrays: number[]; netOfCirculation_kg_h: number | null } {
+  const sections: StudySection[] = parts.sections.map((s) => ({
+    ...s.geometry,
+    name: s.name,
+    fromTray: s.firstTray,
+    toTray: s.lastTray,
+  }));
+  const inside = (tray: number): boolean => parts.sections.some((s) => tray >= s.firstTray && tray <= s.lastTray);
+  const pa = parts.pumpAround;
+  const input: StudyInput = {
+    sections,
+    trays: parts.loadCase.loads.filter((t) => inside(t.tray)),
+    pumpAround: {
+      name: pa.name,
+      drawTray: pa.drawTray,
+      returnTray: pa.returnTray,
+      baseDuty_kW: body.baseDuty_kW ?? pa.baseDuty_kW,
+      liquidHeatCapacity_kJ_kgK: body.liquidHeatCapacity_kJ_kgK!,
+      ...(body.returnTemperatureDrop_K !== undefined ? { returnTemperatureDrop_K: body.returnTemperatureDrop_K } : {}),
+      ...(body.circulation_kg_h !== undefined ? { circulation_kg_h: body.circulation_kg_h } : {}),
+    },
+    latentHeat_kJ_kg: body.latentHeat_kJ_kg,
+    margin: body.margin ?? 0.7,
+    sweep: body.sweep,
+    numbering: parts.column.numbering,
+    ...(body.methods ? { methods: body.methods } : {}),
+  };
+  let netOfCirculation_kg_h: number | null = null;
+  if (body.zoneLiquidIncludesCirculation) {
+    const net = netZoneLiquid(input.trays, input.pumpAround, input.numbering ?? 'top-down');
+    input.trays = net.trays;
+    netOfCirculation_kg_h = net.m0;
+  }
+  return { input, excludedTrays: parts.loadCase.loads.filter((t) => !inside(t.tray)).map((t) => t.tray), netOfCirculation_kg_h };
+}
