@@ -2,6 +2,7 @@ import multer from 'multer';
 import { config } from '../config.js';
 import { defineRoutes } from '../http/route.js';
 import { createEvidence, deleteEvidence, getEvidence, listEvidence, updateEvidence } from '../services/evidence/evidence.js';
+import { readEvidence } from '../services/evidence/evidenceReading.js';
 import { commitScanImport, previewScanImport } from '../services/evidence/scanImport.js';
 import { ImportRowsError } from '../services/imports/imports.js';
 import { uuidParams } from '../../shared/schemas/common.js';
@@ -9,6 +10,7 @@ import {
   createEvidenceEnvelope,
   deleteEvidenceQuery,
   evidenceListQuery,
+  evidenceReadingQuery,
   scanImportCommitBody,
   scanImportPreviewQuery,
   updateEvidenceBody,
@@ -47,6 +49,17 @@ export const evidenceRoutes = defineRoutes([
     summary: 'One field-evidence record with its data',
     params: uuidParams,
     handler: async ({ ds, user, params }) => getEvidence(ds, user, (params as Id).id),
+  },
+  {
+    method: 'get',
+    path: '/evidence/:id/reading',
+    access: 'read',
+    summary:
+      'A gamma scan read tray by tray against the column (datum and nudge applied) and the prediction of a rating run (?runId=, else the linked run)',
+    params: uuidParams,
+    query: evidenceReadingQuery,
+    handler: async ({ ds, user, params, query }) =>
+      readEvidence(ds, user, (params as Id).id, (query as { runId?: string }).runId),
   },
   {
     method: 'patch',

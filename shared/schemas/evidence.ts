@@ -82,12 +82,15 @@ export const gammaScanDataSchema = Type.Object(
   { additionalProperties: false },
 );
 
+/** One measured ΔP: between two tappings (elevations) or over a named tray section of the column. */
 export const dpReadingSchema = Type.Object(
   {
     label: text(80, 1),
-    /** upper and lower tapping elevations on the datum's scale [m] */
-    upperElevation_m: elevation,
-    lowerElevation_m: elevation,
+    /** upper and lower tapping elevations on the datum's scale [m]; null when `section` is given */
+    upperElevation_m: nullable(elevation),
+    lowerElevation_m: nullable(elevation),
+    /** a tray section's name, for a ΔP measured over that section */
+    section: nullable(text(80, 1)),
     /** measured ΔP between the two tappings [Pa] */
     measured_Pa: Type.Number({ minimum: 0, maximum: 1e6 }),
   },
@@ -99,8 +102,8 @@ export const dpSurveyDataSchema = Type.Object(
     datum: datumSchema,
     /** instrument and method, e.g. "one digital gauge moved between nozzles, lines purged" */
     gauge: text(300),
-    /** whether the readings were corrected for the static head of liquid-filled impulse lines */
-    staticHeadCorrected: Type.Boolean(),
+    /** true when the readings already exclude the static head of vapour between the tappings (else it is subtracted) */
+    vapourHeadCorrected: Type.Boolean(),
     readings: Type.Array(dpReadingSchema, { minItems: 1, maxItems: 100 }),
   },
   { additionalProperties: false },

@@ -5,6 +5,9 @@
 import type { Static } from '@sinclair/typebox';
 import type * as S from '../schemas/evidence.js';
 import type { ImportRowError } from './imports.js';
+import type { GammaScanResult, TrayElevation } from './fieldEvidence.js';
+import type { StudySection } from './pumpAround.js';
+import type { MethodOptions, TrayLoad } from './rating.js';
 
 export type EvidenceKind = (typeof S.EVIDENCE_KINDS)[number];
 export type ScanMeasure = (typeof S.SCAN_MEASURES)[number];
@@ -78,4 +81,29 @@ export interface ScanImportPreview {
   errors: ImportRowError[];
   errorCount: number;
   notes: string[];
+}
+
+/** What a reading is made from: the column's (or the chosen run's) sections and, with a run, its loads. */
+export interface ReadingBasis {
+  numbering: 'top-down' | 'bottom-up';
+  trayCount: number;
+  runId: string | null;
+  runLabel: string | null;
+  sections: StudySection[];
+  loads: TrayLoad[] | null;
+  methods: MethodOptions | null;
+}
+
+/** A gamma scan read tray by tray, line by line, against the prediction of a run (when one is chosen). */
+export interface EvidenceReading {
+  evidenceId: string;
+  runId: string | null;
+  runLabel: string | null;
+  numbering: 'top-down' | 'bottom-up';
+  trayCount: number;
+  datum: EvidenceDatum;
+  /** every tray deck of the sections on the scan's scale (datum and nudge applied), top first */
+  decks: TrayElevation[];
+  /** per scan line: the engine's reading, or why it could not be read (paths name the record's fields) */
+  lines: { label: string; result: GammaScanResult | null; errors: { path: string; message: string }[] }[];
 }

@@ -59,8 +59,8 @@ const dpSurvey = {
   data: {
     datum: { tray: 1, elevation_m: 30 },
     gauge: 'one digital gauge moved between nozzles, lines purged',
-    staticHeadCorrected: true,
-    readings: [{ label: 'N3 to N7', upperElevation_m: 30.2, lowerElevation_m: 25.1, measured_Pa: 5200 }],
+    vapourHeadCorrected: false,
+    readings: [{ label: 'N3 to N7', upperElevation_m: 30.2, lowerElevation_m: 25.1, section: null, measured_Pa: 5200 }],
   },
 };
 
@@ -170,6 +170,16 @@ describe('field evidence', () => {
       .send({ ...dpSurvey, data: { ...dpSurvey.data, readings: [{ ...dpSurvey.data.readings[0], lowerElevation_m: 31 }] } });
     expect(r4.status).toBe(400);
     expect(r4.body.details).toEqual([{ path: 'data.readings.0.upperElevation_m', message: 'must be above the lower tapping' }]);
+    const both = { ...dpSurvey.data.readings[0], section: 'Top' };
+    const r4b = await inspector.post(url()).send({ ...dpSurvey, data: { ...dpSurvey.data, readings: [both] } });
+    expect(r4b.body.details).toEqual([
+      { path: 'data.readings.0.section', message: 'give either both tapping elevations or a section, not both or neither' },
+    ]);
+    const unknown = { ...dpSurvey.data.readings[0], upperElevation_m: null, lowerElevation_m: null, section: 'Nowhere' };
+    const r4c = await inspector.post(url()).send({ ...dpSurvey, data: { ...dpSurvey.data, readings: [unknown] } });
+    expect(r4c.body.details).toEqual([
+      { path: 'data.readings.0.section', message: '"Nowhere" is not a tray section of this column (none)' },
+    ]);
     const r5 = await inspector.post(url()).send({ ...tempSurvey, kind: 'sound-survey' });
     expect(r5.status).toBe(400);
     expect(r5.body.details.map((d: { path: string }) => d.path)).toContain('kind');

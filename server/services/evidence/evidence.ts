@@ -38,7 +38,12 @@ export function checkData<K extends EvidenceKind>(kind: K, data: unknown): Evide
 }
 
 /** Faults the schema cannot see: trays outside the column, a count-rate line without calibration, order of tappings. */
-export function dataFaults(kind: EvidenceKind, data: EvidenceDataByKind[EvidenceKind], trayCount: number): ErrorDetail[] {
+export function dataFaults(
+  kind: EvidenceKind,
+  data: EvidenceDataByKind[EvidenceKind],
+  trayCount: number,
+  sectionNames: string[],
+): ErrorDetail[] {
   const out: ErrorDetail[] = [];
   const tray = (t: number, path: string) => {
     if (t > trayCount) out.push({ path, message: `tray ${t} is outside the column (trays 1–${trayCount})` });
@@ -64,8 +69,22 @@ export function dataFaults(kind: EvidenceKind, data: EvidenceDataByKind[Evidence
     const d = data as EvidenceDataByKind['dp-survey'];
     tray(d.datum.tray, 'data.datum.tray');
     d.readings.forEach((r, i) => {
-      if (r.upperElevation_m <= r.lowerElevation_m)
-        out.push({ path: `data.readings.${i}.upperElevation_m`, message: 'must be above the lower tapping' });
+      const at = `data.readings.${i}`;
+      const byElevation = r.upperElevation_m !== null || r.lowerElevation_m !== null;
+      if (byElevation === (r.section !== null))
+        out.push({ path: `${at}.section`, message: 'give either both tapping elevations or a section, not both or neither' });
+      else if (byElevation && (r.upperElevation_m === null || r.lowerElevation_m === null))
+        out.push({
+          path: `${at}.${r.upperElevation_m === null ? 'upper' : 'lower'}Elevation_m`,
+          message: 'is required with the other tapping',
+        });
+      else if (byElevation && r.upperElevation_m! <= r.lowerElevation_m!)
+        out.push({ path: `${at}.upperElevation_m`, message: 'must be above the lower tapping' });
+      else if (r.section !== null && !sectionNames.includes(r.section))
+        out.push({
+          path: `${at}.section`,
+          message: `"${r.section}" is not a tray section of this column (${sectionNames.join(', ') || 'none'})`,
+        });
     });
   } else {
     const d = data as EvidenceDataByKind['temperature-survey'];
@@ -111,7 +130,15 @@ export async function insertEvidence(
 ): Promise<FieldEvidence> {
   const col = await visibleColumn(em, user, columnId, true);
   const data = checkData(body.kind, body.data);
-  const faults = dataFaults(body.kind, data, col.trayCount);
+  const names = (await em.query(`SELECT name FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`, [columnId])) as {
+    name: string;
+  }[];
+  const faults = dataFaults(
+    body.kind,
+    data,
+    col.trayCount,
+    names.map((n) => n.name),
+  );
   if (body.inspectionTiming && !body.inspectionId) faults.push({ path: 'inspectionTiming', message: 'needs an inspectionId' });
   if (faults.length) throw new ValidationError('Invalid body', faults);
   await checkLinks(em, columnId, body.runId, body.inspectionId);
