@@ -16,7 +16,16 @@ export {
   type TrayPrediction,
 } from './reader.js';
 export { frothHeightFromClearLiquid, predictTrays, predictTray } from './prediction.js';
-export { syntheticGammaScan, syntheticDensity, seededNormal, seededUniform, type SyntheticScanSpec } from './synthetic.js';
+export {
+  syntheticGammaScan,
+  syntheticDensity,
+  frothHeightsFromRating,
+  seededNormal,
+  seededUniform,
+  type SyntheticScanSpec,
+  type SyntheticTrayState,
+} from './synthetic.js';
+export { FIELD_EVIDENCE_METHODS, FIELD_EVIDENCE_REGISTRY, FIELD_EVIDENCE_USES } from './methods.js';
 export { runGammaScan, scanToDensities, SCAN_CAUTION } from './gammaScan.js';
 export {
   validateGammaScanInput,

@@ -8,7 +8,10 @@
  * (mulberry32 with Box–Muller) is added to the density, before conversion to count rates when asked.
  */
 import type { ScanPoint, TrayElevation } from '../../../shared/types/fieldEvidence.js';
+import type { StudySection } from '../../../shared/types/pumpAround.js';
+import type { MethodOptions, TrayLoad } from '../../../shared/types/rating.js';
 import { countRateFromDensityBeerLambert } from './scanDensity.js';
+import { predictTrays } from './prediction.js';
 
 export interface SyntheticScanSpec {
   decks: readonly TrayElevation[];
@@ -88,4 +91,27 @@ export function syntheticGammaScan(spec: SyntheticScanSpec): ScanPoint[] {
     else points.push({ elevation_m: z, density_kg_m3: rho });
   }
   return points;
+}
+
+/** A tray's state in a synthetic scan: a factor on the predicted froth height, 'flooded' or 'missing'. */
+export type SyntheticTrayState = number | 'flooded' | 'missing';
+
+/**
+ * Froth heights for a synthetic scan made from the rating: the predicted froth height of every loaded tray
+ * (same load case), times a factor, or flooded (froth to the deck above) or missing (no froth), per tray.
+ * Example: { 6: 'flooded', 7: 'flooded', 12: 'missing', 4: 2 } floods trays 6–7, removes tray 12 and doubles
+ * tray 4's froth.
+ */
+export function frothHeightsFromRating(
+  sections: readonly StudySection[],
+  loads: readonly TrayLoad[],
+  states: Readonly<Record<number, SyntheticTrayState>> = {},
+  methods?: MethodOptions,
+): { tray: number; frothHeight_mm: number }[] {
+  const tallest = Math.max(...sections.map((s) => s.traySpacing_mm));
+  return [...predictTrays(sections, loads, methods).values()].map((p) => {
+    const st = states[p.tray] ?? 1;
+    const h = st === 'flooded' ? 2 * tallest : st === 'missing' ? 0 : p.frothHeight_mm * st;
+    return { tray: p.tray, frothHeight_mm: h };
+  });
 }

@@ -6,10 +6,11 @@ import type { StudySection } from '../../../shared/types/pumpAround.js';
 import type { TrayLoad } from '../../../shared/types/rating.js';
 import type { GammaScanInput } from '../../../shared/types/fieldEvidence.js';
 import {
-  predictTrays,
+  frothHeightsFromRating,
   syntheticGammaScan,
   trayDeckElevations,
   type SyntheticScanSpec,
+  type SyntheticTrayState,
 } from '../../../server/engine/fieldEvidence/index.js';
 
 const geometry = {
@@ -95,10 +96,7 @@ export function gammaInput(spec: SyntheticScanSpec, withLoads = false): GammaSca
   return input;
 }
 
-/** Froth heights of the model: the prediction for every tray, times a factor per listed tray (686 = flood). */
-export function frothFromPrediction(overrides: Record<number, number | 'flood'>): { tray: number; frothHeight_mm: number }[] {
-  return [...predictTrays(sections(), loads()).values()].map((p) => {
-    const o = overrides[p.tray];
-    return { tray: p.tray, frothHeight_mm: o === 'flood' ? 1000 : p.frothHeight_mm * (o ?? 1) };
-  });
+/** Froth heights of the model: the prediction for every tray, times a factor, flooded or missing per listed tray. */
+export function frothFromPrediction(states: Record<number, SyntheticTrayState>): { tray: number; frothHeight_mm: number }[] {
+  return frothHeightsFromRating(sections(), loads(), states);
 }

@@ -93,7 +93,7 @@ describe('gamma-scan reader on synthetic scans of known froth heights', () => {
 
 describe('gamma scan with loads: prediction beside the reading', () => {
   it('froth built from the prediction reads normal; flood, missing tray, high froth and low liquid found against it', () => {
-    const froth = frothFromPrediction({ 5: 'flood', 6: 'flood', 7: 'flood', 11: 0, 4: 2.5, 13: 0.4 });
+    const froth = frothFromPrediction({ 5: 'flooded', 6: 'flooded', 7: 'flooded', 11: 0, 4: 2.5, 13: 0.4 });
     // a 10 mm step resolves the thin froth of the low-liquid tray (about 30 mm)
     const r = runGammaScan(gammaInput(scanSpec(froth, { seed: 11, step_m: 0.01 }), true));
     const by = new Map(r.trays.map((t) => [t.tray, t]));

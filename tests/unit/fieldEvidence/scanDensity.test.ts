@@ -30,7 +30,7 @@ describe('count rate to density (two-point attenuation calibration)', () => {
   });
 
   it('a count-rate scan reads the same trays as the density scan it came from', () => {
-    const froth = frothFromPrediction({ 6: 'flood', 7: 'flood', 10: 0 });
+    const froth = frothFromPrediction({ 6: 'flooded', 7: 'flooded', 10: 0 });
     const byDensity = runGammaScan(gammaInput(scanSpec(froth, { seed: 3 }), true));
     const byCounts = runGammaScan(
       gammaInput(scanSpec(froth, { seed: 3, countRates: { vapourCountRate: 50000, liquidCountRate: 2500 } }), true),
