@@ -5,7 +5,7 @@
 import type { Static } from '@sinclair/typebox';
 import type * as S from '../schemas/evidence.js';
 import type { ImportRowError } from './imports.js';
-import type { GammaScanResult, TrayElevation } from './fieldEvidence.js';
+import type { GammaScanResult, PressureDropSurveyResult, TemperatureSurveyResult, TrayElevation } from './fieldEvidence.js';
 import type { StudySection } from './pumpAround.js';
 import type { MethodOptions, TrayLoad } from './rating.js';
 
@@ -94,16 +94,24 @@ export interface ReadingBasis {
   methods: MethodOptions | null;
 }
 
-/** A gamma scan read tray by tray, line by line, against the prediction of a run (when one is chosen). */
+type Faults = { path: string; message: string }[];
+
+/**
+ * A record read against the column and a rating run: a gamma scan tray by tray and line by line (against the
+ * run's prediction when one is chosen), a ΔP survey against the predicted tray ΔP, a temperature survey against
+ * the load case's temperatures. Where something cannot be read, `errors` says why (paths name the record's fields).
+ */
 export interface EvidenceReading {
   evidenceId: string;
+  kind: EvidenceKind;
   runId: string | null;
   runLabel: string | null;
   numbering: 'top-down' | 'bottom-up';
   trayCount: number;
-  datum: EvidenceDatum;
-  /** every tray deck of the sections on the scan's scale (datum and nudge applied), top first */
+  datum: EvidenceDatum | null;
+  /** every tray deck of the sections on the evidence's scale (datum and nudge applied), top first */
   decks: TrayElevation[];
-  /** per scan line: the engine's reading, or why it could not be read (paths name the record's fields) */
-  lines: { label: string; result: GammaScanResult | null; errors: { path: string; message: string }[] }[];
+  lines: { label: string; result: GammaScanResult | null; errors: Faults }[];
+  pressureDrop: { result: PressureDropSurveyResult | null; errors: Faults } | null;
+  temperature: { result: TemperatureSurveyResult | null; errors: Faults } | null;
 }

@@ -128,7 +128,7 @@ describe('reading a stored gamma scan', () => {
     expect(deck(moved, 10) - deck(plain, 10)).toBeCloseTo(0.2, 9);
   });
 
-  it('answers 400 naming the field for a run of another column or a survey', async () => {
+  it('answers 400 naming the field for a run of another column; a survey without a run says a run is needed', async () => {
     const ev = await store();
     const other = await makePlant(ctx.ds, 16);
     const { agent: otherSpecialist } = await signedIn(ctx, 'internals-specialist', [other.siteId]);
@@ -150,9 +150,46 @@ describe('reading a stored gamma scan', () => {
       operatingCase: 'Normal',
       data: { instrument: 'shell', readings: [{ tray: 3, temperature_C: 120 }] },
     });
-    const res = await engineer.get(`/api/evidence/${t.body.id}/reading`);
-    expect(res.status).toBe(400);
-    expect(res.body.details[0].path).toBe('id');
+    const noRun = await engineer.get(`/api/evidence/${t.body.id}/reading`);
+    expect(noRun.status).toBe(200);
+    expect(noRun.body.temperature.errors[0].path).toBe('runId');
     expect((await engineer.get(`/api/evidence/${ev.id}/reading?runId=nope`)).status).toBe(400);
+  });
+
+  it('reads a ΔP survey and a temperature survey against the run', async () => {
+    const decks = trayDeckElevations(studySections(), 'top-down', DATUM);
+    const deck = (t: number) => decks.find((d) => d.tray === t)!.deckElevation_m;
+    const dp = await engineer.post(`/api/columns/${plant.columnId}/evidence`).send({
+      kind: 'dp-survey',
+      title: 'ΔP',
+      takenOn: '2026-11-20',
+      operatingCase: 'Normal',
+      runId,
+      data: {
+        datum: DATUM,
+        gauge: 'one gauge',
+        vapourHeadCorrected: false,
+        readings: [
+          { label: 'Top section', upperElevation_m: null, lowerElevation_m: null, section: 'Top', measured_Pa: 6000 },
+          { label: 'Taps', upperElevation_m: deck(9) + 0.1, lowerElevation_m: deck(12) - 0.1, section: null, measured_Pa: 3000 },
+        ],
+      },
+    });
+    expect(dp.status, JSON.stringify(dp.body)).toBe(201);
+    const r = (await engineer.get(`/api/evidence/${dp.body.id}/reading`)).body as EvidenceReading;
+    expect(r.pressureDrop!.errors).toEqual([]);
+    expect(r.pressureDrop!.result!.rows.map((x) => x.trays)).toEqual([
+      [1, 2, 3, 4, 5, 6, 7, 8],
+      [9, 10, 11, 12],
+    ]);
+    const t = await engineer.post(`/api/columns/${plant.columnId}/evidence`).send({
+      kind: 'temperature-survey',
+      title: 'T',
+      takenOn: '2026-11-20',
+      operatingCase: 'Normal',
+      data: { instrument: 'shell', readings: [{ tray: 3, temperature_C: 400 }] },
+    });
+    const tr = (await engineer.get(`/api/evidence/${t.body.id}/reading?runId=${runId}`)).body as EvidenceReading;
+    expect(tr.temperature!.result!.rows[0]).toMatchObject({ tray: 3, measured_C: 400, flag: 'hotter' });
   });
 });

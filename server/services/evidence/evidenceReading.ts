@@ -6,7 +6,15 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { RatingRun } from '../../db/entities/RatingRun.js';
 import { ValidationError } from '../../errors.js';
-import { runGammaScan, trayDeckElevations, validateGammaScanInput } from '../../engine/fieldEvidence/index.js';
+import {
+  runGammaScan,
+  runPressureDropSurvey,
+  runTemperatureSurvey,
+  trayDeckElevations,
+  validateGammaScanInput,
+  validatePressureDropSurveyInput,
+  validateTemperatureSurveyInput,
+} from '../../engine/fieldEvidence/index.js';
 import { visibleEvidence } from './evidence.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { EvidenceDataByKind, EvidenceReading, ReadingBasis } from '../../../shared/types/evidence.js';
@@ -100,46 +108,94 @@ const recordPath = (p: string, line: number): string => {
   return dotted || 'data';
 };
 
+const NEEDS_RUN = [
+  {
+    path: 'runId',
+    message: 'choose a rating run of this column (same operating case) to compare the survey with its prediction',
+  },
+];
+const renamePaths = (errors: { path: string; message: string }[], line = 0) =>
+  errors.map((e) => ({ path: recordPath(e.path.replace('/measurements', '/readings'), line), message: e.message }));
+
+function datumCovered(basis: ReadingBasis, tray: number): void {
+  if (!basis.sections.some((x) => tray >= Math.min(x.fromTray, x.toTray) && tray <= Math.max(x.fromTray, x.toTray)))
+    throw new ValidationError('Datum outside the sections', [
+      { path: 'data.datum.tray', message: `tray ${tray} is in none of the column's tray sections` },
+    ]);
+}
+
+function pressureDropReading(basis: ReadingBasis, d: EvidenceDataByKind['dp-survey']): EvidenceReading['pressureDrop'] {
+  if (!basis.loads) return { result: null, errors: NEEDS_RUN };
+  const v = validatePressureDropSurveyInput({
+    sections: basis.sections,
+    numbering: basis.numbering,
+    datum: { tray: d.datum.tray, elevation_m: d.datum.elevation_m, offset_m: d.datum.nudge_m },
+    trays: basis.loads,
+    ...(basis.methods ? { methods: basis.methods } : {}),
+    measurements: d.readings.map((r) => ({
+      label: r.label,
+      ...(r.section !== null
+        ? { section: r.section }
+        : { upperElevation_m: r.upperElevation_m!, lowerElevation_m: r.lowerElevation_m! }),
+      measured_Pa: r.measured_Pa,
+      vapourHeadCorrected: d.vapourHeadCorrected,
+    })),
+  });
+  return v.ok ? { result: runPressureDropSurvey(v.value), errors: [] } : { result: null, errors: renamePaths(v.errors) };
+}
+
+function temperatureReading(basis: ReadingBasis, d: EvidenceDataByKind['temperature-survey']): EvidenceReading['temperature'] {
+  if (!basis.loads) return { result: null, errors: NEEDS_RUN };
+  const v = validateTemperatureSurveyInput({ trays: basis.loads, measurements: d.readings });
+  return v.ok ? { result: runTemperatureSurvey(v.value), errors: [] } : { result: null, errors: renamePaths(v.errors) };
+}
+
 export async function readEvidence(ds: DataSource, user: SessionUser, id: string, runId?: string): Promise<EvidenceReading> {
   const em = ds.manager;
   const ev = await visibleEvidence(em, user, id);
-  if (ev.kind !== 'gamma-scan')
-    throw new ValidationError('Not a gamma scan', [{ path: 'id', message: `is a ${ev.kind}; only gamma scans are read here` }]);
   const basis = await readingBasis(em, ev.columnId, runId ?? ev.runId);
+  const head = {
+    evidenceId: ev.id,
+    kind: ev.kind,
+    runId: basis.runId,
+    runLabel: basis.runLabel,
+    numbering: basis.numbering,
+    trayCount: basis.trayCount,
+  };
+  if (ev.kind === 'temperature-survey')
+    return {
+      ...head,
+      datum: null,
+      decks: [],
+      lines: [],
+      pressureDrop: null,
+      temperature: temperatureReading(basis, ev.data as EvidenceDataByKind['temperature-survey']),
+    };
   if (!basis.sections.length)
     throw new ValidationError('The column has no tray sections', [
-      { path: 'sections', message: 'add the tray sections (tray spacing) before reading a scan against the trays' },
+      { path: 'sections', message: 'add the tray sections (tray spacing) before reading evidence against the trays' },
     ]);
-  const d = ev.data as EvidenceDataByKind['gamma-scan'];
-  if (
-    !basis.sections.some((x) => d.datum.tray >= Math.min(x.fromTray, x.toTray) && d.datum.tray <= Math.max(x.fromTray, x.toTray))
-  )
-    throw new ValidationError('Datum outside the sections', [
-      { path: 'data.datum.tray', message: `tray ${d.datum.tray} is in none of the column's tray sections` },
-    ]);
+  const d = ev.data as EvidenceDataByKind['gamma-scan' | 'dp-survey'];
+  datumCovered(basis, d.datum.tray);
   const decks = trayDeckElevations(basis.sections, basis.numbering, {
     tray: d.datum.tray,
     elevation_m: d.datum.elevation_m,
     offset_m: d.datum.nudge_m,
   });
-  const lines = d.lines.map((line, i) => {
-    const v = validateGammaScanInput(scanInput(basis, d, line, basis.loads));
-    if (!v.ok)
-      return {
-        label: line.label,
-        result: null,
-        errors: v.errors.map((e) => ({ path: recordPath(e.path, i), message: e.message })),
-      };
+  if (ev.kind === 'dp-survey')
+    return {
+      ...head,
+      datum: d.datum,
+      decks,
+      lines: [],
+      pressureDrop: pressureDropReading(basis, ev.data as EvidenceDataByKind['dp-survey']),
+      temperature: null,
+    };
+  const scan = ev.data as EvidenceDataByKind['gamma-scan'];
+  const lines = scan.lines.map((line, i) => {
+    const v = validateGammaScanInput(scanInput(basis, scan, line, basis.loads));
+    if (!v.ok) return { label: line.label, result: null, errors: renamePaths(v.errors, i) };
     return { label: line.label, result: runGammaScan(v.value), errors: [] };
   });
-  return {
-    evidenceId: ev.id,
-    runId: basis.runId,
-    runLabel: basis.runLabel,
-    numbering: basis.numbering,
-    trayCount: basis.trayCount,
-    datum: d.datum,
-    decks,
-    lines,
-  };
+  return { ...head, datum: d.datum, decks, lines, pressureDrop: null, temperature: null };
 }
