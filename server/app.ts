@@ -11,12 +11,14 @@ import { ForbiddenError, UnauthorizedError } from './errors.js';
 import { readSession, renewSessionIfOld, type SessionClaims } from './http/auth.js';
 import { errorHandler, notFoundHandler } from './http/errorHandler.js';
 import { buildOpenApi } from './http/openapi.js';
+import { checkAnswers as answerCheck, CONTRACT_LOCAL } from './http/responseCheck.js';
 import { clientStatic } from './http/staticClient.js';
 import type { RouteDef } from './http/route.js';
 import { validate } from './http/validation.js';
 import { logger } from './logger.js';
 import { allRoutes } from './routes/index.js';
 import { activeSessionUser } from './services/auth/users.js';
+import { healthContract } from '../shared/contract/health.js';
 import { can, PERMISSION_LABELS, ROLE_LABELS } from '../shared/permissions.js';
 import type { SessionUser } from '../shared/types/api.js';
 
@@ -24,6 +26,8 @@ export interface AppOptions {
   ds: DataSource;
   routes?: RouteDef[];
   serveClient?: boolean;
+  /** check every JSON answer against its route's contract (server/http/responseCheck.ts): tests only */
+  checkAnswers?: boolean;
 }
 
 /** Run an async step; errors go to the error middleware, success continues only when `proceed` is set. */
@@ -35,6 +39,7 @@ const wrap =
 
 function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
   const authn = wrap(async (req, res) => {
+    res.locals[CONTRACT_LOCAL] = r.contract ?? 'legacy';
     let user: SessionUser | null = null;
     if (r.access !== 'public') {
       const session = readSession(req);
@@ -68,7 +73,7 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
 }
 
 /** Express app factory; the listener lives in main.ts so tests can drive the app with supertest. */
-export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOptions): Express {
+export function createApp({ ds, routes = allRoutes, serveClient = true, checkAnswers = config.isTest }: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', false);
@@ -109,12 +114,14 @@ export function createApp({ ds, routes = allRoutes, serveClient = true }: AppOpt
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
+  if (checkAnswers) app.use('/api', answerCheck);
   app.use('/api', express.json({ limit: config.bodyLimit }));
 
   const api = express.Router();
   for (const r of routes) mountRoute(api, ds, r);
   const openapi = buildOpenApi(routes, '1');
   api.get('/openapi.json', (_req, res) => {
+    res.locals[CONTRACT_LOCAL] = healthContract.openApi;
     res.json(openapi);
   });
   api.use('/docs', swaggerUi.serve, swaggerUi.setup(openapi, { customSiteTitle: 'Frothline API' }));

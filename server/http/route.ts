@@ -1,10 +1,12 @@
+import type { TSchema } from '@sinclair/typebox';
 import type { Request, RequestHandler, Response } from 'express';
 import type { DataSource } from 'typeorm';
-import type { Permission } from '../../shared/permissions.js';
+import type { Validated } from '../../shared/contract/schema.js';
+import type { Access, RouteContract } from '../../shared/contract/route.js';
 import type { SessionUser } from '../../shared/types/api.js';
 import type { SessionClaims } from './auth.js';
 
-export type Access = Permission | 'public' | 'signed-in';
+export type { Access } from '../../shared/contract/route.js';
 
 export interface RouteContext<B = any, Q = any, P = any> {
   user: SessionUser;
@@ -19,8 +21,9 @@ export interface RouteContext<B = any, Q = any, P = any> {
 }
 
 /**
- * One API route. `access` is mandatory: every route declares the permission it needs.
- * The handler returns the JSON answer (or undefined after writing the response itself).
+ * One mounted API route: its contract (shared/contract/*.ts) and its handler. The schemas below are the
+ * contract's (kept here for the router, the role and fuzz tests). The handler returns the JSON answer
+ * (or undefined after writing the response itself).
  */
 export interface RouteDef {
   method: 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -37,6 +40,38 @@ export interface RouteDef {
   /** open to a user who must first change a temporary password (the account routes) */
   whilePasswordChangeDue?: boolean;
   handler: (ctx: RouteContext) => Promise<unknown> | unknown;
+  /** the route's contract; every route has one (tests/api/contract.test.ts) */
+  contract?: RouteContract;
 }
 
 export const defineRoutes = (routes: RouteDef[]): RouteDef[] => routes;
+
+type Answer<R> = R extends TSchema ? R['static'] : void;
+type Maybe<T> = T | Promise<T>;
+
+/** The server side of a contract: what runs before the handler, and the handler with the contract's types. */
+export interface Implementation<C extends RouteContract> {
+  before?: RequestHandler[];
+  whilePasswordChangeDue?: boolean;
+  handler: (
+    ctx: RouteContext<Validated<C['body']>, Validated<C['query']>, Validated<C['params']>>,
+  ) => Maybe<Answer<C['response']>>;
+}
+
+/** A route from its contract and its implementation. */
+export const implement =
+  <C extends RouteContract>(contract: C) =>
+  (impl: Implementation<C>): RouteDef => ({
+    method: contract.method,
+    path: contract.path,
+    access: contract.access,
+    summary: contract.summary,
+    body: contract.body,
+    query: contract.query,
+    params: contract.params,
+    status: contract.status,
+    before: impl.before,
+    whilePasswordChangeDue: impl.whilePasswordChangeDue,
+    handler: impl.handler as RouteDef['handler'],
+    contract,
+  });

@@ -1,6 +1,7 @@
 import { Ajv, type ErrorObject, type ValidateFunction } from 'ajv';
+import { ajvDetails } from '../../shared/contract/fieldErrors.js';
 import addFormatsModule from 'ajv-formats';
-import { ValidationError, type ErrorDetail } from '../errors.js';
+import { ValidationError } from '../errors.js';
 import { textFault, withTextRules } from './textRules.js';
 
 // ajv-formats ships CommonJS; its default export is the plugin.
@@ -38,21 +39,6 @@ export const queryAjv = configure(
 
 const cache = new WeakMap<object, ValidateFunction>();
 const queryCache = new WeakMap<object, ValidateFunction>();
-
-export function ajvDetails(errors: ErrorObject[] | null | undefined, root = ''): ErrorDetail[] {
-  return (errors ?? []).map((e) => {
-    let p = `${root}${e.instancePath}`;
-    if (e.keyword === 'required') p = `${p}/${(e.params as { missingProperty: string }).missingProperty}`;
-    if (e.keyword === 'additionalProperties') p = `${p}/${(e.params as { additionalProperty: string }).additionalProperty}`;
-    const message =
-      e.keyword === 'additionalProperties'
-        ? 'is not an allowed field'
-        : e.keyword === 'required'
-          ? 'is required'
-          : (e.message ?? 'is invalid');
-    return { path: p.replace(/^\//, '').replace(/\//g, '.') || '(root)', message };
-  });
-}
 
 /** Validate `data` against `schema`, applying defaults; throws ValidationError naming each field. */
 export function validate<T>(schema: object, data: unknown, where: 'body' | 'query' | 'params' | string): T {

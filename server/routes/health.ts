@@ -1,13 +1,9 @@
 import { DB_RETRY_AFTER_SECONDS } from '../http/dbErrors.js';
-import { defineRoutes } from '../http/route.js';
-import type { HealthBody } from '../../shared/types/api.js';
+import { implement } from '../http/route.js';
+import { healthContract, type HealthBody } from '../../shared/contract/health.js';
 
-export const healthRoutes = defineRoutes([
-  {
-    method: 'get',
-    path: '/health',
-    access: 'public',
-    summary: 'Service health and database reachability (503 with Retry-After while the database is unreachable)',
+export const healthRoutes = [
+  implement(healthContract.health)({
     handler: async ({ ds, res }) => {
       let database: HealthBody['database'] = 'unreachable';
       try {
@@ -20,5 +16,5 @@ export const healthRoutes = defineRoutes([
       if (database !== 'reachable') res.status(503).set('Retry-After', String(DB_RETRY_AFTER_SECONDS));
       return body;
     },
-  },
-]);
+  }),
+];

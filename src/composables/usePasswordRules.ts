@@ -1,4 +1,4 @@
-import { PASSWORD_RULES } from '../../shared/schemas/auth';
+import { PASSWORD_RULES } from '../../shared/contract/auth';
 
 /**
  * The length checks of the server's password policy, as q-input rules (the server also checks that a

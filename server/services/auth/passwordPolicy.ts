@@ -8,7 +8,7 @@ import { ZxcvbnFactory } from '@zxcvbn-ts/core';
 import * as common from '@zxcvbn-ts/language-common';
 import * as en from '@zxcvbn-ts/language-en';
 import { ValidationError } from '../../errors.js';
-import { PASSWORD_RULES } from '../../../shared/schemas/auth.js';
+import { PASSWORD_RULES } from '../../../shared/contract/auth.js';
 
 const { minLength: PASSWORD_MIN_LENGTH, maxBytes: PASSWORD_MAX_BYTES, minScore: PASSWORD_MIN_SCORE } = PASSWORD_RULES;
 

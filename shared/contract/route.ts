@@ -1,0 +1,41 @@
+/**
+ * One contract per API route: method, path, access, and the TypeBox schemas of its params, query, body and
+ * answers. The server validates requests and (in tests) answers with them, the handler's types come from
+ * them, and the OpenAPI document (GET /api/openapi.json) is built from them (server/http/openapi.ts).
+ */
+import type { TObject, TSchema } from '@sinclair/typebox';
+import type { Permission } from '../permissions.js';
+
+export type Access = Permission | 'public' | 'signed-in';
+export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
+
+/** An answer that is a file (PDF, CSV, XLSX, image), not JSON. */
+export interface FileAnswer {
+  file: readonly string[];
+}
+export const fileAnswer = (...contentTypes: string[]): FileAnswer => ({ file: contentTypes });
+
+export interface RouteContract {
+  method: Method;
+  /** express path under /api, e.g. '/columns/:id' */
+  path: string;
+  access: Access;
+  summary: string;
+  params?: TObject;
+  query?: TObject;
+  /** JSON body */
+  body?: TSchema;
+  /** multipart/form-data body: its fields, files as `Type.String({ format: 'binary' })` (read by multer) */
+  form?: TObject;
+  /** status of success (200 unless given) */
+  status?: number;
+  /** the success answer: a JSON schema, a file, or null for 204 No Content */
+  response: TSchema | FileAnswer | null;
+  /** answers other than success whose body is not the shared ErrorBody, by status */
+  otherResponses?: Readonly<Record<number, TSchema>>;
+}
+
+export const route = <C extends RouteContract>(c: C): C => c;
+
+export const isFileAnswer = (r: RouteContract['response']): r is FileAnswer =>
+  r !== null && Array.isArray((r as { file?: unknown }).file);

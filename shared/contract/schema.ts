@@ -1,0 +1,73 @@
+/**
+ * TypeBox building blocks of the API contract (shared/contract/*.ts). A schema declared here is at once
+ * the ajv validation, the TypeScript type (`Static<>`) and a part of the OpenAPI document.
+ */
+import { Type, type SchemaOptions, type Static, type TObject, type TOptional, type TSchema } from '@sinclair/typebox';
+
+/** The bare uuid form (validation.ts refuses `urn:uuid:`). */
+export const Uuid = (o: SchemaOptions = {}) => Type.String({ format: 'uuid', ...o });
+
+/** A string from a fixed list, as one `enum` (ajv then answers "must be equal to one of the allowed values"). */
+export const StringEnum = <const T extends readonly string[]>(values: T, o: SchemaOptions = {}) =>
+  Type.Unsafe<T[number]>({ type: 'string', enum: [...values], ...o });
+
+/** A value or null, as `type: [t, 'null']` for simple types (one ajv error) and anyOf otherwise. */
+export function Nullable<T extends TSchema>(s: T) {
+  const t = (s as { type?: unknown }).type;
+  if (typeof t === 'string' && t !== 'object' && t !== 'array' && !('enum' in s))
+    return Type.Unsafe<Static<T> | null>({ ...s, type: [t, 'null'] });
+  return Type.Unsafe<Static<T> | null>({ anyOf: [s, { type: 'null' }] });
+}
+
+/** An object that refuses unknown fields: every body and every answer of the API. */
+export const Obj = <P extends Record<string, TSchema>>(props: P, o: SchemaOptions = {}) =>
+  Type.Object(props, { additionalProperties: false, ...o });
+
+/** ISO 8601 timestamp as the API sends it. */
+export const Timestamp = () => Type.String({ format: 'date-time' });
+
+declare const DEFAULTED: unique symbol;
+/** An optional field that validation fills in with `value` when absent: the handler sees it present. */
+export type TDefaulted<T extends TSchema> = TOptional<T> & { readonly [DEFAULTED]: true };
+export const Defaulted = <T extends TSchema>(s: T, value: Static<T>): TDefaulted<T> =>
+  Type.Optional(Type.Unsafe<Static<T>>({ ...s, default: value })) as unknown as TDefaulted<T>;
+
+type DefaultedKeys<P> = { [K in keyof P]: P[K] extends { readonly [DEFAULTED]: true } ? K : never }[keyof P];
+type DefaultedPart<P> = { [K in DefaultedKeys<P>]-?: P[K] extends TSchema ? Exclude<P[K]['static'], undefined> : never };
+/** What a handler receives after validation: Static<S> with the defaulted fields present. */
+export type Validated<S> =
+  S extends TObject<infer P>
+    ? [DefaultedKeys<P>] extends [never]
+      ? S['static']
+      : Omit<S['static'], DefaultedKeys<P>> & DefaultedPart<P>
+    : S extends TSchema
+      ? S['static']
+      : Record<string, never>;
+
+/** One field error: `path` names the field (dotted, e.g. `section.weirHeight_mm`; `(root)` for the whole). */
+export const ErrorDetail = Obj({ path: Type.String(), message: Type.String() });
+/** Body of every error answer of the API. */
+export const ErrorBody = Obj(
+  { error: Type.String(), details: Type.Optional(Type.Array(ErrorDetail)) },
+  { title: 'Error', description: 'An error: what failed, and for bad input each field and its fault' },
+);
+export type ErrorBody = Static<typeof ErrorBody>;
+
+/** One page of a list. */
+export const PageOf = <T extends TSchema>(item: T) =>
+  Obj({ items: Type.Array(item), total: Type.Integer({ minimum: 0 }), page: Type.Integer(), pageSize: Type.Integer() });
+
+/** `{ items }`: a whole (short) list. */
+export const ItemsOf = <T extends TSchema>(item: T) => Obj({ items: Type.Array(item) });
+
+/** `{ id }` path parameters. */
+export const IdParams = Obj({ id: Uuid() });
+
+/** page, pageSize (bounded) and a search text. */
+export const pageFields = {
+  page: Defaulted(Type.Integer({ minimum: 1, maximum: 1000000 }), 1),
+  pageSize: Defaulted(Type.Integer({ minimum: 1, maximum: 200 }), 50),
+};
+export const PageQuery = Obj({ ...pageFields, q: Type.Optional(Type.String({ maxLength: 200 })) });
+
+export const Ok = Obj({ ok: Type.Literal(true) });
