@@ -1,0 +1,106 @@
+/**
+ * The published OpenAPI document makes a typed client: openapi-typescript generates the types from the live
+ * document (served by the app), tsc type-checks a small openapi-fetch client against them, and that client
+ * then calls real routes, whose answers are checked against the document's own answer schemas.
+ */
+import { Ajv } from 'ajv';
+import addFormatsModule from 'ajv-formats';
+import { execFile } from 'node:child_process';
+import { copyFileSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import type { AddressInfo } from 'node:net';
+import type { Server } from 'node:http';
+import path from 'node:path';
+import { promisify } from 'node:util';
+import openapiTS, { astToString } from 'openapi-typescript';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { makeUser, setupApp, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
+
+const run = promisify(execFile);
+
+/** tests/fixtures/typedClient/client.ts (type-checked on its own, against the generated types) */
+type Exercise = (
+  base: string,
+  email: string,
+  password: string,
+) => Promise<{
+  role: string;
+  status?: string;
+  firstUserVersion?: number;
+  badUserPaths?: string[];
+  answers: { path: string; method: string; status: number; body: unknown }[];
+}>;
+const addFormats = addFormatsModule as unknown as (ajv: Ajv) => Ajv;
+const root = path.resolve(import.meta.dirname, '../..');
+
+let ctx: TestContext;
+let server: Server;
+let base: string;
+let dir: string;
+beforeAll(async () => {
+  ctx = await setupApp();
+  server = ctx.app.listen(0, '127.0.0.1');
+  await new Promise((r) => server.once('listening', r));
+  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  // inside node_modules/.cache so the client resolves openapi-fetch from the project
+  dir = mkdtempSync(path.join(root, 'node_modules/.cache/typed-client-'));
+});
+afterAll(async () => {
+  rmSync(dir, { recursive: true, force: true });
+  await new Promise((r) => server.close(r));
+  await ctx.close();
+});
+
+describe('a client generated from the published OpenAPI document', () => {
+  let doc: {
+    paths: Record<string, Record<string, { responses: Record<string, { content?: Record<string, { schema: object }> }> }>>;
+    components: object;
+  };
+
+  it('generates types from the live document and type-checks a client against them', async () => {
+    doc = (await (await fetch(`${base}/api/openapi.json`)).json()) as typeof doc;
+    const types = astToString(await openapiTS(doc as unknown as Parameters<typeof openapiTS>[0]));
+    expect(types).toMatch(/"\/api\/runs": \{/);
+    writeFileSync(path.join(dir, 'api.d.ts'), types);
+    copyFileSync(path.join(root, 'tests/fixtures/typedClient/client.ts'), path.join(dir, 'client.ts'));
+    writeFileSync(
+      path.join(dir, 'tsconfig.json'),
+      JSON.stringify({
+        compilerOptions: {
+          strict: true,
+          noEmit: true,
+          target: 'ES2022',
+          module: 'ESNext',
+          moduleResolution: 'bundler',
+          lib: ['ES2022', 'DOM', 'DOM.Iterable'],
+          types: [],
+          skipLibCheck: true,
+        },
+        files: ['client.ts', 'api.d.ts'],
+      }),
+    );
+    const tsc = path.join(root, 'node_modules/typescript/bin/tsc');
+    const out = await run(process.execPath, [tsc, '-p', path.join(dir, 'tsconfig.json')]).then(
+      () => '',
+      (e: { stdout?: string }) => e.stdout ?? String(e),
+    );
+    expect(out, 'tsc on the generated types and the client').toBe('');
+  }, 120000);
+
+  it('calls real routes through it; every answer matches the document’s schema for its status', async () => {
+    const admin = await makeUser(ctx.ds, 'admin');
+    const { exercise } = (await import(path.join(dir, 'client.ts'))) as { exercise: Exercise };
+    const r = await exercise(base, admin.email, TEST_PASSWORD);
+    expect(r.role).toBe('admin');
+    expect(r.status).toBe('ok');
+    expect(r.firstUserVersion).toBeGreaterThanOrEqual(1);
+    expect(r.badUserPaths).toEqual(['id']);
+    const ajv = addFormats(new Ajv({ allErrors: true, strict: false }));
+    ajv.addSchema({ components: doc.components }, 'doc');
+    for (const a of r.answers) {
+      const schema = doc.paths[a.path]?.[a.method]?.responses[String(a.status)]?.content?.['application/json']?.schema;
+      expect(schema, `${a.method} ${a.path} ${a.status} has a schema`).toBeDefined();
+      const check = ajv.compile(JSON.parse(JSON.stringify(schema).replaceAll('"#/components/', '"doc#/components/')) as object);
+      expect(check(a.body), `${a.method} ${a.path} ${a.status}: ${JSON.stringify(check.errors)}`).toBe(true);
+    }
+  });
+});
