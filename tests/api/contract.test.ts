@@ -77,12 +77,21 @@ const NOT_YET_CONVERTED = new Set<string>([
   'PUT /inspections/:id/trays/:tray/:pass',
   'POST /inspections/:id/punch',
   'PATCH /inspections/:id/punch/:itemId',
+  'POST /inspections/:id/punch/:itemId/void',
   'POST /inspections/:id/sign/inspector',
   'POST /inspections/:id/sign/engineer',
   'POST /inspections/:id/as-found',
   'GET /inspections/:id/report.pdf',
   'POST /inspections/:id/photos',
   'GET /inspections/:id/photos/:photoId',
+  'GET /columns/:id/evidence',
+  'POST /columns/:id/evidence',
+  'GET /evidence/:id',
+  'GET /evidence/:id/reading',
+  'PATCH /evidence/:id',
+  'DELETE /evidence/:id',
+  'POST /columns/:id/evidence/scan-imports',
+  'POST /columns/:id/evidence/scan-imports/commit',
 ]);
 
 let ctx: TestContext;
