@@ -12,6 +12,7 @@ import { InspectionTray } from './InspectionTray.js';
 import { PunchItemEntity } from './PunchItem.js';
 import { ProcessUnit } from './ProcessUnit.js';
 import { PumpAroundStudy } from './PumpAroundStudy.js';
+import { HeatPlan } from './HeatPlan.js';
 import { Site } from './Site.js';
 import { SiteMember } from './SiteMember.js';
 import { TowerColumn } from './TowerColumn.js';
@@ -21,8 +22,8 @@ export { MailOutbox };
 export { ImportPreviewEntity };
 export { Inspection, InspectionPhoto, InspectionTray, PunchItemEntity };
 export { LoadCase, PumpAround, RatingRun, TraySection };
-export { PumpAroundStudy };
 export { FieldEvidence };
+export { HeatPlan, PumpAroundStudy };
 export { AuditEntry, ProcessUnit, Site, SiteMember, TowerColumn, User };
 
 /** Every entity; add new ones here. */
@@ -35,6 +36,7 @@ export const entities = [
   AuditEntry,
   MailOutbox,
   PumpAroundStudy,
+  HeatPlan,
   TraySection,
   PumpAround,
   LoadCase,
