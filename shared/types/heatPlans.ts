@@ -1,10 +1,11 @@
 /**
  * Stored heat-recovery plans (issue 17): request bodies and answers of /columns/:id/heat-plans and
  * /heat-plans/:id, shared by the server and the client. SI units; the unit is part of each field name.
- * The engine's own payloads are in shared/types/heatPlan.ts.
+ * The engine's own payloads are in shared/types/heatPlan.ts; the store keeps them by field name.
  */
 import type { CheckName, CheckStatus, MethodOptions } from './rating.js';
 import type { DutySweep } from './pumpAround.js';
+import type { BoundaryPoint, HeatPlanInput, HeatPlanResult, PlanPoint, PlanSuggestion } from './heatPlan.js';
 import type { ReviewEntry, ReviewStatus } from './runs.js';
 
 export type HeatPlanStatus = ReviewStatus;
@@ -31,11 +32,11 @@ export interface CreateHeatPlanBody {
   /** two or three of the column's pump-arounds, in the order of the map's axes */
   pumpArounds: HeatPlanPumpAroundChoice[];
   latentHeat_kJ_kg: number;
-  /** heat is counted as useful above this temperature [°C] (what the preheat train can take) */
+  /** heat counts as useful above this temperature [°C] (what the preheat train can take) */
   usefulAboveTemperature_C: number;
   /** fraction of the dry-out duty kept as margin; default 0.7 (common practice) */
   margin?: number;
-  /** liquid-to-vapour ratio per section flagged below this fraction of the base case's; default 0.8 */
+  /** a section's liquid-to-vapour ratio is flagged below this fraction of the base case's; default 0.8 */
   liquidToVapourThreshold?: number;
   /** two or more load cases tagged with these pump-arounds' duties (simulation cases) for the calibration fit */
   simulationCaseIds?: string[];
@@ -54,14 +55,14 @@ export interface HeatPlanSource {
   request: CreateHeatPlanBody;
 }
 
-/** What is stored as the inputs snapshot: the exact engine input (opaque here) and its source. */
+/** What is stored as the inputs snapshot: the exact engine input and its source. */
 export interface HeatPlanInputsSnapshot {
   source: HeatPlanSource;
-  input: unknown;
+  input: HeatPlanInput;
 }
 
-/** One tray at one duty point: traffic and, per check (in `checkNames` order), percent of limit and status. */
-export interface PlanTrayPoint {
+/** One tray at one duty point, stored: traffic and, per check (in `checkNames` order), percent of limit and status. */
+export interface SlimPlanTray {
   tray: number;
   vapourMassFlow_kg_h: number;
   liquidMassFlow_kg_h: number;
@@ -71,93 +72,46 @@ export interface PlanTrayPoint {
   controllingCheck: CheckName;
 }
 
-/** One point of the duty grid (or a key point), summarised for the map. */
-export interface PlanPointSummary {
-  duties_kW: number[];
-  condenserDutyChange_kW: number;
-  recoveredHeat_kW: number;
-  recoveredAboveTemperature_kW: number;
-  /** no tray dry and no monitored check over its limit */
-  feasible: boolean;
-  /** highest percent of limit over all trays and checks, with where */
+/** A point of the duty grid for the map: the engine's point without its trays, plus the worst tray. */
+export interface PlanGridPoint extends Omit<PlanPoint, 'trays'> {
+  /** highest percent of limit over every tray and check */
   worstPercent: number;
   worstTray: number | null;
   worstCheck: CheckName | null;
-  dryTrays: number[];
 }
 
-export interface PlanPoint extends PlanPointSummary {
-  trays: PlanTrayPoint[];
-}
-
-/** A point on the edge of the feasible region: the tray and the check (or 'dry-out') that bounds it there. */
-export interface PlanBoundaryPoint {
-  duties_kW: number[];
-  tray: number;
-  check: string;
-}
-
-export interface PlanSuggestion {
-  duties_kW: number[];
-  recoveredHeat_kW: number;
-  recoveredAboveTemperature_kW: number;
-  condenserDutyChange_kW: number;
-}
-
-/** Fractionation signal: liquid-to-vapour ratio of a section at a point against the base case. */
-export interface PlanSectionLV {
-  section: string;
-  base: number;
-  atPoint: number;
-  /** atPoint / base below the threshold */
-  flagged: boolean;
-}
-
-/** Model against one simulation case, tray by tray, and the fit's quality. */
-export interface PlanCalibration {
-  cases: {
-    loadCaseId: string;
-    name: string;
-    duties_kW: number[];
-    trays: {
-      tray: number;
-      modelVapour_kg_h: number;
-      simVapour_kg_h: number;
-      modelLiquid_kg_h: number;
-      simLiquid_kg_h: number;
-    }[];
-  }[];
-  /** root-mean-square relative difference of traffic, model against simulation, after the fit */
-  rmsRelative: number;
-  maxRelative: number;
-  fittedLatentHeat_kJ_kg: number[];
-  summary: string;
+export interface SlimPlanPoint extends PlanGridPoint {
+  trays: SlimPlanTray[];
 }
 
 export type PlanKeyKind = 'base' | 'suggestion';
 
-/** The stored result; grid trays are kept per point and served one point at a time. */
-export interface StoredHeatPlanResult {
-  checkNames: CheckName[];
-  pumpAroundNames: string[];
-  /** the duties of each axis, in the input's pump-around order */
-  axes: number[][];
-  grid: PlanPointSummary[];
-  gridTrays: PlanTrayPoint[][];
-  boundary: PlanBoundaryPoint[];
-  suggestion: PlanSuggestion | null;
-  marginSensitivity: { margin: number; suggestion: PlanSuggestion | null }[];
-  keyPoints: { kind: PlanKeyKind; point: PlanPoint }[];
-  heatLevels: { name: string; drawTemperature_C: number; returnTemperature_C: number }[];
-  sectionLV: PlanSectionLV[];
-  calibration: PlanCalibration | null;
-  margin: number;
-  usefulAboveTemperature_C: number;
-  notes: string[];
+/** Model against simulation, tray by tray, and the fit's quality (from the engine's calibration). */
+export interface PlanCalibrationView {
+  /** one line stating the fit quality, for pages and the report */
+  summary: string;
+  /** the fitted values by name (latent heat per zone, property drift) */
+  fitted: { name: string; value: number; unit: string }[];
+  rmsRelative: number | null;
+  cases: {
+    loadCaseId: string;
+    name: string;
+    duties_kW: number[];
+    trays: { tray: number; modelVapour_kg_h: number; simVapour_kg_h: number; modelLiquid_kg_h: number; simLiquid_kg_h: number }[];
+  }[];
 }
 
-/** The plan as the page reads it: the grid without per-tray detail (GET /heat-plans/:id/points/:index). */
-export type HeatPlanResultView = Omit<StoredHeatPlanResult, 'gridTrays'>;
+/** The stored result: the engine's result by field name with grid points summarised (their trays are stored apart). */
+export interface StoredHeatPlanResult extends Omit<HeatPlanResult, 'points'> {
+  checkNames: CheckName[];
+  /** duties of each axis, in the input's pump-around order */
+  axes: number[][];
+  grid: PlanGridPoint[];
+  keyPoints: { kind: PlanKeyKind; point: SlimPlanPoint }[];
+  calibration: PlanCalibrationView | null;
+}
+
+export type { BoundaryPoint, PlanSuggestion };
 
 export interface HeatPlanSummary {
   id: string;
@@ -177,7 +131,7 @@ export interface HeatPlanSummary {
 export interface HeatPlanRecord extends HeatPlanSummary {
   columnTag: string;
   inputs: HeatPlanInputsSnapshot;
-  result: HeatPlanResultView;
+  result: StoredHeatPlanResult;
   reviewerId: string | null;
   reviewerName: string | null;
   reviewComment: string | null;

@@ -21,7 +21,7 @@ beforeAll(async () => {
 });
 afterAll(() => ctx.close());
 
-const put = (agent: Agent, id: string, body: unknown) => agent.put(`/api/load-cases/${id}/pump-around-duties`).send(body);
+const put = (agent: Agent, id: string, body: object) => agent.put(`/api/load-cases/${id}/pump-around-duties`).send(body);
 const version = async (id: string) => (await engineer.get(`/api/load-cases/${id}`)).body.version as number;
 
 describe('load-case pump-around duty tags', () => {

@@ -13,6 +13,7 @@ import { PunchItemEntity } from './PunchItem.js';
 import { ProcessUnit } from './ProcessUnit.js';
 import { PumpAroundStudy } from './PumpAroundStudy.js';
 import { HeatPlan } from './HeatPlan.js';
+import { HeatPlanPoint } from './HeatPlanPoint.js';
 import { Site } from './Site.js';
 import { SiteMember } from './SiteMember.js';
 import { TowerColumn } from './TowerColumn.js';
@@ -23,7 +24,7 @@ export { ImportPreviewEntity };
 export { Inspection, InspectionPhoto, InspectionTray, PunchItemEntity };
 export { LoadCase, PumpAround, RatingRun, TraySection };
 export { FieldEvidence };
-export { HeatPlan, PumpAroundStudy };
+export { HeatPlan, HeatPlanPoint, PumpAroundStudy };
 export { AuditEntry, ProcessUnit, Site, SiteMember, TowerColumn, User };
 
 /** Every entity; add new ones here. */
@@ -37,6 +38,7 @@ export const entities = [
   MailOutbox,
   PumpAroundStudy,
   HeatPlan,
+  HeatPlanPoint,
   TraySection,
   PumpAround,
   LoadCase,

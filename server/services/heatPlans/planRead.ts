@@ -1,10 +1,11 @@
 /** Reading stored heat-recovery plans: lists for the column page, one plan for its page, one grid point's trays. */
 import type { DataSource, EntityManager } from 'typeorm';
 import { HeatPlan } from '../../db/entities/HeatPlan.js';
+import { HeatPlanPoint } from '../../db/entities/HeatPlanPoint.js';
 import { NotFoundError, ValidationError } from '../../errors.js';
 import { assertColumnVisible, canSeeColumn } from '../access.js';
 import type { SessionUser } from '../../../shared/types/api.js';
-import type { HeatPlanRecord, HeatPlanSummary, PlanPoint } from '../../../shared/types/heatPlans.js';
+import type { HeatPlanRecord, HeatPlanSummary, SlimPlanPoint } from '../../../shared/types/heatPlans.js';
 
 interface PlanRow {
   id: string;
@@ -81,12 +82,11 @@ async function storedPlan(db: DataSource | EntityManager, id: string): Promise<H
 export async function getHeatPlan(db: DataSource | EntityManager, user: SessionUser, id: string): Promise<HeatPlanRecord> {
   const r = await visiblePlanRow(db, user, id);
   const full = await storedPlan(db, id);
-  const { gridTrays: _trays, ...result } = full.results;
   return {
     ...toSummary(r),
     columnTag: r.column_tag,
     inputs: full.inputs,
-    result,
+    result: full.results,
     reviewerId: r.reviewer_id,
     reviewerName: r.reviewer_name,
     reviewComment: r.review_comment,
@@ -97,13 +97,14 @@ export async function getHeatPlan(db: DataSource | EntityManager, user: SessionU
 }
 
 /** One grid point with every tray's traffic and percent of limit (the map's click). */
-export async function getHeatPlanPoint(db: DataSource, user: SessionUser, id: string, index: number): Promise<PlanPoint> {
+export async function getHeatPlanPoint(db: DataSource, user: SessionUser, id: string, index: number): Promise<SlimPlanPoint> {
   await visiblePlanRow(db, user, id);
   const { results } = await storedPlan(db, id);
   const summary = results.grid[index];
-  if (!summary)
+  const row = summary ? await db.getRepository(HeatPlanPoint).findOneBy({ planId: id, idx: index }) : null;
+  if (!summary || !row)
     throw new ValidationError('No such grid point', [
       { path: 'index', message: `is ${index}; the plan's grid has points 0 to ${results.grid.length - 1}` },
     ]);
-  return { ...summary, trays: results.gridTrays[index] ?? [] };
+  return { ...summary, trays: row.trays };
 }
