@@ -38,6 +38,8 @@ export interface CreateHeatPlanBody {
   margin?: number;
   /** a section's liquid-to-vapour ratio is flagged below this fraction of the base case's; default 0.8 */
   liquidToVapourThreshold?: number;
+  /** overhead condenser duty of the base case [kW], to show the duty left; optional */
+  baseCondenserDuty_kW?: number;
   /** two or more load cases tagged with these pump-arounds' duties (simulation cases) for the calibration fit */
   simulationCaseIds?: string[];
   /** true when the base case's zone liquid carries the circulation (as a rating case does) */
