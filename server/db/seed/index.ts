@@ -9,6 +9,7 @@ import { seedDemoScenario } from './demoScenario.js';
 import { seedInspection } from './inspection.js';
 import { seedPlant } from './plant.js';
 import { seedStudy } from './study.js';
+import { seedHeatPlan } from './heatPlan.js';
 
 /** Seed the invented demo scenario once: skipped when the demo admin already exists. */
 export async function seedDemo(ds: DataSource): Promise<boolean> {
@@ -21,6 +22,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     await seedDemoScenario(em, plant.column, users);
     await seedInspection(em, plant.column.id, users);
     await seedStudy(em, plant.column.id, users);
+    await seedHeatPlan(em, plant.column.id, users);
     // Later seed steps (sections, load cases, runs, inspections) hang off the demo plant here.
     void plant;
   });
