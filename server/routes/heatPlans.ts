@@ -3,6 +3,8 @@ import { putPumpAroundDuties } from '../services/heatPlans/dutyTags.js';
 import { getHeatPlan, getHeatPlanPoint, listHeatPlans } from '../services/heatPlans/planRead.js';
 import { reviewHeatPlan } from '../services/heatPlans/planReview.js';
 import { createHeatPlan } from '../services/heatPlans/plans.js';
+import { exportHeatPlan, heatPlanReportPdf } from '../services/heatPlans/planReportFiles.js';
+import { exportQuery } from '../../shared/schemas/loads.js';
 import type { ReviewAction } from '../services/reviewRules.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import {
@@ -72,6 +74,32 @@ export const heatPlanRoutes = defineRoutes([
     handler: ({ ds, user, params }) => {
       const p = params as Id & { index: number };
       return getHeatPlanPoint(ds, user, p.id, p.index);
+    },
+  },
+  {
+    method: 'get',
+    path: '/heat-plans/:id/report.pdf',
+    access: 'read',
+    summary:
+      'Printable plan report (PDF): inputs, suggested split, margin table, limits by tray and check, fit, cautions, methods',
+    params: uuidParams,
+    handler: async ({ ds, user, params, res }) => {
+      const { pdf, filename } = await heatPlanReportPdf(ds, user, (params as Id).id);
+      res.setHeader('Content-Type', 'application/pdf');
+      res.setHeader('Content-Disposition', `inline; filename="${filename}"`);
+      res.end(pdf);
+    },
+  },
+  {
+    method: 'get',
+    path: '/heat-plans/:id/export',
+    access: 'read',
+    summary: 'Download the plan (inputs, suggestion, margin table, limits, traffic at the suggestion, cautions) as CSV or XLSX',
+    params: uuidParams,
+    query: exportQuery,
+    handler: async ({ ds, user, params, query, res }) => {
+      const file = await exportHeatPlan(ds, user, (params as Id).id, (query as { format: 'csv' | 'xlsx' }).format);
+      res.attachment(file.fileName).type(file.contentType).send(file.body);
     },
   },
   review('submit', 'ratings.run', 'Submit a draft or returned plan for review (author)'),

@@ -111,6 +111,8 @@ export interface StoredHeatPlanResult extends Omit<HeatPlanResult, 'points'> {
   grid: PlanGridPoint[];
   keyPoints: { kind: PlanKeyKind; point: SlimPlanPoint }[];
   calibration: PlanCalibrationView | null;
+  /** the correlations the ratings used (method ids), for the methods and sources of the report */
+  methodIds: string[];
 }
 
 export type { BoundaryPoint, PlanSuggestion };

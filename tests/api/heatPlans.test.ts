@@ -3,6 +3,7 @@
  * point's trays, reviewed with separation of duties, hidden from other sites, bad input named by field.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { planReportDoc } from '../../server/services/heatPlans/planReportFiles.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { EXAMPLE } from './study-fixture.js';
 import { makeHeatPlanColumn, type HeatPlanFixture } from './heatPlan-fixture.js';
@@ -132,6 +133,65 @@ describe('a stored heat-recovery plan', () => {
     expect((await viewer.get(`/api/heat-plans/${plan.id}`)).status).toBe(200);
     expect((await create(viewer, planBody(fx))).status).toBe(403);
     expect((await create(outsider, planBody(fx))).status).toBe(404);
+  });
+});
+
+/** The text a PDF's reader reads: strings under text, lists, stacks and table bodies (not styles or charts). */
+function readerText(node: unknown): string[] {
+  if (typeof node === 'string') return [node];
+  if (Array.isArray(node)) return node.flatMap(readerText);
+  if (node && typeof node === 'object') {
+    const o = node as Record<string, unknown>;
+    return ['text', 'ul', 'ol', 'stack', 'columns', 'table', 'body'].flatMap((k) => (k in o ? readerText(o[k]) : []));
+  }
+  return [];
+}
+const binary = (r: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  r.on('data', (c: Buffer) => chunks.push(c));
+  r.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+
+describe('the plan report and export', () => {
+  let plan: HeatPlanRecord;
+  beforeAll(async () => {
+    // a load-case name that a spreadsheet would run as a formula
+    await ctx.ds.query(`UPDATE load_cases SET name = '=HYPERLINK("http://x.test")' WHERE id = $1`, [fx.loadCaseId]);
+    plan = (await create(author, planBody(fx))).body;
+  });
+
+  it('is a PDF with the cautions, the suggestion, the fit, methods with their sources; no drafting notes or internal ids', async () => {
+    const res = await viewer.get(`/api/heat-plans/${plan.id}/report.pdf`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    expect((res.body as Buffer).subarray(0, 4).toString('latin1')).toBe('%PDF');
+    const text = readerText(planReportDoc(plan, 'SI').content);
+    const all = text.join('\n');
+    expect(all).toMatch(/management-of-change review/);
+    expect(all).toMatch(/internals vendor and licensed engineers/);
+    expect(all).toMatch(/Screening estimate/);
+    expect(all).toMatch(/No simulation cases were used/);
+    expect(all).toMatch(/after Lieberman/); // the traffic model's source, stated once
+    expect(all.match(/after Lieberman/g)).toHaveLength(1);
+    expect(all).toMatch(/Fair/); // the jet-flood correlation's source in the methods table
+    for (const re of [/from memory/i, /to confirm/i, /\brecalled\b/i, /\[seen/i, /\.md\b/i]) expect(all).not.toMatch(re);
+    // internal ids such as jetFlood or downcomerBackup (units such as kJ or kW are not ids)
+    expect(text.filter((t) => /\b[a-z]{2,}[A-Z][a-z]+/.test(t))).toEqual([]);
+  });
+
+  it('exports CSV with formulas escaped and XLSX, both with the cautions', async () => {
+    const csv = await viewer.get(`/api/heat-plans/${plan.id}/export?format=csv`);
+    expect(csv.status).toBe(200);
+    expect(csv.headers['content-type']).toMatch(/text\/csv/);
+    expect(csv.text).toContain(`"'=HYPERLINK(""http://x.test"")"`);
+    expect(csv.text).toMatch(/management-of-change review/);
+    expect(csv.text).toMatch(/As the margin changes/);
+    const xlsx = await viewer.get(`/api/heat-plans/${plan.id}/export?format=xlsx`).buffer(true).parse(binary);
+    expect(xlsx.status).toBe(200);
+    expect((xlsx.body as Buffer).subarray(0, 2).toString('latin1')).toBe('PK');
+    const bad = await viewer.get(`/api/heat-plans/${plan.id}/export?format=pdf`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.details[0].path).toBe('format');
   });
 });
 

@@ -64,7 +64,11 @@ export function planAxes(input: HeatPlanInput): number[][] {
 
 /** The stored plan: the engine run with every grid point slimmed as it is rated; trays per point returned apart. */
 export function runStoredPlan(input: HeatPlanInput): { result: StoredHeatPlanResult; gridTrays: SlimPlanTray[][] } {
-  const r = runHeatPlanWith(input, slimPlanPoint);
+  const methods = new Set<string>();
+  const r = runHeatPlanWith(input, (p) => {
+    for (const t of p.trays) for (const c of Object.values(t.rating.checks)) methods.add(c.method);
+    return slimPlanPoint(p);
+  });
   const { points, ...rest } = r;
   const keyPoints: StoredHeatPlanResult['keyPoints'] = [];
   const nearest = (duties: number[]) =>
@@ -79,6 +83,7 @@ export function runStoredPlan(input: HeatPlanInput): { result: StoredHeatPlanRes
       grid: points.map(gridSummary),
       keyPoints,
       calibration: null,
+      methodIds: [...methods].sort(),
     },
     gridTrays: points.map((p) => p.trays),
   };
