@@ -3,9 +3,9 @@ import { putPumpAroundDuties } from '../services/heatPlans/dutyTags.js';
 import { getHeatPlan, getHeatPlanPoint, listHeatPlans } from '../services/heatPlans/planRead.js';
 import { reviewHeatPlan } from '../services/heatPlans/planReview.js';
 import { createHeatPlan } from '../services/heatPlans/plans.js';
-import { exportHeatPlan, heatPlanReportPdf } from '../services/heatPlans/planReportFiles.js';
+import { exportHeatPlan, heatPlanReportPdf } from '../services/reports/heatPlanReportFiles.js';
 import { exportQuery } from '../../shared/schemas/loads.js';
-import type { ReviewAction } from '../services/reviewRules.js';
+import type { ReviewAction } from '../services/studies/reviewRules.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import {
   createHeatPlanSchema,

@@ -3,7 +3,7 @@
  * point's trays, reviewed with separation of duties, hidden from other sites, bad input named by field.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { planReportDoc } from '../../server/services/heatPlans/planReportFiles.js';
+import { planReportDoc } from '../../server/services/reports/heatPlanReportFiles.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { EXAMPLE } from './study-fixture.js';
 import { makeHeatPlanColumn, type HeatPlanFixture } from './heatPlan-fixture.js';
@@ -81,7 +81,14 @@ describe('a stored heat-recovery plan', () => {
     // draw temperature of the top pump-around taken from the base case's draw tray (tray 9: 180 °C)
     expect(plan.inputs.input.pumpArounds[0]!.drawTemperature_C).toBe(180);
     expect(plan.inputs.input.pumpArounds[1]!.drawTemperature_C).toBe(221);
-    expect(r.keyPoints.map((k) => k.kind)).toContain('base');
+    // the current operation is rated at its own duties, between the grid nodes (3000, 4200, 5400 … kW)
+    const base = r.keyPoints.find((k) => k.kind === 'base')!.point;
+    expect(base.duties_kW).toEqual([5200, 4000]);
+    expect(base.trays.find((t) => t.tray === 16)!.vapourMassFlow_kg_h).toBeCloseTo(
+      EXAMPLE.trays.find((t) => t.tray === 16)!.vapourMassFlow_kg_h,
+      6,
+    );
+    if (r.suggestion) expect(r.keyPoints.find((k) => k.kind === 'suggestion')!.point.duties_kW).toEqual(r.suggestion.duties_kW);
     const listed = await author.get(`/api/columns/${fx.columnId}/heat-plans`);
     expect(listed.body.map((p: { id: string }) => p.id)).toContain(plan.id);
   });
@@ -146,11 +153,16 @@ function readerText(node: unknown): string[] {
   }
   return [];
 }
-const binary = (r: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  r.on('data', (c: Buffer) => chunks.push(c));
-  r.on('end', () => cb(null, Buffer.concat(chunks)));
-};
+/** GET a binary answer (PDF, XLSX) as a Buffer. */
+const getBinary = (agent: Agent, url: string) =>
+  agent
+    .get(url)
+    .buffer(true)
+    .parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
 
 describe('the plan report and export', () => {
   let plan: HeatPlanRecord;
@@ -161,7 +173,7 @@ describe('the plan report and export', () => {
   });
 
   it('is a PDF with the cautions, the suggestion, the fit, methods with their sources; no drafting notes or internal ids', async () => {
-    const res = await viewer.get(`/api/heat-plans/${plan.id}/report.pdf`).buffer(true).parse(binary);
+    const res = await getBinary(viewer, `/api/heat-plans/${plan.id}/report.pdf`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     expect((res.body as Buffer).subarray(0, 4).toString('latin1')).toBe('%PDF');
@@ -186,7 +198,7 @@ describe('the plan report and export', () => {
     expect(csv.text).toContain(`"'=HYPERLINK(""http://x.test"")"`);
     expect(csv.text).toMatch(/management-of-change review/);
     expect(csv.text).toMatch(/As the margin changes/);
-    const xlsx = await viewer.get(`/api/heat-plans/${plan.id}/export?format=xlsx`).buffer(true).parse(binary);
+    const xlsx = await getBinary(viewer, `/api/heat-plans/${plan.id}/export?format=xlsx`);
     expect(xlsx.status).toBe(200);
     expect((xlsx.body as Buffer).subarray(0, 2).toString('latin1')).toBe('PK');
     const bad = await viewer.get(`/api/heat-plans/${plan.id}/export?format=pdf`);

@@ -5,9 +5,9 @@
 import type { DataSource } from 'typeorm';
 import { LoadCase } from '../../db/entities/LoadCase.js';
 import { ValidationError } from '../../errors.js';
-import { audit } from '../audit.js';
-import { assertVersion, visibleChild } from '../columnsCommon.js';
-import { toLoadCaseRecord } from '../loadsRead.js';
+import { audit } from '../audit/audit.js';
+import { assertVersion, visibleChild } from '../columns/columnsCommon.js';
+import { toLoadCaseRecord } from '../loads/loadsRead.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { LoadCaseRecord, PutPumpAroundDutiesBody } from '../../../shared/types/loads.js';
 

@@ -6,7 +6,7 @@
  */
 import type { DataSource, EntityManager } from 'typeorm';
 import { ValidationError, type ErrorDetail } from '../../errors.js';
-import { netZoneLiquid } from '../studyInputs.js';
+import { netZoneLiquid } from '../studies/studyInputs.js';
 import type { TrayNumbering } from '../../../shared/types/columns.js';
 import type { HeatPlanInput, PlanPumpAround } from '../../../shared/types/heatPlan.js';
 import type { CreateHeatPlanBody, HeatPlanSource } from '../../../shared/types/heatPlans.js';

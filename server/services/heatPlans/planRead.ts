@@ -3,7 +3,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { HeatPlan } from '../../db/entities/HeatPlan.js';
 import { HeatPlanPoint } from '../../db/entities/HeatPlanPoint.js';
 import { NotFoundError, ValidationError } from '../../errors.js';
-import { assertColumnVisible, canSeeColumn } from '../access.js';
+import { assertColumnVisible, canSeeColumn } from '../access/access.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { HeatPlanRecord, HeatPlanSummary, SlimPlanPoint } from '../../../shared/types/heatPlans.js';
 

@@ -7,7 +7,7 @@
 import { CHECK_NAMES, type CheckName } from '../../../shared/types/rating.js';
 import type { HeatPlanInput, PlanPoint } from '../../../shared/types/heatPlan.js';
 import type { PlanGridPoint, SlimPlanPoint, SlimPlanTray, StoredHeatPlanResult } from '../../../shared/types/heatPlans.js';
-import { runHeatPlanWith } from '../../engine/heatPlan/index.js';
+import { heatPlanPointAt, runHeatPlanWith } from '../../engine/heatPlan/index.js';
 
 const round2 = (x: number): number => Math.round(x * 100) / 100;
 
@@ -70,11 +70,11 @@ export function runStoredPlan(input: HeatPlanInput): { result: StoredHeatPlanRes
     return slimPlanPoint(p);
   });
   const { points, ...rest } = r;
-  const keyPoints: StoredHeatPlanResult['keyPoints'] = [];
-  const nearest = (duties: number[]) =>
-    points.reduce((best, p) => (dist(p.duties_kW, duties) < dist(best.duties_kW, duties) ? p : best), points[0]!);
-  keyPoints.push({ kind: 'base', point: nearest(r.baseDuties_kW) });
-  if (r.suggestion) keyPoints.push({ kind: 'suggestion', point: nearest(r.suggestion.duties_kW) });
+  // the base and the suggestion rated at their own duties (they lie between grid nodes)
+  const keyPoints: StoredHeatPlanResult['keyPoints'] = [
+    { kind: 'base', point: slimPlanPoint(heatPlanPointAt(input, r.baseDuties_kW)) },
+  ];
+  if (r.suggestion) keyPoints.push({ kind: 'suggestion', point: slimPlanPoint(heatPlanPointAt(input, r.suggestion.duties_kW)) });
   return {
     result: {
       ...rest,
@@ -88,5 +88,3 @@ export function runStoredPlan(input: HeatPlanInput): { result: StoredHeatPlanRes
     gridTrays: points.map((p) => p.trays),
   };
 }
-
-const dist = (a: number[], b: number[]) => a.reduce((s, x, i) => s + (x - b[i]!) ** 2, 0);

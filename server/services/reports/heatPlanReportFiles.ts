@@ -2,12 +2,12 @@
 import { stringify } from 'csv-stringify/sync';
 import ExcelJS from 'exceljs';
 import type { DataSource } from 'typeorm';
-import { chartSvg, legendSvg, type Series } from '../reportCharts.js';
-import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from '../pdfEngine.js';
-import { methodsTable } from '../runReportPdf.js';
-import type { ExportFile } from '../exportsFormat.js';
-import { getHeatPlan } from './planRead.js';
-import { planReportData, type PlanReportData } from './planReport.js';
+import { chartSvg, legendSvg, type Series } from './reportCharts.js';
+import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
+import { methodsTable } from './runReportPdf.js';
+import type { ExportFile } from './exportsFormat.js';
+import { getHeatPlan } from '../heatPlans/planRead.js';
+import { planReportData, type PlanReportData } from './heatPlanReport.js';
 import { REVIEW_LABELS } from '../../../shared/labels.js';
 import { toDisplay, unitLabel } from '../../../shared/units.js';
 import type { SessionUser, UnitSystem } from '../../../shared/types/api.js';
