@@ -20,7 +20,7 @@ export interface StageMapEntry {
 
 /**
  * The duty of one of the column's pump-arounds at which a load case (usually a simulation case) was made.
- * Tagged cases calibrate a heat-recovery plan's traffic model (issue 17).
+ * Tagged cases calibrate a heat-recovery plan's traffic model (issue 17); PUT /load-cases/:id/pump-around-duties.
  */
 export interface PumpAroundDutyTag {
   pumpAroundId: string;
@@ -78,11 +78,5 @@ export interface PutLoadsBody {
   stageMap?: StageMapEntry[] | null;
   /** how the grid was last filled ('typed' or 'pasted'); unchanged when absent */
   source?: LoadSource;
-  version: number;
-}
-
-/** PUT /load-cases/:id/pump-around-duties: the whole set of tags replaces the stored one (empty clears it). */
-export interface PutPumpAroundDutiesBody {
-  duties: PumpAroundDutyTag[];
   version: number;
 }

@@ -7,9 +7,8 @@ import { LoadCase } from '../../db/entities/LoadCase.js';
 import { ValidationError } from '../../errors.js';
 import { audit } from '../audit/audit.js';
 import { assertVersion, visibleChild } from '../columns/columnsCommon.js';
-import { toLoadCaseRecord } from '../loads/loadsRead.js';
 import type { SessionUser } from '../../../shared/types/api.js';
-import type { LoadCaseRecord, PutPumpAroundDutiesBody } from '../../../shared/types/loads.js';
+import type { LoadCaseDutyTags, PutPumpAroundDutiesBody } from '../../../shared/types/heatPlans.js';
 
 /** Replace a load case's duty tags; each pump-around must be the column's and appear once (400 naming the field). */
 export async function putPumpAroundDuties(
@@ -17,7 +16,7 @@ export async function putPumpAroundDuties(
   user: SessionUser,
   id: string,
   body: PutPumpAroundDutiesBody,
-): Promise<LoadCaseRecord> {
+): Promise<LoadCaseDutyTags> {
   return ds.transaction(async (em) => {
     const l = await visibleChild(em, user, LoadCase, id, 'Load case', true);
     assertVersion('load case', l.version, body.version);
@@ -39,6 +38,6 @@ export async function putPumpAroundDuties(
       duties: l.pumpAroundDuties,
       previous: { version: body.version },
     });
-    return toLoadCaseRecord(em, saved);
+    return { id: saved.id, pumpAroundDuties: saved.pumpAroundDuties, version: saved.version };
   });
 }
