@@ -66,6 +66,18 @@ export const routes: RouteRecordRaw[] = [
         component: () => import('../pages/CompareRunsPage.vue'),
         meta: { permission: 'read' },
       },
+      {
+        path: 'columns/:id/evidence/import',
+        name: 'evidence-import',
+        component: () => import('../pages/EvidenceScanImportPage.vue'),
+        meta: { permission: 'evidence.record' },
+      },
+      {
+        path: 'evidence/:id',
+        name: 'evidence',
+        component: () => import('../pages/EvidencePage.vue'),
+        meta: { permission: 'read' },
+      },
       { path: 'runs/:id', name: 'run', component: () => import('../pages/RunPage.vue'), meta: { permission: 'read' } },
       {
         path: 'runs/:id/report',
@@ -80,18 +92,6 @@ export const routes: RouteRecordRaw[] = [
         meta: { permission: 'ratings.run' },
       },
       { path: 'studies/:id', name: 'study', component: () => import('../pages/StudyPage.vue'), meta: { permission: 'read' } },
-      {
-        path: 'columns/:id/heat-plans/new',
-        name: 'heat-plan-new',
-        component: () => import('../pages/HeatPlanPage.vue'),
-        meta: { permission: 'ratings.run' },
-      },
-      {
-        path: 'heat-plans/:id',
-        name: 'heat-plan',
-        component: () => import('../pages/HeatPlanPage.vue'),
-        meta: { permission: 'read' },
-      },
       {
         path: 'inspections',
         name: 'inspections',

@@ -6,10 +6,10 @@ import { makeDataSource } from '../data-source.js';
 import { User } from '../entities/User.js';
 import { DEMO_PASSWORD, DEMO_USERS } from './demoUsers.js';
 import { seedDemoScenario } from './demoScenario.js';
+import { seedEvidence } from './evidence.js';
 import { seedInspection } from './inspection.js';
 import { seedPlant } from './plant.js';
 import { seedStudy } from './study.js';
-import { seedHeatPlan } from './heatPlan.js';
 
 /** Seed the invented demo scenario once: skipped when the demo admin already exists. */
 export async function seedDemo(ds: DataSource): Promise<boolean> {
@@ -22,7 +22,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     await seedDemoScenario(em, plant.column, users);
     await seedInspection(em, plant.column.id, users);
     await seedStudy(em, plant.column.id, users);
-    await seedHeatPlan(em, plant.column.id, users);
+    await seedEvidence(em, plant.column, users);
     // Later seed steps (sections, load cases, runs, inspections) hang off the demo plant here.
     void plant;
   });
