@@ -49,12 +49,13 @@ export const checkAnswers: RequestHandler = (req, res, next) => {
   res.json = function checked(body: unknown) {
     const c = res.locals[CONTRACT_LOCAL] as RouteContract | 'legacy' | undefined;
     if (c === 'legacy') return json(body);
-    const faults = answerFaults(c, res.statusCode, body);
+    const status = res.statusCode;
+    const faults = answerFaults(c, status, body);
     if (!faults) return json(body);
-    logger.error({ method: req.method, url: req.originalUrl, status: res.statusCode, faults }, 'answer breaks its contract');
+    logger.error({ method: req.method, url: req.originalUrl, status, faults }, 'answer breaks its contract');
     res.status(500);
     return json({
-      error: `Answer breaks its contract (${req.method} ${c ? c.path : req.originalUrl}, status was ${res.statusCode})`,
+      error: `Answer breaks its contract (${req.method} ${c ? c.path : req.originalUrl}, status was ${status})`,
       details: faults.slice(0, 20).map((f) => ({ path: '(answer)', message: f })),
     });
   } as Response['json'];

@@ -3,7 +3,7 @@
  * answers. The server validates requests and (in tests) answers with them, the handler's types come from
  * them, and the OpenAPI document (GET /api/openapi.json) is built from them (server/http/openapi.ts).
  */
-import type { TObject, TSchema } from '@sinclair/typebox';
+import type { Static, TObject, TSchema } from '@sinclair/typebox';
 import type { Permission } from '../permissions.js';
 
 export type Access = Permission | 'public' | 'signed-in';
@@ -39,3 +39,17 @@ export const route = <C extends RouteContract>(c: C): C => c;
 
 export const isFileAnswer = (r: RouteContract['response']): r is FileAnswer =>
   r !== null && Array.isArray((r as { file?: unknown }).file);
+
+type StaticOf<S> = S extends TSchema ? Static<S> : undefined;
+/** What a client sends to a route: its path parameters, query and JSON body as the contract types them. */
+export type RequestOf<C extends RouteContract> = {
+  params?: StaticOf<C['params']>;
+  query?: StaticOf<C['query']>;
+  body?: StaticOf<C['body']>;
+};
+/** The JSON answer of a route on success (undefined for files and 204). */
+export type AnswerOf<C extends RouteContract> = StaticOf<C['response']>;
+
+/** A contract's path with its parameters filled in, e.g. '/runs/:id' → '/runs/3f…'. */
+export const pathOf = (c: RouteContract, params: Record<string, string | number> = {}): string =>
+  c.path.replace(/:(\w+)/g, (_m, name: string) => encodeURIComponent(String(params[name] ?? '')));

@@ -16,16 +16,19 @@ import type {
 import type { GeometryProvenance, TrayNumbering } from './columns.js';
 import type { LoadBasis } from './loads.js';
 
-export const REVIEW_STATUSES = ['draft', 'submitted', 'approved', 'returned'] as const;
+import type { ReviewEntry, ReviewStatusSchema, RunKindSchema, RunSummary } from '../contract/runs.js';
+import type { Static } from '@sinclair/typebox';
+
+export { REVIEW_STATUSES } from '../contract/runs.js';
 /** draft → submitted (author, ratings.run) → approved | returned (reviews.approve, with a comment); returned → submitted again. Approved is read-only. */
-export type ReviewStatus = (typeof REVIEW_STATUSES)[number];
+export type ReviewStatus = Static<typeof ReviewStatusSchema>;
 
 /**
  * 'rating' from design/as-left geometry; 'as-found' with geometry measured at inspection (issue 6);
  * 'as-found-design' the design run rated beside an as-found run for its comparison (a working copy: run
  * lists and the column profile leave both inspection kinds out unless asked).
  */
-export type RunKind = 'rating' | 'as-found' | 'as-found-design';
+export type RunKind = Static<typeof RunKindSchema>;
 export const INSPECTION_RUN_KINDS: readonly RunKind[] = ['as-found', 'as-found-design'];
 
 export interface RunSnapshotSection {
@@ -82,33 +85,7 @@ export interface RunResults {
   traysNear: number[];
 }
 
-export interface ReviewEntry {
-  at: string;
-  userId: string;
-  userName: string;
-  action: 'submit' | 'approve' | 'return';
-  comment: string;
-}
-
-export interface RunSummary {
-  id: string;
-  columnId: string;
-  label: string;
-  kind: RunKind;
-  status: ReviewStatus;
-  loadCaseId: string | null;
-  loadCaseName: string;
-  authorId: string | null;
-  authorName: string | null;
-  createdAt: string;
-  engineVersion: string;
-  controllingCheck: CheckName;
-  controllingTray: number;
-  maxPercentOfLimit: number;
-  traysOver: number[];
-  traysNear: number[];
-  version: number;
-}
+export type { CreateRunBody, ReviewActionBody, ReviewEntry, RunSummary } from '../contract/runs.js';
 
 export interface RunRecord extends RunSummary {
   snapshot: RunSnapshot;
@@ -116,16 +93,6 @@ export interface RunRecord extends RunSummary {
   reviews: ReviewEntry[];
   /** last reviewer comment (on approve or return), null before review */
   reviewComment: string | null;
-}
-
-/** POST /runs */
-export interface CreateRunBody {
-  columnId: string;
-  loadCaseId: string;
-  /** sections to rate (default: every section of the column covering a loaded tray) */
-  sectionIds?: string[];
-  methods?: MethodOptions;
-  label?: string;
 }
 
 /** Input of services/runs/runs.ts createRatingRun (also used by inspections for an as-found rating). */
@@ -140,12 +107,6 @@ export interface CreateRatingRunInput {
   kind: RunKind;
   /** ISO date of the as-found geometry, recorded as the provenance date of overridden sections */
   asFoundDate?: string;
-}
-
-/** POST /runs/:id/submit | approve | return */
-export interface ReviewActionBody {
-  comment?: string;
-  version: number;
 }
 
 /** GET /runs/:id/window/:tray */

@@ -1,6 +1,7 @@
 import { Notify } from 'quasar';
 import type { Router } from 'vue-router';
 import type { ApiErrorBody } from '../../shared/types/api';
+import { pathOf, type AnswerOf, type RequestOf, type RouteContract } from '../../shared/contract/route';
 import { pathWords } from '../utils/fieldNames';
 
 /** An API failure, carrying the server's `{ error, details }` body. */
@@ -83,7 +84,15 @@ async function request<T>(method: string, url: string, opts: RequestOptions = {}
   return data as T;
 }
 
+/** A route by its contract (shared/contract/): parameters, query, body and answer typed by it. */
+function call<C extends RouteContract>(c: C, input: RequestOf<C> = {}, opts: RequestOptions = {}): Promise<AnswerOf<C>> {
+  const url = pathOf(c, (input.params ?? {}) as Record<string, string | number>);
+  const query = input.query as RequestOptions['query'];
+  return request<AnswerOf<C>>(c.method.toUpperCase(), url, { ...opts, ...(query ? { query } : {}), body: input.body });
+}
+
 export const api = {
+  call,
   get: <T>(url: string, opts?: RequestOptions) => request<T>('GET', url, opts),
   post: <T>(url: string, body?: unknown, opts?: RequestOptions) => request<T>('POST', url, { ...opts, body }),
   put: <T>(url: string, body?: unknown, opts?: RequestOptions) => request<T>('PUT', url, { ...opts, body }),

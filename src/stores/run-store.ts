@@ -3,6 +3,7 @@ import { ref } from 'vue';
 import { api, type RequestOptions } from '../boot/api';
 import type { CreateRunBody, ReviewActionBody, RunComparison, RunRecord, RunWindow } from '../../shared/types/runs';
 import type { MethodsPayload } from '../../shared/types/methods';
+import { runContract } from '../../shared/contract/runs';
 
 /** The open rating run, its review actions, operating windows, comparisons and the method sources. */
 export const useRunStore = defineStore('run', () => {
@@ -14,7 +15,7 @@ export const useRunStore = defineStore('run', () => {
     run.value = await api.get<RunRecord>(`/runs/${id}`, opts);
     return run.value;
   }
-  const create = (body: CreateRunBody) => api.post<RunRecord>('/runs', body);
+  const create = (body: CreateRunBody) => api.call(runContract.create, { body });
 
   async function review(action: 'submit' | 'approve' | 'return', comment?: string): Promise<RunRecord> {
     if (!run.value) throw new Error('no run loaded');

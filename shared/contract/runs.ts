@@ -1,0 +1,276 @@
+/** Contracts of rating runs: create, list, read, compare, window, export, report and review. */
+import { Type, type Static } from '@sinclair/typebox';
+import { CHECK_NAMES } from '../types/rating.js';
+import {
+  CheckNameSchema,
+  CheckStatusSchema,
+  ChecksSchema,
+  EngineWarningSchema,
+  MethodOptionsSchema,
+  OperatingWindowSchema,
+  ResultNumber,
+  SectionGeometrySchema,
+  SectionSummarySchema,
+  TrayDetailsSchema,
+  TrayLoadSchema,
+} from './rating.js';
+import { fileAnswer, route } from './route.js';
+import { Defaulted, IdParams, Nullable, Obj, PageOf, pageFields, StringEnum, Timestamp, Uuid } from './schema.js';
+
+export const REVIEW_STATUSES = ['draft', 'submitted', 'approved', 'returned'] as const;
+export const ReviewStatusSchema = StringEnum(REVIEW_STATUSES);
+export const RUN_KINDS = ['rating', 'as-found', 'as-found-design'] as const;
+export const RunKindSchema = StringEnum(RUN_KINDS);
+
+export const RunSummarySchema = Obj({
+  id: Uuid(),
+  columnId: Uuid(),
+  label: Type.String(),
+  kind: RunKindSchema,
+  status: ReviewStatusSchema,
+  loadCaseId: Nullable(Uuid()),
+  loadCaseName: Type.String(),
+  authorId: Nullable(Uuid()),
+  authorName: Nullable(Type.String()),
+  createdAt: Timestamp(),
+  engineVersion: Type.String(),
+  controllingCheck: CheckNameSchema,
+  controllingTray: Type.Integer(),
+  maxPercentOfLimit: ResultNumber(),
+  traysOver: Type.Array(Type.Integer()),
+  traysNear: Type.Array(Type.Integer()),
+  version: Type.Integer(),
+});
+export type RunSummary = Static<typeof RunSummarySchema>;
+
+export const ReviewEntrySchema = Obj({
+  at: Type.String(),
+  userId: Type.String(),
+  userName: Type.String(),
+  action: StringEnum(['submit', 'approve', 'return'] as const),
+  comment: Type.String(),
+});
+export type ReviewEntry = Static<typeof ReviewEntrySchema>;
+
+const RunSnapshotSchema = Obj({
+  column: Obj({
+    id: Uuid(),
+    tag: Type.String(),
+    numbering: StringEnum(['top-down', 'bottom-up'] as const),
+    trayCount: Type.Integer(),
+  }),
+  loadCase: Obj({ id: Uuid(), name: Type.String(), basis: Type.String(), version: Type.Integer() }),
+  sections: Type.Array(
+    Obj({
+      sectionId: Uuid(),
+      name: Type.String(),
+      firstTray: Type.Integer(),
+      lastTray: Type.Integer(),
+      provenance: StringEnum(['design', 'as-left', 'as-found'] as const),
+      provenanceDate: Nullable(Type.String()),
+      geometry: SectionGeometrySchema,
+      overridden: Type.Boolean(),
+    }),
+  ),
+  loads: Type.Array(TrayLoadSchema),
+  methods: MethodOptionsSchema,
+  engineVersion: Type.String(),
+});
+
+/** section ids inside stored results are kept as stored (runs of early versions carry other ids) */
+const RunResultsSchema = Obj({
+  engineVersion: Type.String(),
+  trays: Type.Array(
+    Obj({
+      tray: Type.Integer(),
+      sectionId: Type.String(),
+      checks: ChecksSchema,
+      details: TrayDetailsSchema,
+      controllingCheck: CheckNameSchema,
+      warnings: Type.Array(EngineWarningSchema),
+    }),
+  ),
+  sections: Type.Array(
+    Obj({
+      sectionId: Type.String(),
+      name: Type.String(),
+      firstTray: Type.Integer(),
+      lastTray: Type.Integer(),
+      summary: SectionSummarySchema,
+      warnings: Type.Array(EngineWarningSchema),
+    }),
+  ),
+  uncoveredTrays: Type.Array(Type.Integer()),
+  controllingCheck: CheckNameSchema,
+  controllingTray: Type.Integer(),
+  maxPercentOfLimit: ResultNumber(),
+  traysOver: Type.Array(Type.Integer()),
+  traysNear: Type.Array(Type.Integer()),
+});
+
+export const RunRecordSchema = Obj({
+  ...RunSummarySchema.properties,
+  snapshot: RunSnapshotSchema,
+  results: RunResultsSchema,
+  reviews: Type.Array(ReviewEntrySchema),
+  /** last reviewer comment (on approve or return), null before review */
+  reviewComment: Nullable(Type.String()),
+});
+
+export const RunWindowSchema = Obj({ runId: Uuid(), sectionId: Uuid(), load: TrayLoadSchema, window: OperatingWindowSchema });
+
+const diffNumber = () => Type.Unsafe<number | null>({ type: ['number', 'null'] });
+const CheckDiffSchema = Obj({ a: diffNumber(), b: diffNumber(), delta: diffNumber() });
+export const RunComparisonSchema = Obj({
+  a: RunSummarySchema,
+  b: RunSummarySchema,
+  trays: Type.Array(
+    Obj({
+      tray: Type.Integer(),
+      controllingA: Nullable(CheckNameSchema),
+      controllingB: Nullable(CheckNameSchema),
+      controllingChanged: Type.Boolean(),
+      statusA: Nullable(CheckStatusSchema),
+      statusB: Nullable(CheckStatusSchema),
+      checks: Obj(Object.fromEntries(CHECK_NAMES.map((n) => [n, CheckDiffSchema]))),
+    }),
+  ),
+  controllingChanged: Type.Array(Type.Integer()),
+});
+
+const uuid = Uuid();
+export const CreateRunBodySchema = Obj({
+  columnId: uuid,
+  loadCaseId: uuid,
+  /** sections to rate (default: every section of the column covering a loaded tray) */
+  sectionIds: Type.Optional(Type.Array(uuid, { minItems: 1, maxItems: 100, uniqueItems: true })),
+  methods: Type.Optional(MethodOptionsSchema),
+  label: Type.Optional(Type.String({ minLength: 1, maxLength: 200 })),
+});
+export type CreateRunBody = Static<typeof CreateRunBodySchema>;
+
+const comment = { maxLength: 4000, 'x-text': 'multiline' };
+export const ReviewActionBodySchema = Obj({
+  comment: Type.Optional(Type.String(comment)),
+  version: Type.Integer({ minimum: 1 }),
+});
+export type ReviewActionBody = Static<typeof ReviewActionBodySchema>;
+/** approve and return need a comment */
+export const ReviewDecisionBodySchema = Obj({
+  comment: Type.String({ minLength: 1, ...comment }),
+  version: Type.Integer({ minimum: 1 }),
+});
+
+export const RelabelBodySchema = Obj({
+  label: Type.String({ minLength: 1, maxLength: 200 }),
+  version: Type.Integer({ minimum: 1 }),
+});
+
+export const ExportQuerySchema = Obj({ format: Defaulted(StringEnum(['csv', 'xlsx'] as const), 'csv') });
+export const EXPORT_TYPES = ['text/csv', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'];
+
+const RunListQuery = Obj({
+  ...pageFields,
+  columnId: Type.Optional(uuid),
+  status: Type.Optional(ReviewStatusSchema),
+  /** also list the runs of ratings as found (the as-found runs and their design working copies) */
+  inspection: Defaulted(Type.Boolean(), false),
+});
+
+export const runContract = {
+  list: route({
+    method: 'get',
+    path: '/runs',
+    access: 'read',
+    summary: 'Rating runs the user may see, newest first (filter by columnId, status; paged)',
+    query: RunListQuery,
+    response: PageOf(RunSummarySchema),
+  }),
+  create: route({
+    method: 'post',
+    path: '/runs',
+    access: 'ratings.run',
+    summary:
+      'Rate a load case on the column’s sections and store the run (immutable snapshot and results); answers the run summary',
+    body: CreateRunBodySchema,
+    status: 201,
+    response: RunSummarySchema,
+  }),
+  compare: route({
+    method: 'get',
+    path: '/runs/compare',
+    access: 'read',
+    summary: 'Per-tray differences of two runs (percent of limit of every check; controlling-check changes)',
+    query: Obj({ a: uuid, b: uuid }),
+    response: RunComparisonSchema,
+  }),
+  get: route({
+    method: 'get',
+    path: '/runs/:id',
+    access: 'read',
+    summary: 'A rating run with snapshot, results and review history',
+    params: IdParams,
+    response: RunRecordSchema,
+  }),
+  report: route({
+    method: 'get',
+    path: '/runs/:id/report.pdf',
+    access: 'read',
+    summary: 'Printable rating report (PDF, A4 landscape): review record, cautions, charts, per-tray table, methods',
+    params: IdParams,
+    response: fileAnswer('application/pdf'),
+  }),
+  relabel: route({
+    method: 'patch',
+    path: '/runs/:id',
+    access: 'ratings.run',
+    summary: 'Relabel a run (not when approved; optimistic lock on version)',
+    params: IdParams,
+    body: RelabelBodySchema,
+    response: RunRecordSchema,
+  }),
+  window: route({
+    method: 'get',
+    path: '/runs/:id/window/:tray',
+    access: 'read',
+    summary: 'Operating window of one rated tray (engine curves and the operating point)',
+    params: Obj({ id: uuid, tray: Type.Integer({ minimum: 0, maximum: 100000 }) }),
+    response: RunWindowSchema,
+  }),
+  export: route({
+    method: 'get',
+    path: '/runs/:id/export',
+    access: 'read',
+    summary: 'Download the per-tray results as CSV or XLSX (?format=csv|xlsx)',
+    params: IdParams,
+    query: ExportQuerySchema,
+    response: fileAnswer(...EXPORT_TYPES),
+  }),
+  submit: route({
+    method: 'post',
+    path: '/runs/:id/submit',
+    access: 'ratings.run',
+    summary: 'Submit a draft or returned run for review (author only)',
+    params: IdParams,
+    body: ReviewActionBodySchema,
+    response: RunRecordSchema,
+  }),
+  approve: route({
+    method: 'post',
+    path: '/runs/:id/approve',
+    access: 'reviews.approve',
+    summary: 'Approve a submitted run with a comment (not your own); approved runs are read-only',
+    params: IdParams,
+    body: ReviewDecisionBodySchema,
+    response: RunRecordSchema,
+  }),
+  return: route({
+    method: 'post',
+    path: '/runs/:id/return',
+    access: 'reviews.approve',
+    summary: 'Return a submitted run to its author with a comment',
+    params: IdParams,
+    body: ReviewDecisionBodySchema,
+    response: RunRecordSchema,
+  }),
+};
