@@ -43,6 +43,8 @@ export const THRESHOLD_BASIS =
 export interface TrayPrediction {
   frothHeight_mm: number;
   downcomerAeratedBackup_mm: number;
+  /** predicted percent of jet flood (the rating's chosen method), quoted beside a flooded reading */
+  percentFlood?: number;
 }
 
 export interface ReadOptions {
@@ -144,7 +146,13 @@ export function readGammaScan(profile: readonly DensityPoint[], decks: readonly 
     const pred = o.predicted?.get(r.deck.tray);
     const refH = pred ? pred.frothHeight_mm : sampleHeight;
     const below = raw[i + 1]; // the tray below (top-first order): weeping liquid rains through its vapour space
-    const { finding, reason } = classify(r, step * 1000, thr, refH, pred ? 'predicted' : 'scan median', hazyAbove, below);
+    const c = classify(r, step * 1000, thr, refH, pred ? 'predicted' : 'scan median', hazyAbove, below);
+    const finding = c.finding;
+    // a flooded reading against a rating that predicts no jet flood points at fouling, foaming or the downcomers
+    const reason =
+      finding === 'flooded' && pred?.percentFlood !== undefined
+        ? `${c.reason.slice(0, -1)}; predicted ${r0(pred.percentFlood)} % of jet flood, downcomer backup ${r0(pred.downcomerAeratedBackup_mm)} mm.`
+        : c.reason;
     const S = r.deck.traySpacing_mm;
     const out: ScanTrayReading = {
       tray: r.deck.tray,

@@ -3,7 +3,8 @@
  * real scan). Along the chord: froth of one density from each deck up to its froth height, its top fading
  * linearly over ±15 % of the height (so the mid-way density sits at the stated height), vapour above; a
  * froth height at or above the tray spacing fills the space to the deck above (flood); zero leaves the
- * space empty (a missing or dry tray). Below `liquidLevel_m` the column is liquid-full (the sump).
+ * space empty (a missing or dry tray). Below `liquidLevel_m` the column is liquid-full (the sump). A tray's
+ * clear space may carry a density of its own (`vapourSpaceDensities`: liquid raining from a weeping tray above).
  * Tray decks themselves, walls and downcomers are not modelled. Gaussian noise from a seeded generator
  * (mulberry32 with Box–Muller) is added to the density, before conversion to count rates when asked.
  */
@@ -29,6 +30,8 @@ export interface SyntheticScanSpec {
   noise_kg_m3?: number;
   seed?: number;
   liquidLevel_m?: number;
+  /** density in the clear space above a tray's froth [kg/m³]: liquid raining from a weeping tray above */
+  vapourSpaceDensities?: readonly { tray: number; density_kg_m3: number }[];
   /** give count rates on this calibrated chord instead of densities */
   countRates?: { vapourCountRate: number; liquidCountRate: number };
 }
@@ -55,13 +58,14 @@ const FADE = 0.15;
 
 /** The model's noise-free density at elevation z [kg/m³]. */
 export function syntheticDensity(spec: SyntheticScanSpec, z: number): number {
-  const { vapourDensity_kg_m3: rv, frothDensity_kg_m3: rf } = spec;
+  const rf = spec.frothDensity_kg_m3;
   if (spec.liquidLevel_m !== undefined && z <= spec.liquidLevel_m) return spec.liquidDensity_kg_m3;
   const deck = spec.decks.find((d) => z >= d.deckElevation_m && z < d.deckElevation_m + d.traySpacing_mm / 1000);
-  if (!deck) return rv;
+  if (!deck) return spec.vapourDensity_kg_m3;
   const hf = (spec.frothHeights?.find((f) => f.tray === deck.tray)?.frothHeight_mm ?? spec.defaultFrothHeight_mm) / 1000;
   const y = z - deck.deckElevation_m;
   if (hf >= deck.traySpacing_mm / 1000) return rf;
+  const rv = spec.vapourSpaceDensities?.find((v) => v.tray === deck.tray)?.density_kg_m3 ?? spec.vapourDensity_kg_m3;
   if (hf <= 0) return rv;
   const lo = hf * (1 - FADE);
   const hi = hf * (1 + FADE);

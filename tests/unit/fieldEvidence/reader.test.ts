@@ -82,6 +82,31 @@ describe('gamma-scan reader on synthetic scans of known froth heights', () => {
     expect(r.floodedRegions).toEqual([]);
   });
 
+  it('a low tray over a rainy vapour space reads as weeping; the same tray over clear vapour as dry or weeping', () => {
+    const decks = trayDeckElevations(sections(), 'top-down', DATUM);
+    const readWith = (rain: number) =>
+      readGammaScan(
+        scanToDensities(
+          syntheticGammaScan(
+            scanSpec([{ tray: 8, frothHeight_mm: 60 }], {
+              step_m: 0.01,
+              vapourSpaceDensities: [{ tray: 9, density_kg_m3: rain }],
+            }),
+          ),
+          RHO_V,
+          RHO_L,
+        ),
+        decks,
+        { vapourDensity_kg_m3: RHO_V, liquidDensity_kg_m3: RHO_L },
+      ).trays.find((t) => t.tray === 8)!;
+    const wet = readWith(95);
+    expect(wet.finding).toBe('low-liquid');
+    expect(wet.reason).toMatch(/vapour space below stays above the vapour baseline \(weeping or dumping\)/);
+    const dry = readWith(RHO_V);
+    expect(dry.finding).toBe('low-liquid');
+    expect(dry.reason).toMatch(/\(dry or weeping tray\)/);
+  });
+
   it('a tray-free stretch of scan: every deck in span read, none made up', () => {
     const r = read(9);
     for (const t of r.trays) {
@@ -103,6 +128,7 @@ describe('gamma scan with loads: prediction beside the reading', () => {
     }
     expect(r.floodedRegions.map((f) => [f.topTray, f.bottomTray])).toEqual([[5, 7]]);
     expect(by.get(11)!.finding).toBe('missing-tray');
+    expect(by.get(6)!.reason).toMatch(/^Vapour space filled: .*; predicted \d+ % of jet flood, downcomer backup \d+ mm\.$/);
     expect(by.get(4)!.finding).toBe('high-froth');
     expect(by.get(4)!.reason).toMatch(/predicted/);
     expect(by.get(13)!.finding).toBe('low-liquid');
