@@ -4,11 +4,13 @@
  */
 import { benchEngine } from './engine.js';
 import { benches as extraBenches } from './extra.js';
+import { benchHeatPlan } from './heatPlan.js';
 import { benchPumpAround } from './pumpAround.js';
 
 const benches: { name: string; run: () => Promise<string> }[] = [
   { name: 'engine', run: () => benchEngine() },
   { name: 'pump-around', run: () => benchPumpAround() },
+  { name: 'heat plan', run: () => benchHeatPlan() },
 ];
 
 // Benches that need the database or the HTTP server (API under load, import preview).

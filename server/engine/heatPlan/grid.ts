@@ -8,8 +8,8 @@
  */
 import type { TrayResult } from '../../../shared/types/rating.js';
 import { sweepDuties } from '../pumpAround/points.js';
-import { statesAt, shiftAt, type PlanModel } from './model.js';
-import type { DutyState, PlanShiftedTray } from './traffic.js';
+import { CONSTRAINTS_PER_TRAY, constraintResidual, statesAt, shiftAt, type PlanModel } from './model.js';
+import type { PlanShiftedTray } from './traffic.js';
 
 export interface DutyGrid {
   axes: number[][];
@@ -40,56 +40,77 @@ export interface RatedTray {
 }
 
 /**
- * Shifted traffic and rating of every tray at every grid node, each computed once per combination of the
- * duties the tray depends on (or at every node when reuse is false).
+ * Shifted traffic and rating of every tray at every grid node, node by node (rateNode). A tray that
+ * depends on fewer duties than the grid has is rated once per combination of those duties and its result
+ * shared; a tray that depends on all of them is rated at each node and not kept (holding tens of
+ * thousands of full ratings to the end of a run made garbage collection most of it). What later steps
+ * need of each node is kept small: per watched tray, the bit mask of its constraints that are over
+ * (bit c set when residual c > 0, model.ts numbering).
  */
 export class GridRatings {
-  private readonly cache: (RatedTray | undefined)[][];
+  private readonly cache: ((RatedTray | undefined)[] | null)[];
   private readonly keyStrides: number[][];
-  private readonly states: (DutyState[] | undefined)[];
+  private readonly masks: Uint16Array;
+  /** position of each tray among the watched trays, −1 if not watched */
+  private readonly watchedPos: number[];
 
   constructor(
     readonly model: PlanModel,
     readonly grid: DutyGrid,
     readonly reuse = true,
   ) {
-    // per tray: strides over the sizes of the pump-arounds it depends on (all of them without reuse)
+    const axes = grid.sizes.length;
+    // per tray: strides over the sizes of the pump-arounds it depends on
     this.keyStrides = model.roles.map((role) => {
-      const on = reuse ? role.dependsOn : grid.sizes.map((_, i) => i);
       const strides = grid.sizes.map(() => 0);
       let s = 1;
-      for (let j = on.length - 1; j >= 0; j--) {
-        strides[on[j]!] = s;
-        s *= grid.sizes[on[j]!]!;
+      for (let j = role.dependsOn.length - 1; j >= 0; j--) {
+        strides[role.dependsOn[j]!] = s;
+        s *= grid.sizes[role.dependsOn[j]!]!;
       }
       return strides;
     });
     // dense arrays, filled up front (arrays written at scattered indices fall back to slow dictionaries)
-    this.cache = this.keyStrides.map((ks) => {
-      const size = ks.reduce((n, s, i) => (s > 0 ? Math.max(n, s * grid.sizes[i]!) : n), 1);
+    this.cache = model.roles.map((role) => {
+      if (!reuse || role.dependsOn.length === axes) return null;
+      const size = role.dependsOn.reduce((n, i) => n * grid.sizes[i]!, 1);
       return new Array<RatedTray | undefined>(size).fill(undefined);
     });
-    this.states = new Array<DutyState[] | undefined>(grid.count).fill(undefined);
+    this.watchedPos = model.trays.map(() => -1);
+    model.watched.forEach((k, w) => (this.watchedPos[k] = w));
+    this.masks = new Uint16Array(grid.count * model.watched.length);
   }
 
-  /** duty states of every pump-around at a node (kept: they are reused by every tray) */
-  statesOf(node: number): DutyState[] {
-    let s = this.states[node];
-    if (!s) this.states[node] = s = statesAt(this.model, nodeDuties(this.grid, node));
-    return s;
+  /** Every tray at a node (idx = nodeIndices(grid, node)); records the masks of the watched trays. */
+  rateNode(node: number, idx: readonly number[]): RatedTray[] {
+    const m = this.model;
+    const states = statesAt(m, nodeDuties(this.grid, node));
+    const base = node * m.watched.length;
+    return m.trays.map((_, k) => {
+      const row = this.cache[k]!;
+      let key = 0;
+      if (row) {
+        const ks = this.keyStrides[k]!;
+        for (let i = 0; i < idx.length; i++) key += idx[i]! * ks[i]!;
+      }
+      let r = row?.[key];
+      if (!r) {
+        const shifted = shiftAt(m, k, states);
+        r = { shifted, rating: m.rate(k, shifted) };
+        if (row) row[key] = r;
+      }
+      const w = this.watchedPos[k]!;
+      if (w >= 0) {
+        let mask = 0;
+        for (let c = 0; c < CONSTRAINTS_PER_TRAY; c++) if (constraintResidual(r.shifted, r.rating, c) > 0) mask |= 1 << c;
+        this.masks[base + w] = mask;
+      }
+      return r;
+    });
   }
 
-  /** tray k at a node; idx = nodeIndices(grid, node), passed in by loops that already have it */
-  at(node: number, k: number, idx: readonly number[] = nodeIndices(this.grid, node)): RatedTray {
-    const ks = this.keyStrides[k]!;
-    let key = 0;
-    for (let i = 0; i < idx.length; i++) key += idx[i]! * ks[i]!;
-    const row = this.cache[k]!;
-    let r = row[key];
-    if (!r) {
-      const shifted = shiftAt(this.model, k, this.statesOf(node));
-      row[key] = r = { shifted, rating: this.model.rate(k, shifted) };
-    }
-    return r;
+  /** constraints over on watched tray k at a node already rated (bit c: constraint c) */
+  mask(node: number, k: number): number {
+    return this.masks[node * this.model.watched.length + this.watchedPos[k]!]!;
   }
 }

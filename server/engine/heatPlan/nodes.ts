@@ -4,35 +4,29 @@
  */
 import type { GridRatings } from './grid.js';
 import { nodeDuties } from './grid.js';
-import {
-  CONSTRAINTS_PER_TRAY,
-  constraintResidual,
-  marginResidual,
-  overConstraints,
-  shiftAt,
-  statesAt,
-  type PlanModel,
-} from './model.js';
+import { CONSTRAINTS_PER_TRAY, marginResidual, overConstraints, shiftAt, statesAt, type PlanModel } from './model.js';
 
 /** [tray index, constraint] pairs; constraint −1 is the margin constraint */
 export type ConstraintRef = readonly [number, number];
 
-/** Constraints over at a node (each tray: dry-out alone when dry, else its checks over). */
-export function overAtNode(r: GridRatings, node: number, idx: readonly number[]): ConstraintRef[] {
+/** Constraints over at a rated node (each tray: dry-out alone when dry, else its checks over). */
+export function overAtNode(r: GridRatings, node: number): ConstraintRef[] {
   const out: ConstraintRef[] = [];
   for (const k of r.model.watched) {
-    const { shifted, rating } = r.at(node, k, idx);
-    for (const c of overConstraints(shifted, rating)) out.push([k, c]);
+    const mask = r.mask(node, k);
+    if (mask === 0) continue;
+    if (mask & 1) out.push([k, 0]);
+    else for (let c = 1; c < CONSTRAINTS_PER_TRAY; c++) if (mask & (1 << c)) out.push([k, c]);
   }
   return out;
 }
 
-/** Every constraint of the given trays with a positive residual at a node (for solving a crossing). */
+/** Every constraint of the given trays with a positive residual at a rated node (for solving a crossing). */
 export function positiveAtNode(r: GridRatings, node: number, trays: readonly number[]): ConstraintRef[] {
   const out: ConstraintRef[] = [];
   for (const k of trays) {
-    const { shifted, rating } = r.at(node, k);
-    for (let c = 0; c < CONSTRAINTS_PER_TRAY; c++) if (constraintResidual(shifted, rating, c) > 0) out.push([k, c]);
+    const mask = r.mask(node, k);
+    for (let c = 0; c < CONSTRAINTS_PER_TRAY; c++) if (mask & (1 << c)) out.push([k, c]);
   }
   return out;
 }

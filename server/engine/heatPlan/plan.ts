@@ -49,9 +49,9 @@ export function runHeatPlanWith<P>(
   for (let n = 0; n < grid.count; n++) {
     const idx = nodeIndices(grid, n);
     const duties = nodeDuties(grid, n);
-    const over = overAtNode(ratings, n, idx);
+    const trays = ratings.rateNode(n, idx);
+    const over = overAtNode(ratings, n);
     feasible.push(over.length === 0);
-    const trays = m.trays.map((_, k) => ratings.at(n, k, idx));
     points.push(mapPoint(planPoint(m, duties, trays, over, sections)));
   }
 
