@@ -31,6 +31,8 @@ export interface HeatPlanInput {
   usefulAboveTemperature_C: number;
   /** a section's L/V below this fraction of its base-case L/V is flagged (default 0.8, our choice) */
   fractionationThreshold?: number;
+  /** property drift per tray with the duties (from calibration); properties held at base without it */
+  propertyDrift?: TrayPropertyDrift[];
 }
 
 /** The constraint a boundary point is named by: a rating check, or 'dry-out' (no liquid or vapour left). */
@@ -126,3 +128,82 @@ export interface HeatPlanResult {
 }
 
 export type HeatPlanValidation = { ok: true; value: HeatPlanInput } | { ok: false; errors: { path: string; message: string }[] };
+
+/**
+ * Property drift of one tray: change of each property per kW of each pump-around's duty change from base
+ * (input order), p = p0 + Σ_i perDuty[i]·(Q_i − Q0_i). Fitted by calibration; absent means held at base.
+ */
+export interface TrayPropertyDrift {
+  tray: number;
+  vapourDensity_kg_m3_per_kW: number[];
+  liquidDensity_kg_m3_per_kW: number[];
+  surfaceTension_mN_m_per_kW: number[];
+  /** only when the base tray has a viscosity */
+  liquidViscosity_mPa_s_per_kW?: number[];
+}
+
+/** A simulation case tagged with its pump-around duties (input order), every tray of the base case. */
+export interface SimulationCase {
+  name?: string;
+  duties_kW: number[];
+  trays: TrayLoad[];
+}
+
+export interface ZoneFit {
+  pumpAround: string;
+  /** latent heat the plan had */
+  given_kJ_kg: number;
+  /** fitted latent heat of the zone; null when the cases do not vary this duty (the given value is kept) */
+  fitted_kJ_kg: number | null;
+}
+
+/** Model against simulation on one tray of one case. */
+export interface TrayComparison {
+  tray: number;
+  simulatedVapour_kg_h: number;
+  modelVapour_kg_h: number;
+  simulatedLiquid_kg_h: number;
+  modelLiquid_kg_h: number;
+  /** percent of limit per check, rated on the simulated loads and on the model's */
+  simulatedPercent: Partial<Record<CheckName, number>>;
+  modelPercent: Partial<Record<CheckName, number>>;
+}
+
+export interface CaseComparison {
+  name: string;
+  duties_kW: number[];
+  trays: TrayComparison[];
+}
+
+export interface FitQuality {
+  cases: number;
+  /** tray flows compared (vapour and liquid of each tray whose traffic depends on a duty, per case) */
+  flows: number;
+  rmsResidual_kg_h: number;
+  /** RMS residual as percent of the mean simulated flow */
+  rmsResidual_percent: number;
+  /** share of the simulated traffic change that the model explains (1 − SS_res/SS_shift) */
+  rSquared: number | null;
+  worstFlow: { tray: number; case: string; flow: 'vapour' | 'liquid'; residual_kg_h: number } | null;
+  worstRating: { tray: number; case: string; check: CheckName; difference_percent: number } | null;
+}
+
+export interface CalibrationResult {
+  zones: ZoneFit[];
+  drift: TrayPropertyDrift[];
+  fit: FitQuality;
+  comparisons: CaseComparison[];
+  /** the plan input with the fitted latent heats and drift: run it to plan on the calibrated model */
+  calibratedInput: HeatPlanInput;
+  notes: string[];
+}
+
+/** Where the loads at some duties came from: a simulated case, two bracketing cases, or the model. */
+export interface CalibratedLoads {
+  source: 'case' | 'interpolated' | 'model';
+  /** the case(s) used, by name */
+  cases: string[];
+  /** position between the two bracketing cases (0 = first, 1 = second), interpolated only */
+  fraction: number | null;
+  trays: TrayLoad[];
+}

@@ -52,3 +52,44 @@ export function heatPlanFaults(input: HeatPlanInput): FieldError[] {
     });
   return faults;
 }
+
+/** Drift entries: a tray of the load case, one coefficient per pump-around, properties positive over the grid. */
+export function driftFaults(input: HeatPlanInput): FieldError[] {
+  const faults: FieldError[] = [];
+  const n = input.pumpArounds.length;
+  const corners = input.pumpArounds.reduce<number[][]>(
+    (acc, pa) => acc.flatMap((c) => [pa.sweep.fromDuty_kW, pa.sweep.toDuty_kW].map((q) => [...c, q - pa.baseDuty_kW])),
+    [[]],
+  );
+  (input.propertyDrift ?? []).forEach((d, j) => {
+    const base = input.trays.find((t) => t.tray === d.tray);
+    if (!base) {
+      faults.push({ path: `/propertyDrift/${j}/tray`, message: `tray: tray ${d.tray} has no load in trays` });
+      return;
+    }
+    const fields = [
+      ['vapourDensity_kg_m3_per_kW', base.vapourDensity_kg_m3],
+      ['liquidDensity_kg_m3_per_kW', base.liquidDensity_kg_m3],
+      ['surfaceTension_mN_m_per_kW', base.surfaceTension_mN_m],
+      ['liquidViscosity_mPa_s_per_kW', base.liquidViscosity_mPa_s],
+    ] as const;
+    for (const [key, p0] of fields) {
+      const g = d[key];
+      if (!g) continue;
+      if (g.length !== n) {
+        faults.push({
+          path: `/propertyDrift/${j}/${key}`,
+          message: `${key}: tray ${d.tray} needs ${n} values (one per pump-around); got ${g.length}`,
+        });
+        continue;
+      }
+      if (p0 === undefined) continue;
+      if (corners.some((dq) => p0 + dq.reduce((s, q, i) => s + g[i]! * q, 0) <= 0))
+        faults.push({
+          path: `/propertyDrift/${j}/${key}`,
+          message: `${key}: tray ${d.tray}, the property would fall to zero or below within the sweeps`,
+        });
+    }
+  });
+  return faults;
+}

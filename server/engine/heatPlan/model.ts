@@ -55,7 +55,7 @@ export function planModel(input: HeatPlanInput): PlanModel {
   const numbering = input.numbering ?? 'top-down';
   const prepared = new Map<StudySection, PreparedSection>(input.sections.map((s) => [s, prepareSection(s, input.methods)]));
   const sectionOf = input.trays.map((t) => prepared.get(sectionForTray(input.sections, t.tray)!)!);
-  const roles = trayRoles(input.trays, input.pumpArounds, numbering);
+  const roles = trayRoles(input.trays, input.pumpArounds, numbering, input.propertyDrift);
   return {
     input,
     pumpArounds: input.pumpArounds,

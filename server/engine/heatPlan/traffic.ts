@@ -10,7 +10,7 @@
  * pump-arounds below matter. Zones must not overlap (checked on input).
  */
 import type { TrayLoad } from '../../../shared/types/rating.js';
-import type { PlanPumpAround } from '../../../shared/types/heatPlan.js';
+import type { PlanPumpAround, TrayPropertyDrift } from '../../../shared/types/heatPlan.js';
 import type { TrayNumbering } from '../../../shared/types/pumpAround.js';
 import { condensedVapour, pumpAroundCirculation, shiftFraction } from '../pumpAround/traffic.js';
 
@@ -26,11 +26,15 @@ export interface TrayRole {
   zone: number;
   /** indices of the pump-arounds whose duty changes this tray's traffic (ascending) */
   dependsOn: number[];
+  /** property drift of the tray (calibration), null when its properties are held at base */
+  drift: TrayPropertyDrift | null;
 }
 
 /** One pump-around at one duty. */
 export interface DutyState {
   duty_kW: number;
+  /** Q − Q0 [kW] */
+  dutyChange_kW: number;
   /** Δm = (Q − Q0)/λ [kg/h] */
   condensed_kg_h: number;
   circulation_kg_h: number;
@@ -44,7 +48,12 @@ export interface PlanShiftedTray extends TrayLoad {
   dry: boolean;
 }
 
-export function trayRole(tray: number, pumpArounds: readonly PlanPumpAround[], numbering: TrayNumbering): TrayRole {
+export function trayRole(
+  tray: number,
+  pumpArounds: readonly PlanPumpAround[],
+  numbering: TrayNumbering,
+  drift: TrayPropertyDrift | null = null,
+): TrayRole {
   const fractions: number[] = [];
   const dependsOn: number[] = [];
   let zone = -1;
@@ -54,15 +63,17 @@ export function trayRole(tray: number, pumpArounds: readonly PlanPumpAround[], n
     if (region === 'zone') zone = i;
     if (fraction !== 0 || region === 'zone') dependsOn.push(i);
   });
-  return { tray, fractions, zone, dependsOn };
+  return { tray, fractions, zone, dependsOn, drift: dependsOn.length > 0 ? drift : null };
 }
 
 export function trayRoles(
   trays: readonly TrayLoad[],
   pumpArounds: readonly PlanPumpAround[],
   numbering: TrayNumbering,
+  drift: readonly TrayPropertyDrift[] = [],
 ): TrayRole[] {
-  return trays.map((t) => trayRole(t.tray, pumpArounds, numbering));
+  const byTray = new Map(drift.map((d) => [d.tray, d]));
+  return trays.map((t) => trayRole(t.tray, pumpArounds, numbering, byTray.get(t.tray) ?? null));
 }
 
 /** The zone latent heat of a pump-around [kJ/kg]. */
@@ -74,6 +85,7 @@ export function dutyState(pa: PlanPumpAround, duty_kW: number, latentHeat_kJ_kg:
   const c = pumpAroundCirculation(pa, duty_kW);
   return {
     duty_kW,
+    dutyChange_kW: duty_kW - pa.baseDuty_kW,
     condensed_kg_h: condensedVapour(duty_kW, pa.baseDuty_kW, zoneLatentHeat(pa, latentHeat_kJ_kg)),
     circulation_kg_h: c.circulation_kg_h,
     returnTemperatureDrop_K: c.returnTemperatureDrop_K,
@@ -109,7 +121,21 @@ export function shiftPlanTray(load: TrayLoad, role: TrayRole, states: readonly D
   if (load.liquidViscosity_mPa_s !== undefined) out.liquidViscosity_mPa_s = load.liquidViscosity_mPa_s;
   if (load.temperature_C !== undefined) out.temperature_C = load.temperature_C;
   if (load.pressure_kPa !== undefined) out.pressure_kPa = load.pressure_kPa;
+  if (role.drift) applyDrift(out, role, states);
   return out;
+}
+
+/** Properties moved by the tray's drift: p = p0 + Σ_i g_i·(Q_i − Q0_i) over the duties it depends on. */
+function applyDrift(out: TrayLoad, role: TrayRole, states: readonly DutyState[]): void {
+  const d = role.drift!;
+  const mu = d.liquidViscosity_mPa_s_per_kW;
+  for (const i of role.dependsOn) {
+    const dq = states[i]!.dutyChange_kW;
+    out.vapourDensity_kg_m3 += d.vapourDensity_kg_m3_per_kW[i]! * dq;
+    out.liquidDensity_kg_m3 += d.liquidDensity_kg_m3_per_kW[i]! * dq;
+    out.surfaceTension_mN_m += d.surfaceTension_mN_m_per_kW[i]! * dq;
+    if (mu && out.liquidViscosity_mPa_s !== undefined) out.liquidViscosity_mPa_s += mu[i]! * dq;
+  }
 }
 
 export interface PlanTraffic {
@@ -127,9 +153,10 @@ export function shiftPlanTraffic(
   duties_kW: readonly number[],
   latentHeat_kJ_kg: number,
   numbering: TrayNumbering = 'top-down',
+  drift: readonly TrayPropertyDrift[] = [],
 ): PlanTraffic {
   const states = pumpArounds.map((pa, i) => dutyState(pa, duties_kW[i]!, latentHeat_kJ_kg));
-  const roles = trayRoles(base, pumpArounds, numbering);
+  const roles = trayRoles(base, pumpArounds, numbering, drift);
   return {
     duties_kW: [...duties_kW],
     condenserDutyChange_kW: condenserDutyChange(pumpArounds, duties_kW),

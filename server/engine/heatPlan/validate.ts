@@ -6,7 +6,7 @@ import { Ajv } from 'ajv';
 import { heatPlanSchema } from '../../../shared/schemas/heatPlan.js';
 import type { HeatPlanInput, HeatPlanValidation } from '../../../shared/types/heatPlan.js';
 import { ajvFieldError } from '../pumpAround/validate.js';
-import { heatPlanFaults } from './faults.js';
+import { driftFaults, heatPlanFaults } from './faults.js';
 
 const ajv = new Ajv({ useDefaults: true, allErrors: true, strict: true });
 const schemaCheck = ajv.compile<HeatPlanInput>(heatPlanSchema);
@@ -14,6 +14,6 @@ const schemaCheck = ajv.compile<HeatPlanInput>(heatPlanSchema);
 export function validateHeatPlanInput(json: unknown): HeatPlanValidation {
   const copy: unknown = json === undefined ? undefined : structuredClone(json);
   if (!schemaCheck(copy)) return { ok: false, errors: (schemaCheck.errors ?? []).map((e) => ajvFieldError(json, e)) };
-  const faults = heatPlanFaults(copy);
+  const faults = [...heatPlanFaults(copy), ...driftFaults(copy)];
   return faults.length ? { ok: false, errors: faults } : { ok: true, value: copy };
 }

@@ -84,3 +84,42 @@ describe('heat-recovery plan over the duty grid', () => {
       );
   });
 });
+
+describe('heat-recovery plan with property drift', () => {
+  const input = example(4, 5);
+  const drift = input.trays
+    .filter((t) => t.tray <= 18)
+    .map((t) => ({
+      tray: t.tray,
+      vapourDensity_kg_m3_per_kW: [3e-5, 2e-5],
+      liquidDensity_kg_m3_per_kW: [-2e-3, 1e-3],
+      surfaceTension_mN_m_per_kW: [0, 0],
+    }));
+  const withDrift = { ...input, propertyDrift: drift };
+
+  it('is accepted, moves the ratings, and shared ratings still equal fresh ones', () => {
+    expect(validateHeatPlanInput(withDrift).ok).toBe(true);
+    const a = runHeatPlan(withDrift);
+    const b = runHeatPlan(withDrift, { reuseRatings: false });
+    expect(JSON.stringify(a.points)).toBe(JSON.stringify(b.points));
+    const plain = runHeatPlan(input);
+    const last = a.points.length - 1;
+    expect(a.points[last]!.trays[0]!.rating.checks.jetFlood.percentOfLimit).not.toBe(
+      plain.points[last]!.trays[0]!.rating.checks.jetFlood.percentOfLimit,
+    );
+  });
+
+  it('refuses drift that would take a property to zero within the sweeps, naming the field', () => {
+    const bad = structuredClone(withDrift);
+    bad.propertyDrift[2]!.vapourDensity_kg_m3_per_kW = [-1e-2, 0];
+    bad.propertyDrift[3]!.liquidDensity_kg_m3_per_kW = [1e-3];
+    const v = validateHeatPlanInput(bad);
+    expect(v.ok).toBe(false);
+    if (v.ok) return;
+    expect(v.errors).toContainEqual({
+      path: '/propertyDrift/2/vapourDensity_kg_m3_per_kW',
+      message: 'vapourDensity_kg_m3_per_kW: tray 3, the property would fall to zero or below within the sweeps',
+    });
+    expect(v.errors).toContainEqual(expect.objectContaining({ path: '/propertyDrift/3/liquidDensity_kg_m3_per_kW' }));
+  });
+});
