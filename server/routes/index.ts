@@ -3,6 +3,7 @@ import { authRoutes } from './auth.js';
 import { columnRoutes } from './columns.js';
 import { evidenceRoutes } from './evidence.js';
 import { healthRoutes } from './health.js';
+import { heatPlanRoutes } from './heatPlans.js';
 import { inspectionRoutes } from './inspections.js';
 import { photoRoutes } from './photos.js';
 import { importRoutes } from './imports.js';
@@ -27,6 +28,7 @@ export const allRoutes: RouteDef[] = [
   ...mailRoutes,
   ...methodRoutes,
   ...studyRoutes,
+  ...heatPlanRoutes,
   ...inspectionRoutes,
   ...photoRoutes,
   ...evidenceRoutes,

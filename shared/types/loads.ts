@@ -18,6 +18,15 @@ export interface StageMapEntry {
   lastTray: number;
 }
 
+/**
+ * The duty of one of the column's pump-arounds at which a load case (usually a simulation case) was made.
+ * Tagged cases calibrate a heat-recovery plan's traffic model (issue 17); PUT /load-cases/:id/pump-around-duties.
+ */
+export interface PumpAroundDutyTag {
+  pumpAroundId: string;
+  duty_kW: number;
+}
+
 export interface LoadCaseSummary {
   id: string;
   columnId: string;
@@ -32,6 +41,8 @@ export interface LoadCaseSummary {
   lastTray: number | null;
   createdBy: string | null;
   createdByName: string | null;
+  /** pump-around duties the case was made at; empty when not tagged */
+  pumpAroundDuties: PumpAroundDutyTag[];
   version: number;
   updatedAt: string;
 }

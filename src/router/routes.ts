@@ -93,6 +93,18 @@ export const routes: RouteRecordRaw[] = [
       },
       { path: 'studies/:id', name: 'study', component: () => import('../pages/StudyPage.vue'), meta: { permission: 'read' } },
       {
+        path: 'columns/:id/heat-plans/new',
+        name: 'heat-plan-new',
+        component: () => import('../pages/HeatPlanPage.vue'),
+        meta: { permission: 'ratings.run' },
+      },
+      {
+        path: 'heat-plans/:id',
+        name: 'heat-plan',
+        component: () => import('../pages/HeatPlanPage.vue'),
+        meta: { permission: 'read' },
+      },
+      {
         path: 'inspections',
         name: 'inspections',
         component: () => import('../pages/InspectionListPage.vue'),

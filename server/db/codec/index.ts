@@ -47,6 +47,9 @@ export const snapshotTransformer: ValueTransformer = {
   from: (b: Buffer | null) => (b ? decodeJson(b) : b),
 };
 
+/** TypeORM transformer for a bytea column holding any JSON value as FRJ1 (heat_plans.results). */
+export const compressedJsonTransformer: ValueTransformer = snapshotTransformer;
+
 /** TypeORM transformer for the rating_runs.results column (bytea). */
 export const resultsTransformer: ValueTransformer = {
   to: (r: RunResults | null | undefined) => (r ? encodeResults(r) : r),

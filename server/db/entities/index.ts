@@ -12,6 +12,8 @@ import { InspectionTray } from './InspectionTray.js';
 import { PunchItemEntity } from './PunchItem.js';
 import { ProcessUnit } from './ProcessUnit.js';
 import { PumpAroundStudy } from './PumpAroundStudy.js';
+import { HeatPlan } from './HeatPlan.js';
+import { HeatPlanPoint } from './HeatPlanPoint.js';
 import { Site } from './Site.js';
 import { SiteMember } from './SiteMember.js';
 import { TowerColumn } from './TowerColumn.js';
@@ -21,8 +23,8 @@ export { MailOutbox };
 export { ImportPreviewEntity };
 export { Inspection, InspectionPhoto, InspectionTray, PunchItemEntity };
 export { LoadCase, PumpAround, RatingRun, TraySection };
-export { PumpAroundStudy };
 export { FieldEvidence };
+export { HeatPlan, HeatPlanPoint, PumpAroundStudy };
 export { AuditEntry, ProcessUnit, Site, SiteMember, TowerColumn, User };
 
 /** Every entity; add new ones here. */
@@ -35,6 +37,8 @@ export const entities = [
   AuditEntry,
   MailOutbox,
   PumpAroundStudy,
+  HeatPlan,
+  HeatPlanPoint,
   TraySection,
   PumpAround,
   LoadCase,

@@ -10,6 +10,7 @@ import { ImportPreviews1764690000000 } from './1764690000000-ImportPreviews.js';
 import { RunResultsByName1764750000000 } from './1764750000000-RunResultsByName.js';
 import { PunchVoid1764840000000 } from './1764840000000-PunchVoid.js';
 import { FieldEvidence1764820000000 } from './1764820000000-FieldEvidence.js';
+import { HeatPlans1764830000000 } from './1764830000000-HeatPlans.js';
 
 /** Every migration in order; add new ones at the end. */
 export const migrations = [
@@ -25,4 +26,5 @@ export const migrations = [
   RunResultsByName1764750000000,
   PunchVoid1764840000000,
   FieldEvidence1764820000000,
+  HeatPlans1764830000000,
 ];

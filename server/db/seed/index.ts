@@ -10,6 +10,7 @@ import { seedEvidence } from './evidence.js';
 import { seedInspection } from './inspection.js';
 import { seedPlant } from './plant.js';
 import { seedStudy } from './study.js';
+import { seedHeatPlan } from './heatPlan.js';
 
 /** Seed the invented demo scenario once: skipped when the demo admin already exists. */
 export async function seedDemo(ds: DataSource): Promise<boolean> {
@@ -22,6 +23,7 @@ export async function seedDemo(ds: DataSource): Promise<boolean> {
     await seedDemoScenario(em, plant.column, users);
     await seedInspection(em, plant.column.id, users);
     await seedStudy(em, plant.column.id, users);
+    await seedHeatPlan(em, plant.column.id, users);
     await seedEvidence(em, plant.column, users);
     // Later seed steps (sections, load cases, runs, inspections) hang off the demo plant here.
     void plant;

@@ -20,6 +20,7 @@ export function toLoadCaseSummary(l: LoadCase, authorName: string | null): LoadC
     lastTray: trays.length ? Math.max(...trays) : null,
     createdBy: l.createdBy,
     createdByName: authorName,
+    pumpAroundDuties: l.pumpAroundDuties ?? [],
     version: l.version,
     updatedAt: iso(l.updatedAt),
   };

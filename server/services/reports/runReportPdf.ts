@@ -217,15 +217,6 @@ function verdictText(t: RunTrayResult): string {
 
 /** The correlations the run's checks name and those they rely on, each with its source and, once, its uncertainty. */
 function methodsBlock(run: RunRecord): Content[] {
-  const ids = new Set(run.results.trays.flatMap((t) => Object.values(t.checks).map((c) => c.method)));
-  for (const id of [...ids]) for (const u of METHOD_USES[id] ?? []) ids.add(u);
-  const used = Object.values(METHOD_METADATA)
-    .filter((m) => ids.has(m.id))
-    .sort((a, b) => a.label.localeCompare(b.label));
-  const basis = (m: (typeof used)[number]) => {
-    const u = m.uncertainty ?? PROVENANCE_UNCERTAINTY[m.provenance];
-    return `${PROVENANCE_LABELS[m.provenance]}${u ? `. ${u}` : ''}`;
-  };
   return [
     { text: 'Methods and sources', style: 'h2' },
     run.engineVersion !== ENGINE_VERSION
@@ -235,18 +226,32 @@ function methodsBlock(run: RunRecord): Content[] {
           margin: [0, 0, 0, 4],
         }
       : '',
-    {
-      table: {
-        headerRows: 1,
-        widths: ['auto', '*', '*', '*'],
-        body: [
-          ['Correlation', 'Equation', 'Source', 'Basis and uncertainty'].map(th),
-          ...used.map((m) => [m.label, m.equation, publishedSource(m.source), basis(m)]),
-        ],
-      },
-      fontSize: 7,
-    },
+    methodsTable(run.results.trays.flatMap((t) => Object.values(t.checks).map((c) => c.method))),
   ];
+}
+
+/** Table of the correlations named (and those they rely on): equation, published source, basis and uncertainty. */
+export function methodsTable(methodIds: Iterable<string>): Content {
+  const ids = new Set(methodIds);
+  for (const id of [...ids]) for (const u of METHOD_USES[id] ?? []) ids.add(u);
+  const used = Object.values(METHOD_METADATA)
+    .filter((m) => ids.has(m.id))
+    .sort((a, b) => a.label.localeCompare(b.label));
+  const basis = (m: (typeof used)[number]) => {
+    const u = m.uncertainty ?? PROVENANCE_UNCERTAINTY[m.provenance];
+    return `${PROVENANCE_LABELS[m.provenance]}${u ? `. ${u}` : ''}`;
+  };
+  return {
+    table: {
+      headerRows: 1,
+      widths: ['auto', '*', '*', '*'],
+      body: [
+        ['Correlation', 'Equation', 'Source', 'Basis and uncertainty'].map(th),
+        ...used.map((m) => [m.label, m.equation, publishedSource(m.source), basis(m)]),
+      ],
+    },
+    fontSize: 7,
+  };
 }
 
 /** The run's verdict in one line: flooded and dry trays by name, otherwise the controlling check; then the rest. */

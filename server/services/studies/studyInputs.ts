@@ -54,7 +54,11 @@ export async function loadStudyParts(
  * the circulation at each duty itself). With zoneLiquidIncludesCirculation the base circulation
  * m0 = Q0/(c_p ΔT) (or the fixed circulation) is taken off every zone tray; below zero is an error.
  */
-function netZoneLiquid(trays: TrayLoad[], pa: PumpAroundSpec, numbering: TrayNumbering): { trays: TrayLoad[]; m0: number } {
+export function netZoneLiquid(
+  trays: TrayLoad[],
+  pa: PumpAroundSpec,
+  numbering: TrayNumbering,
+): { trays: TrayLoad[]; m0: number } {
   const hasOne = (pa.returnTemperatureDrop_K !== undefined) !== (pa.circulation_kg_h !== undefined);
   if (!hasOne || !(pa.liquidHeatCapacity_kJ_kgK > 0)) return { trays, m0: 0 };
   const m0 = pumpAroundCirculation(pa, pa.baseDuty_kW).circulation_kg_h;

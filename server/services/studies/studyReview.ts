@@ -6,18 +6,18 @@
  */
 import type { DataSource } from 'typeorm';
 import { PumpAroundStudy } from '../../db/entities/PumpAroundStudy.js';
-import { ConflictError, ForbiddenError, ValidationError } from '../../errors.js';
+import { ConflictError } from '../../errors.js';
 import { queueNotice, reviewerEmails, userEmail } from '../../mail/outbox.js';
 import { audit } from '../audit/audit.js';
+import { assertReviewStep, REVIEW_TO, type ReviewAction } from './reviewRules.js';
 import { getStudy } from './studies.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { ReviewEntry } from '../../../shared/types/runs.js';
-import type { StudyRecord, StudyReviewBody, StudyStatus } from '../../../shared/types/studies.js';
+import type { StudyRecord, StudyReviewBody } from '../../../shared/types/studies.js';
 
-export type StudyAction = 'submit' | 'approve' | 'return';
+export type StudyAction = ReviewAction;
 
-const FROM: Record<StudyAction, StudyStatus[]> = { submit: ['draft', 'returned'], approve: ['submitted'], return: ['submitted'] };
-const TO: Record<StudyAction, StudyStatus> = { submit: 'submitted', approve: 'approved', return: 'returned' };
+const TO = REVIEW_TO;
 
 export async function reviewStudy(
   ds: DataSource,
@@ -26,26 +26,9 @@ export async function reviewStudy(
   action: StudyAction,
   body: StudyReviewBody,
 ): Promise<StudyRecord> {
-  const comment = body.comment?.trim() ?? '';
   await ds.transaction(async (em) => {
     const current = await getStudy(em, user, id); // 404 when not visible
-    if (current.status === 'approved') throw new ConflictError('The study is approved and read-only');
-    if (current.version !== body.version)
-      throw new ConflictError('The study was changed by someone else: reload it', [
-        { path: 'version', message: `is ${body.version}, the stored study is at ${current.version}` },
-      ]);
-    if (!FROM[action].includes(current.status))
-      throw new ConflictError(
-        `A ${current.status} study cannot be ${action === 'submit' ? 'submitted' : action === 'approve' ? 'approved' : 'returned'}`,
-        [{ path: 'status', message: `must be ${FROM[action].join(' or ')}; is ${current.status}` }],
-      );
-    if (action === 'submit' && current.authorId !== user.id) throw new ForbiddenError('Only the author may submit the study');
-    if (action !== 'submit' && current.authorId === user.id)
-      throw new ForbiddenError('A study is reviewed by someone other than its author');
-    if (action === 'return' && !comment)
-      throw new ValidationError('A comment is required to return a study', [
-        { path: 'comment', message: 'is required to return a study' },
-      ]);
+    const comment = assertReviewStep('study', current, user, action, body);
 
     const entry: ReviewEntry = { at: new Date().toISOString(), userId: user.id, userName: user.name, action, comment };
     const now = new Date();

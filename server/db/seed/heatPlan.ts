@@ -1,0 +1,66 @@
+/**
+ * Demo heat-recovery plan (issue 17): T-701's two pump-arounds (top and diesel) rated together over a 21 × 21
+ * grid of duties on the demo base load case, authored by the demo process engineer and left as a draft.
+ * c_p, ΔT, λ, the useful temperature and the base condenser duty are invented demo values (no plant data);
+ * draw temperatures come from the demo load case. The demo load cases carry the circulation on the zone
+ * trays, as a rating case does, so the plan takes the base circulations off first. The margin is 80 %: at the
+ * usual 70 % no split of this invented case keeps the margin (the plan's margin table shows it).
+ */
+import type { EntityManager } from 'typeorm';
+import type { User } from '../entities/User.js';
+import { ValidationError } from '../../errors.js';
+import { buildPlan, insertPlan } from '../../services/heatPlans/plans.js';
+import type { HeatPlan } from '../entities/HeatPlan.js';
+import type { CreateHeatPlanBody } from '../../../shared/types/heatPlans.js';
+
+/** invented demo values */
+const DEMO = {
+  latentHeat_kJ_kg: 265,
+  cp_kJ_kgK: [2.6, 2.8],
+  drop_K: [85, 130],
+  usefulAbove_C: 150,
+  condenser_kW: 52000,
+};
+
+export async function seedHeatPlan(em: EntityManager, columnId: string, users: User[]): Promise<HeatPlan | null> {
+  const author = users.find((u) => u.role === 'process-engineer');
+  const [column] = (await em.query(`SELECT numbering FROM columns WHERE id = $1`, [columnId])) as { numbering: string }[];
+  const order = column?.numbering === 'bottom-up' ? 'DESC' : 'ASC';
+  const pas = (await em.query(
+    `SELECT id, base_duty_kw::float8 AS duty FROM pump_arounds WHERE column_id = $1 ORDER BY return_tray ${order} LIMIT 2`,
+    [columnId],
+  )) as { id: string; duty: number }[];
+  const [lc] = (await em.query(
+    `SELECT id FROM load_cases WHERE column_id = $1 ORDER BY (basis = 'normal') DESC, created_at LIMIT 1`,
+    [columnId],
+  )) as { id: string }[];
+  if (!author || pas.length < 2 || !lc) return null;
+  const sweep = (duty: number) => ({
+    fromDuty_kW: Math.round((0.5 * duty) / 100) * 100,
+    toDuty_kW: Math.round((1.5 * duty) / 100) * 100,
+    steps: 20,
+  });
+  const body: CreateHeatPlanBody = {
+    label: 'Top and diesel pump-arounds: best split for preheat (80 % margin)',
+    loadCaseId: lc.id,
+    pumpArounds: pas.map((p, i) => ({
+      pumpAroundId: p.id,
+      sweep: sweep(p.duty),
+      liquidHeatCapacity_kJ_kgK: DEMO.cp_kJ_kgK[i]!,
+      returnTemperatureDrop_K: DEMO.drop_K[i]!,
+    })),
+    latentHeat_kJ_kg: DEMO.latentHeat_kJ_kg,
+    usefulAboveTemperature_C: DEMO.usefulAbove_C,
+    baseCondenserDuty_kW: DEMO.condenser_kW,
+    zoneLiquidIncludesCirculation: true,
+    margin: 0.8,
+  };
+  try {
+    const built = await buildPlan(em, columnId, body);
+    return await insertPlan(em, author.id, body, built);
+  } catch (e) {
+    // the demo plant's data did not make a valid plan: keep the rest of the demo, say why
+    console.warn('Demo heat-recovery plan skipped:', e instanceof ValidationError ? JSON.stringify(e.details) : e);
+    return null;
+  }
+}

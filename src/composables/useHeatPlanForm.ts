@@ -1,0 +1,89 @@
+/**
+ * The new heat-recovery plan form: values as typed (the user's units) and the request body in SI.
+ * Defaults: margin 70 % of the dry-out duty (common practice), L/V flagged below 80 % of the base case's.
+ */
+import type { useUnitsStore } from '../stores/units-store';
+import type { CreateHeatPlanBody } from '../../shared/types/heatPlans';
+import type { PumpAroundRecord } from '../../shared/types/columns';
+
+type Units = ReturnType<typeof useUnitsStore>;
+
+export interface PlanFormPumpAround {
+  pumpAroundId: string;
+  name: string;
+  from: number | null;
+  to: number | null;
+  steps: number | null;
+  cp: number | null;
+  returnDrop: number | null;
+  drawTemperature: number | null;
+}
+
+export interface HeatPlanForm {
+  label: string;
+  loadCaseId: string | null;
+  pumpArounds: PlanFormPumpAround[];
+  latentHeat: number | null;
+  usefulAbove: number | null;
+  marginPercent: number | null;
+  thresholdPercent: number | null;
+  baseCondenserDuty: number | null;
+  simulationCaseIds: string[];
+  zoneIncludesCirculation: boolean;
+}
+
+export function emptyPlanForm(): HeatPlanForm {
+  return {
+    label: '',
+    loadCaseId: null,
+    pumpArounds: [],
+    latentHeat: null,
+    usefulAbove: null,
+    marginPercent: 70,
+    thresholdPercent: 80,
+    baseCondenserDuty: null,
+    simulationCaseIds: [],
+    zoneIncludesCirculation: false,
+  };
+}
+
+/** A pump-around row with its duty range from 0.5 to 1.5 times its stored duty (edit as needed). */
+export function planFormPumpAround(p: PumpAroundRecord, units: Units): PlanFormPumpAround {
+  const show = (kw: number) => Math.round(units.show('duty', kw));
+  return {
+    pumpAroundId: p.id,
+    name: p.name,
+    from: show(0.5 * p.baseDuty_kW),
+    to: show(1.5 * p.baseDuty_kW),
+    steps: 20,
+    cp: null,
+    returnDrop: null,
+    drawTemperature: null,
+  };
+}
+
+/** The request body in SI; an empty required number goes as null, so the server names the field. */
+export function planBody(f: HeatPlanForm, units: Units): CreateHeatPlanBody {
+  const duty = (v: number | null) => (v === null ? null : units.enter('duty', v));
+  const temp = (v: number | null) => (v === null ? null : units.enter('temperature', v));
+  const body: Record<string, unknown> = {
+    loadCaseId: f.loadCaseId ?? '',
+    pumpArounds: f.pumpArounds.map((p) => ({
+      pumpAroundId: p.pumpAroundId,
+      sweep: { fromDuty_kW: duty(p.from), toDuty_kW: duty(p.to), steps: p.steps },
+      liquidHeatCapacity_kJ_kgK: p.cp,
+      // a temperature difference: kelvin as typed
+      ...(p.returnDrop !== null ? { returnTemperatureDrop_K: p.returnDrop } : {}),
+      ...(p.drawTemperature !== null ? { drawTemperature_C: temp(p.drawTemperature) } : {}),
+    })),
+    latentHeat_kJ_kg: f.latentHeat,
+    usefulAboveTemperature_C: temp(f.usefulAbove),
+    zoneLiquidIncludesCirculation: f.zoneIncludesCirculation,
+  };
+  if (f.label.trim()) body.label = f.label.trim();
+  if (f.marginPercent !== null) body.margin = f.marginPercent / 100;
+  if (f.thresholdPercent !== null) body.liquidToVapourThreshold = f.thresholdPercent / 100;
+  if (f.baseCondenserDuty !== null) body.baseCondenserDuty_kW = duty(f.baseCondenserDuty);
+  if (f.simulationCaseIds.length) body.simulationCaseIds = f.simulationCaseIds;
+  return body as unknown as CreateHeatPlanBody;
+}

@@ -1,0 +1,258 @@
+/**
+ * Stored heat-recovery plans (issue 17): built from the stored column, read back with the map and one grid
+ * point's trays, reviewed with separation of duties, hidden from other sites, bad input named by field.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { planReportDoc } from '../../server/services/reports/heatPlanReportFiles.js';
+import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
+import { EXAMPLE } from './study-fixture.js';
+import { makeHeatPlanColumn, type HeatPlanFixture } from './heatPlan-fixture.js';
+import type { HeatPlanRecord, SlimPlanPoint } from '../../shared/types/heatPlans.js';
+
+let ctx: TestContext;
+let fx: HeatPlanFixture;
+let other: HeatPlanFixture;
+type Agent = Awaited<ReturnType<typeof signedIn>>['agent'];
+let author: Agent;
+let reviewer: Agent;
+let outsider: Agent;
+let viewer: Agent;
+
+beforeAll(async () => {
+  ctx = await setupApp();
+  fx = await makeHeatPlanColumn(ctx.ds);
+  other = await makeHeatPlanColumn(ctx.ds);
+  author = (await signedIn(ctx, 'process-engineer', [fx.siteId])).agent;
+  reviewer = (await signedIn(ctx, 'internals-specialist', [fx.siteId])).agent;
+  outsider = (await signedIn(ctx, 'internals-specialist', [other.siteId])).agent;
+  viewer = (await signedIn(ctx, 'viewer', [fx.siteId])).agent;
+});
+afterAll(() => ctx.close());
+
+/** invented plan inputs on the test column: 6 × 6 grid around both base duties */
+function planBody(f: HeatPlanFixture): Record<string, unknown> {
+  const top = EXAMPLE.pumpAround;
+  return {
+    label: 'Split between the two pump-arounds',
+    loadCaseId: f.loadCaseId,
+    pumpArounds: [
+      {
+        pumpAroundId: f.pumpAroundId,
+        sweep: { fromDuty_kW: 3000, toDuty_kW: 9000, steps: 5 },
+        liquidHeatCapacity_kJ_kgK: top.liquidHeatCapacity_kJ_kgK,
+        returnTemperatureDrop_K: top.returnTemperatureDrop_K,
+      },
+      {
+        pumpAroundId: f.lowerPumpAroundId,
+        sweep: { fromDuty_kW: 2000, toDuty_kW: 8000, steps: 5 },
+        liquidHeatCapacity_kJ_kgK: 2.6,
+        returnTemperatureDrop_K: 60,
+        drawTemperature_C: 221,
+      },
+    ],
+    latentHeat_kJ_kg: EXAMPLE.latentHeat_kJ_kg,
+    usefulAboveTemperature_C: 150,
+    baseCondenserDuty_kW: 30000,
+    methods: EXAMPLE.methods,
+  };
+}
+const create = (agent: Agent, body: Record<string, unknown>, columnId = fx.columnId) =>
+  agent.post(`/api/columns/${columnId}/heat-plans`).send(body);
+const paths = (res: { body: { details?: { path: string }[] } }) => (res.body.details ?? []).map((d) => d.path);
+
+describe('a stored heat-recovery plan', () => {
+  let plan: HeatPlanRecord;
+
+  it('is rated from the stored column and read back with its map, boundary and suggestion', async () => {
+    const res = await create(author, planBody(fx));
+    expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
+    plan = res.body;
+    expect(plan.status).toBe('draft');
+    expect(plan.pumpAroundNames).toEqual([EXAMPLE.pumpAround.name, 'Lower PA (invented)']);
+    const r = plan.result;
+    expect(r.axes.map((a) => a.length)).toEqual([6, 6]);
+    expect(r.grid).toHaveLength(36);
+    expect(r.axes[0]![0]).toBe(3000);
+    expect(r.axes[1]![5]).toBe(8000);
+    // grid order: the first pump-around's duty varies slowest
+    expect(r.grid[7]!.duties_kW).toEqual([r.axes[0]![1], r.axes[1]![1]]);
+    // the condenser takes what the pump-arounds no longer take, point by point
+    for (const p of r.grid) expect(p.condenserDutyChange_kW).toBeCloseTo(-(p.duties_kW[0]! - 5200) - (p.duties_kW[1]! - 4000), 6);
+    // draw temperature of the top pump-around taken from the base case's draw tray (tray 9: 180 °C)
+    expect(plan.inputs.input.pumpArounds[0]!.drawTemperature_C).toBe(180);
+    expect(plan.inputs.input.pumpArounds[1]!.drawTemperature_C).toBe(221);
+    // the current operation is rated at its own duties, between the grid nodes (3000, 4200, 5400 … kW)
+    const base = r.keyPoints.find((k) => k.kind === 'base')!.point;
+    expect(base.duties_kW).toEqual([5200, 4000]);
+    expect(base.trays.find((t) => t.tray === 16)!.vapourMassFlow_kg_h).toBeCloseTo(
+      EXAMPLE.trays.find((t) => t.tray === 16)!.vapourMassFlow_kg_h,
+      6,
+    );
+    if (r.suggestion) expect(r.keyPoints.find((k) => k.kind === 'suggestion')!.point.duties_kW).toEqual(r.suggestion.duties_kW);
+    const listed = await author.get(`/api/columns/${fx.columnId}/heat-plans`);
+    expect(listed.body.map((p: { id: string }) => p.id)).toContain(plan.id);
+  });
+
+  it('serves one grid point with every tray: traffic and percent of limit per check', async () => {
+    const res = await author.get(`/api/heat-plans/${plan.id}/points/7`);
+    expect(res.status).toBe(200);
+    const p = res.body as SlimPlanPoint;
+    expect(p.duties_kW).toEqual(plan.result.grid[7]!.duties_kW);
+    expect(p.trays.map((t) => t.tray)).toEqual(EXAMPLE.trays.map((t) => t.tray));
+    expect(p.trays[0]!.percent).toHaveLength(plan.result.checkNames.length);
+    // the worst percent of the summary is the highest applicable percent over the trays
+    const worst = Math.max(...p.trays.flatMap((t) => t.percent.filter((_, i) => t.status[i] !== 'na')));
+    expect(plan.result.grid[7]!.worstPercent).toBeCloseTo(worst, 6);
+    // trays below the lower draw keep their base traffic
+    const below = p.trays.find((t) => t.tray === 16)!;
+    expect(below.vapourMassFlow_kg_h).toBeCloseTo(EXAMPLE.trays.find((t) => t.tray === 16)!.vapourMassFlow_kg_h, 6);
+    const out = await author.get(`/api/heat-plans/${plan.id}/points/36`);
+    expect(out.status).toBe(400);
+    expect(out.body.details).toEqual([{ path: 'index', message: "is 36; the plan's grid has points 0 to 35" }]);
+  });
+
+  it('is reviewed by someone other than its author; approved is read-only', async () => {
+    expect((await reviewer.post(`/api/heat-plans/${plan.id}/submit`).send({ version: plan.version })).status).toBe(403);
+    const sub = await author
+      .post(`/api/heat-plans/${plan.id}/submit`)
+      .send({ version: plan.version, comment: 'Please check the lower zone' });
+    expect(sub.status).toBe(200);
+    expect(sub.body.status).toBe('submitted');
+    expect((await author.post(`/api/heat-plans/${plan.id}/approve`).send({ version: sub.body.version })).status).toBe(403);
+    const noComment = await reviewer.post(`/api/heat-plans/${plan.id}/return`).send({ version: sub.body.version });
+    expect(noComment.status).toBe(400);
+    expect(paths(noComment)).toEqual(['comment']);
+    const stale = await reviewer.post(`/api/heat-plans/${plan.id}/approve`).send({ version: sub.body.version - 1 });
+    expect(stale.status).toBe(409);
+    const ok = await reviewer.post(`/api/heat-plans/${plan.id}/approve`).send({ version: sub.body.version });
+    expect(ok.status).toBe(200);
+    expect(ok.body.status).toBe('approved');
+    expect(ok.body.reviews.map((r: { action: string }) => r.action)).toEqual(['submit', 'approve']);
+    expect(
+      (await reviewer.post(`/api/heat-plans/${plan.id}/return`).send({ version: ok.body.version, comment: 'x' })).status,
+    ).toBe(409);
+  });
+
+  it("is hidden from another site's users (404) and a viewer cannot create one (403)", async () => {
+    expect((await outsider.get(`/api/heat-plans/${plan.id}`)).status).toBe(404);
+    expect((await outsider.get(`/api/heat-plans/${plan.id}/points/0`)).status).toBe(404);
+    expect((await outsider.get(`/api/columns/${fx.columnId}/heat-plans`)).status).toBe(404);
+    expect((await viewer.get(`/api/heat-plans/${plan.id}`)).status).toBe(200);
+    expect((await create(viewer, planBody(fx))).status).toBe(403);
+    expect((await create(outsider, planBody(fx))).status).toBe(404);
+  });
+});
+
+/** The text a PDF's reader reads: strings under text, lists, stacks and table bodies (not styles or charts). */
+function readerText(node: unknown): string[] {
+  if (typeof node === 'string') return [node];
+  if (Array.isArray(node)) return node.flatMap(readerText);
+  if (node && typeof node === 'object') {
+    const o = node as Record<string, unknown>;
+    return ['text', 'ul', 'ol', 'stack', 'columns', 'table', 'body'].flatMap((k) => (k in o ? readerText(o[k]) : []));
+  }
+  return [];
+}
+/** GET a binary answer (PDF, XLSX) as a Buffer. */
+const getBinary = (agent: Agent, url: string) =>
+  agent
+    .get(url)
+    .buffer(true)
+    .parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+
+describe('the plan report and export', () => {
+  let plan: HeatPlanRecord;
+  beforeAll(async () => {
+    // a load-case name that a spreadsheet would run as a formula
+    await ctx.ds.query(`UPDATE load_cases SET name = '=HYPERLINK("http://x.test")' WHERE id = $1`, [fx.loadCaseId]);
+    plan = (await create(author, planBody(fx))).body;
+  });
+
+  it('is a PDF with the cautions, the suggestion, the fit, methods with their sources; no drafting notes or internal ids', async () => {
+    const res = await getBinary(viewer, `/api/heat-plans/${plan.id}/report.pdf`);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    expect((res.body as Buffer).subarray(0, 4).toString('latin1')).toBe('%PDF');
+    const text = readerText(planReportDoc(plan, 'SI').content);
+    const all = text.join('\n');
+    expect(all).toMatch(/management-of-change review/);
+    expect(all).toMatch(/internals vendor and licensed engineers/);
+    expect(all).toMatch(/Screening estimate/);
+    expect(all).toMatch(/No simulation cases were used/);
+    expect(all).toMatch(/after Lieberman/); // the traffic model's source, stated once
+    expect(all.match(/after Lieberman/g)).toHaveLength(1);
+    expect(all).toMatch(/Fair/); // the jet-flood correlation's source in the methods table
+    for (const re of [/from memory/i, /to confirm/i, /\brecalled\b/i, /\[seen/i, /\.md\b/i]) expect(all).not.toMatch(re);
+    // internal ids such as jetFlood or downcomerBackup (units such as kJ or kW are not ids)
+    expect(text.filter((t) => /\b[a-z]{2,}[A-Z][a-z]+/.test(t))).toEqual([]);
+  });
+
+  it('exports CSV with formulas escaped and XLSX, both with the cautions', async () => {
+    const csv = await viewer.get(`/api/heat-plans/${plan.id}/export?format=csv`);
+    expect(csv.status).toBe(200);
+    expect(csv.headers['content-type']).toMatch(/text\/csv/);
+    expect(csv.text).toContain(`"'=HYPERLINK(""http://x.test"")"`);
+    expect(csv.text).toMatch(/management-of-change review/);
+    expect(csv.text).toMatch(/As the margin changes/);
+    const xlsx = await getBinary(viewer, `/api/heat-plans/${plan.id}/export?format=xlsx`);
+    expect(xlsx.status).toBe(200);
+    expect((xlsx.body as Buffer).subarray(0, 2).toString('latin1')).toBe('PK');
+    const bad = await viewer.get(`/api/heat-plans/${plan.id}/export?format=pdf`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.details[0].path).toBe('format');
+  });
+});
+
+describe('bad plan input is refused naming the field; nothing is stored', () => {
+  const count = async () =>
+    Number(
+      ((await ctx.ds.query(`SELECT count(*) FROM heat_plans WHERE column_id = $1`, [fx.columnId])) as { count: string }[])[0]!
+        .count,
+    );
+
+  it('one pump-around, a missing useful temperature, more than 40 steps; 41 × 41 points is stored', async () => {
+    const before = await count();
+    const body = planBody(fx);
+    const one = await create(author, { ...body, pumpArounds: (body.pumpArounds as unknown[]).slice(0, 1) });
+    expect(one.status).toBe(400);
+    expect(paths(one)).toContain('pumpArounds');
+    const { usefulAboveTemperature_C: _u, ...noUseful } = body;
+    expect(paths(await create(author, noUseful))).toContain('usefulAboveTemperature_C');
+    const pas = body.pumpArounds as { sweep: object }[];
+    const steps = (n: number) => pas.map((p) => ({ ...p, sweep: { fromDuty_kW: 1000, toDuty_kW: 9000, steps: n } }));
+    const tooMany = await create(author, { ...body, pumpArounds: steps(41) });
+    expect(tooMany.status).toBe(400);
+    expect(paths(tooMany)).toEqual(['pumpArounds.0.sweep.steps', 'pumpArounds.1.sweep.steps']);
+    expect(await count()).toBe(before);
+    const big = await create(author, { ...body, pumpArounds: steps(40) });
+    expect(big.status).toBe(201); // 41 × 41 is the largest stored grid of two pump-arounds
+    expect(big.body.result.grid).toHaveLength(1681);
+    expect(await count()).toBe(before + 1);
+  });
+
+  it("another column's pump-around or load case, an untagged simulation case, both ΔT and circulation", async () => {
+    const before = await count();
+    const body = planBody(fx);
+    const pas = body.pumpArounds as Record<string, unknown>[];
+    const foreign = await create(author, { ...body, pumpArounds: [pas[0], { ...pas[1], pumpAroundId: other.pumpAroundId }] });
+    expect(foreign.status).toBe(400);
+    expect(foreign.body.details).toEqual([
+      { path: 'pumpArounds.1.pumpAroundId', message: 'is not a pump-around of this column' },
+    ]);
+    const lc = await create(author, { ...body, loadCaseId: other.loadCaseId });
+    expect(paths(lc)).toEqual(['loadCaseId']);
+    const untagged = await create(author, { ...body, simulationCaseIds: [fx.simulationCaseIds[0], other.simulationCaseIds[0]] });
+    expect(paths(untagged)).toEqual(['simulationCaseIds.1']);
+    await ctx.ds.query(`UPDATE load_cases SET pump_around_duties = '[]' WHERE id = $1`, [fx.simulationCaseIds[1]]);
+    const notTagged = await create(author, { ...body, simulationCaseIds: fx.simulationCaseIds });
+    expect(notTagged.body.details[0].message).toMatch(/is not tagged with the duty of/);
+    const both = await create(author, { ...body, pumpArounds: [{ ...pas[0], circulation_kg_h: 200000 }, pas[1]] });
+    expect(both.status).toBe(400);
+    expect(paths(both).some((p) => p.startsWith('pumpArounds.0.'))).toBe(true);
+    expect(await count()).toBe(before);
+  });
+});
