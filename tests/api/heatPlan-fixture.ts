@@ -1,10 +1,13 @@
 /**
  * Fixture for the heat-recovery plan tests: the invented study column C-410 (study-fixture.ts) with a second,
- * lower pump-around (invented: draw tray 14, return tray 12) and two invented "simulation" load cases made
- * from the base case at other duties, so that a plan has two pump-arounds and cases to calibrate against.
+ * lower pump-around (invented: draw tray 14, return tray 12) and two invented "simulation" load cases made by
+ * the engine's own traffic model at other duties with a latent heat 10 % above the plan's (SIM_LATENT_HEAT),
+ * so that a calibration against them must find that latent heat again.
  */
 import type { DataSource } from 'typeorm';
 import { EXAMPLE, makeStudyColumn, type StudyFixture } from './study-fixture.js';
+import { shiftPlanTraffic, trayRoles } from '../../server/engine/heatPlan/index.js';
+import type { PlanPumpAround } from '../../shared/types/heatPlan.js';
 import type { TrayLoad } from '../../shared/types/rating.js';
 
 export interface HeatPlanFixture extends StudyFixture {
@@ -15,13 +18,27 @@ export interface HeatPlanFixture extends StudyFixture {
 /** invented lower pump-around of the test column */
 export const LOWER_PA = { name: 'Lower PA (invented)', drawTray: 14, returnTray: 12, baseDuty_kW: 4000 };
 
-/** The base case with every tray's traffic scaled: an invented stand-in for a simulation case at other duties. */
-function scaled(trays: TrayLoad[], f: number): TrayLoad[] {
-  return trays.map((t) => ({
-    ...t,
-    vapourMassFlow_kg_h: t.vapourMassFlow_kg_h * f,
-    liquidMassFlow_kg_h: t.liquidMassFlow_kg_h * f,
-  }));
+/** latent heat the synthetic simulation cases were made with: 10 % above the plan's (invented) */
+export const SIM_LATENT_HEAT = EXAMPLE.latentHeat_kJ_kg * 1.1;
+
+const sweep = { fromDuty_kW: 1000, toDuty_kW: 9000, steps: 4 };
+const PAS: PlanPumpAround[] = [
+  { ...EXAMPLE.pumpAround, drawTemperature_C: 180, sweep },
+  { ...LOWER_PA, liquidHeatCapacity_kJ_kgK: 2.6, returnTemperatureDrop_K: 60, drawTemperature_C: 221, sweep },
+];
+
+/**
+ * A synthetic simulation case: the base traffic moved by the model at these duties with SIM_LATENT_HEAT, the
+ * zone liquid net of the circulation (the pump-around as a side cooler, as a simulator's per-stage export has it).
+ */
+function synthetic(duties: number[]): TrayLoad[] {
+  const roles = trayRoles(EXAMPLE.trays, PAS, 'top-down');
+  const r = shiftPlanTraffic(EXAMPLE.trays, PAS, duties, SIM_LATENT_HEAT);
+  return r.trays.map((t, k) => {
+    const { rawLiquid_kg_h: raw, rawVapour_kg_h: _v, dry: _d, ...load } = t;
+    const zone = roles[k]!.zone;
+    return { ...load, liquidMassFlow_kg_h: zone >= 0 ? raw - r.states[zone]!.circulation_kg_h : raw };
+  });
 }
 
 export async function makeHeatPlanColumn(ds: DataSource): Promise<HeatPlanFixture> {
@@ -32,14 +49,15 @@ export async function makeHeatPlanColumn(ds: DataSource): Promise<HeatPlanFixtur
   )) as { id: string }[];
   const top = EXAMPLE.pumpAround.baseDuty_kW;
   const sims: string[] = [];
-  for (const [i, k] of [0.97, 1.03].entries()) {
+  for (const i of [0, 1]) {
+    const at = [top * (i ? 1.2 : 0.8), LOWER_PA.baseDuty_kW * (i ? 0.8 : 1.3)];
     const duties = [
-      { pumpAroundId: f.pumpAroundId, duty_kW: top * (i ? 1.2 : 0.8) },
-      { pumpAroundId: p!.id, duty_kW: LOWER_PA.baseDuty_kW * (i ? 0.8 : 1.2) },
+      { pumpAroundId: f.pumpAroundId, duty_kW: at[0]! },
+      { pumpAroundId: p!.id, duty_kW: at[1]! },
     ];
     const [lc] = (await ds.query(
       `INSERT INTO load_cases (column_id, name, basis, source, loads, pump_around_duties) VALUES ($1, $2, 'other', 'imported', $3, $4) RETURNING id`,
-      [f.columnId, `Simulation case ${i + 1}`, JSON.stringify(scaled(EXAMPLE.trays, k)), JSON.stringify(duties)],
+      [f.columnId, `Simulation case ${i + 1}`, JSON.stringify(synthetic(at)), JSON.stringify(duties)],
     )) as { id: string }[];
     sims.push(lc!.id);
   }

@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { planReportDoc } from '../../server/services/reports/heatPlanReportFiles.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { EXAMPLE } from './study-fixture.js';
-import { makeHeatPlanColumn, type HeatPlanFixture } from './heatPlan-fixture.js';
+import { makeHeatPlanColumn, SIM_LATENT_HEAT, type HeatPlanFixture } from './heatPlan-fixture.js';
 import type { HeatPlanRecord, SlimPlanPoint } from '../../shared/types/heatPlans.js';
 
 let ctx: TestContext;
@@ -140,6 +140,41 @@ describe('a stored heat-recovery plan', () => {
     expect((await viewer.get(`/api/heat-plans/${plan.id}`)).status).toBe(200);
     expect((await create(viewer, planBody(fx))).status).toBe(403);
     expect((await create(outsider, planBody(fx))).status).toBe(404);
+  });
+});
+
+describe('a plan calibrated against simulation cases', () => {
+  it('fits the latent heat the cases were made with, rates on the calibrated model and states the fit quality', async () => {
+    const res = await create(author, { ...planBody(fx), simulationCaseIds: fx.simulationCaseIds });
+    expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(201);
+    const plan = res.body as HeatPlanRecord;
+    const cal = plan.result.calibration!;
+    expect(cal.cases.map((c) => c.loadCaseId)).toEqual(fx.simulationCaseIds);
+    expect(plan.inputs.source.simulationCases.map((c) => c.name)).toEqual(['Simulation case 1', 'Simulation case 2']);
+    // the synthetic cases were made with a latent heat 10 % above the plan's: the fit finds it again
+    for (const f of cal.fitted) expect(f.value / SIM_LATENT_HEAT).toBeCloseTo(1, 3);
+    for (const pa of plan.inputs.input.pumpArounds) expect(pa.latentHeat_kJ_kg! / SIM_LATENT_HEAT).toBeCloseTo(1, 3);
+    expect(cal.rmsRelative).toBeLessThan(1e-3);
+    expect(cal.summary).toMatch(/^Fitted to 2 simulation cases/);
+    // model against simulation, tray by tray: the same traffic once fitted
+    const t = cal.cases[0]!.trays.find((x) => x.tray === 8)!;
+    expect(t.modelVapour_kg_h).toBeCloseTo(t.simVapour_kg_h, 0);
+    expect(readerText(planReportDoc(plan, 'SI').content).join('\n')).toContain(cal.summary);
+  });
+
+  it('a case without the load of every tray is refused, naming the case', async () => {
+    const lc = (await ctx.ds.query(`SELECT loads FROM load_cases WHERE id = $1`, [fx.simulationCaseIds[1]])) as {
+      loads: unknown[];
+    }[];
+    const [extra] = (await ctx.ds.query(
+      `INSERT INTO load_cases (column_id, name, basis, source, loads, pump_around_duties)
+       SELECT column_id, 'Simulation case, short', basis, source, $2, pump_around_duties FROM load_cases WHERE id = $1 RETURNING id`,
+      [fx.simulationCaseIds[1], JSON.stringify(lc[0]!.loads.slice(0, 10))],
+    )) as { id: string }[];
+    const res = await create(author, { ...planBody(fx), simulationCaseIds: [fx.simulationCaseIds[0], extra!.id] });
+    expect(res.status).toBe(400);
+    expect(paths(res)).toEqual(['simulationCaseIds.1 (trays)']);
+    expect(res.body.details[0].message).toMatch(/no load for trays 11, 12/);
   });
 });
 

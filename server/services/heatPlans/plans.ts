@@ -12,6 +12,7 @@ import { assertColumnVisible } from '../access/access.js';
 import { audit } from '../audit/audit.js';
 import { getHeatPlan } from './planRead.js';
 import { loadPlanParts, planInputFrom } from './planInputs.js';
+import { calibratePlan } from './planCalibration.js';
 import { runStoredPlan } from './planResult.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { CreateHeatPlanBody, HeatPlanInputsSnapshot, HeatPlanRecord } from '../../../shared/types/heatPlans.js';
@@ -47,8 +48,17 @@ export async function buildPlan(db: DataSource | EntityManager, columnId: string
       'The plan input is not valid',
       checked.errors.map((e) => ({ path: planRequestPath(e.path), message: e.message })),
     );
-  const { result, gridTrays } = runStoredPlan(checked.value);
-  const inputs: HeatPlanInputsSnapshot = { source, input: checked.value };
+  // with simulation cases, the plan is rated on the model calibrated against them
+  const calibrated = parts.simulations.length
+    ? calibratePlan(parts, source, checked.value, body.zoneLiquidIncludesCirculation === true)
+    : null;
+  const input = calibrated?.input ?? checked.value;
+  const { result, gridTrays } = runStoredPlan(input);
+  if (calibrated) {
+    result.calibration = calibrated.view;
+    result.notes.push(...calibrated.notes);
+  }
+  const inputs: HeatPlanInputsSnapshot = { source, input };
   return { parts, inputs, result, gridTrays };
 }
 
