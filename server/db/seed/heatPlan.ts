@@ -5,10 +5,17 @@
  * draw temperatures come from the demo load case. The demo load cases carry the circulation on the zone
  * trays, as a rating case does, so the plan takes the base circulations off first. The margin is 80 %: at the
  * usual 70 % no split of this invented case keeps the margin (the plan's margin table shows it).
+ * Two invented "simulation" cases are added and tagged with their duties: made by the traffic model itself
+ * with zone latent heats 8 % and 5 % above the plan's (no simulator was run), so the demo shows a calibration.
  */
 import type { EntityManager } from 'typeorm';
 import type { User } from '../entities/User.js';
 import { ValidationError } from '../../errors.js';
+import { shiftPlanTraffic } from '../../engine/heatPlan/index.js';
+import { insertLoadCase } from '../../services/loads/loads.js';
+import { toSessionUser } from '../../services/auth/users.js';
+import { LoadCase } from '../entities/LoadCase.js';
+import type { HeatPlanInput } from '../../../shared/types/heatPlan.js';
 import { buildPlan, insertPlan } from '../../services/heatPlans/plans.js';
 import type { HeatPlan } from '../entities/HeatPlan.js';
 import type { CreateHeatPlanBody } from '../../../shared/types/heatPlans.js';
@@ -56,11 +63,67 @@ export async function seedHeatPlan(em: EntityManager, columnId: string, users: U
     margin: 0.8,
   };
   try {
-    const built = await buildPlan(em, columnId, body);
-    return await insertPlan(em, author.id, body, built);
+    const first = await buildPlan(em, columnId, body);
+    const sims = await seedSimulationCases(
+      em,
+      columnId,
+      author,
+      first.inputs.input,
+      pas.map((p) => p.id),
+    );
+    const withCases = { ...body, simulationCaseIds: sims };
+    return await insertPlan(em, author.id, withCases, await buildPlan(em, columnId, withCases));
   } catch (e) {
     // the demo plant's data did not make a valid plan: keep the rest of the demo, say why
     console.warn('Demo heat-recovery plan skipped:', e instanceof ValidationError ? JSON.stringify(e.details) : e);
     return null;
   }
+}
+
+/** invented: the "true" zone latent heats of the demo cases, as multiples of the plan's */
+const DEMO_TRUE_LATENT = [1.08, 1.05];
+
+/** Two invented simulation cases at other duties (zone liquid with the circulation, as the demo's cases), tagged. */
+async function seedSimulationCases(
+  em: EntityManager,
+  columnId: string,
+  author: User,
+  input: HeatPlanInput,
+  pumpAroundIds: string[],
+): Promise<string[]> {
+  const pas = input.pumpArounds.map((pa, i) => ({ ...pa, latentHeat_kJ_kg: input.latentHeat_kJ_kg * DEMO_TRUE_LATENT[i]! }));
+  const at = [
+    [1.06, 0.94],
+    [0.95, 1.02],
+  ].map((f) => pas.map((pa, i) => Math.round((pa.baseDuty_kW * f[i]!) / 100) * 100));
+  const ids: string[] = [];
+  for (const [n, duties] of at.entries()) {
+    // a deterministic ±1 % wobble tray by tray, so that the fit is not exact (invented)
+    const trays = shiftPlanTraffic(input.trays, pas, duties, input.latentHeat_kJ_kg, input.numbering).trays.map(
+      ({ rawLiquid_kg_h: _l, rawVapour_kg_h: _v, dry: _d, ...load }) => {
+        const w = 1 + 0.01 * Math.sin(7 * load.tray + n);
+        return {
+          ...load,
+          vapourMassFlow_kg_h: Math.round(load.vapourMassFlow_kg_h * w),
+          liquidMassFlow_kg_h: Math.round(load.liquidMassFlow_kg_h * w),
+        };
+      },
+    );
+    const lc = await insertLoadCase(em, toSessionUser(author), columnId, {
+      name: `Simulation ${n + 1}: ${pas.map((pa, i) => `${pa.name} ${duties[i]! / 1000} MW`).join(', ')}`,
+      basis: 'other',
+      source: 'imported',
+      notes: 'Invented demo case standing in for a simulation at other pump-around duties.',
+      loads: trays,
+    });
+    await em.update(
+      LoadCase,
+      { id: lc.id },
+      {
+        pumpAroundDuties: pumpAroundIds.map((id, i) => ({ pumpAroundId: id, duty_kW: duties[i]! })),
+      },
+    );
+    ids.push(lc.id);
+  }
+  return ids;
 }

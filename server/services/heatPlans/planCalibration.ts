@@ -52,7 +52,7 @@ export function fitSummary(cal: CalibrationResult): string {
     );
   if (f.worstRating)
     parts.push(
-      `largest difference in percent of limit ${f.worstRating.difference_percent.toFixed(1)} points (tray ${f.worstRating.tray}, ${f.worstRating.case})`,
+      `largest difference in percent of limit ${Math.abs(f.worstRating.difference_percent).toFixed(1)} points (tray ${f.worstRating.tray}, ${f.worstRating.case})`,
     );
   return `${parts.join('; ')}.`;
 }
