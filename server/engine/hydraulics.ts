@@ -33,6 +33,7 @@ import {
   downcomerSealKister,
 } from './downcomer.js';
 import { passHydraulics } from './multipass.js';
+import { aeratedLiquidHeadFair, aerationFactorFrothDensity, bubblingFFactor } from './aeration.js';
 import { REPORT_CAP, S_PER_H, finiteOrCap, safeNumber } from './units.js';
 import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
 
@@ -53,6 +54,8 @@ const SIGMA = fairSurfaceTensionCorrection.meta;
 const SB = floodVelocitySoudersBrown.meta;
 const APRON = apronHeadLoss.meta;
 const BENNETT = clearLiquidHeightBennett.meta;
+const BETA = aerationFactorFrothDensity.meta;
+const FRANCIS = crestOverWeirFrancis.meta;
 const ENT_RATE = entrainedLiquidRate.meta;
 /** surface tension above which some presentations of Kister & Haas use this value instead [mN/m] */
 const KH_SIGMA_NOTE = 25;
@@ -105,7 +108,13 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   const uFloodFair = floodVelocitySoudersBrown(cFair, rhoL, rhoV);
   const pctFair = uN > 0 ? (100 * uN) / uFloodFair : 0;
   const weirLoad = weirLoadingVolumetric(qL, p.weirLength);
-  const qKH = weirLoad < 3 ? 3 : weirLoad;
+  // Kister & Haas' liquid load on a multipass tray: the tray's liquid over the total outlet weir length of
+  // that tray (all passes), taken per kind of tray as in Kister's two-pass example (Distillation Design
+  // 1992 §6.5: centre-to-side and side-to-centre trays checked apart); Fair's F_LV divides L/V by the
+  // passes (Perry 8th ed.). Both are tray averages; per-pass liquid goes to the weir and downcomer checks.
+  const pl = p.passLayout;
+  const khLoad = pl ? weirLoadingVolumetric(qL, (tray % 2 === 1 ? pl.odd : pl.even).weirLength) : weirLoad;
+  const qKH = khLoad < 3 ? 3 : khLoad;
   const hct = transitionClearLiquidHeightKisterHaas(p.holeDiameter_mm, p.openAreaRatio, qKH, rhoL);
   const cKH = kisterHaasFloodCapacity(p.holeDiameter_mm, sigma, rhoL, rhoV, p.traySpacing_mm, hct) * p.systemFactor;
   const uFloodKH = floodVelocitySoudersBrown(cKH, rhoL, rhoV);
@@ -116,9 +125,9 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
       out,
       KH,
       'weirLoad_m3_h_m',
-      weirLoad,
+      khLoad,
       tray,
-      weirLoad < 3 ? 'evaluated at 3 m³/(h·m) (conservative)' : 'value extrapolated',
+      khLoad < 3 ? 'evaluated at 3 m³/(h·m) (conservative)' : 'value extrapolated',
     );
     checkRange(out, KH, 'vapourDensity_kg_m3', rhoV, tray);
     checkRange(out, KH, 'liquidDensity_kg_m3', rhoL, tray);
@@ -177,23 +186,46 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     hd = dryTrayHeadKleinValve(uH, rhoV, rhoL, p.closedK, p.dryK, balanceHead);
     dryMethod = dryTrayHeadKleinValve.meta.id;
   }
-  // A dry tray (no liquid) holds no clear liquid and forms no bubbles: its pressure drop is the dry drop.
-  const hL = L > 0 ? clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, p.weirLength) : 0;
-  const hSigma = L > 0 ? residualHeadBennett(sigma, rhoL, p.holeDiameter_mm) : 0;
-  // Bennett is a froth-regime correlation: warn in the spray regime (clear liquid below h_ct)
-  if (out && V > 0 && hL > 0)
-    checkRange(
-      out,
-      BENNETT,
-      'transitionOverClearLiquid',
-      hct / hL,
-      tray,
-      'spray regime: the froth-regime clear liquid height and residual head are extrapolated',
-    );
-  const hT = hd + hL + hSigma;
-
   // Weir.
   const crest = crestOverWeirFrancis(qL, p.weirLength);
+  // Francis' range (crest 6 mm to the crest at 13 gpm/in): the low-crest warning and the weir-loading check
+  // cover it at the default limits; with limits relaxed past it, the range warning says so.
+  if (out && L > 0 && crest >= p.limits.liquidLoad && weirLoad <= p.limits.weirLoading)
+    checkRange(out, FRANCIS, 'crest_mm', crest, tray, 'crest reported as computed');
+
+  // Liquid on the tray. A dry tray (no liquid) holds none and forms no bubbles: its pressure drop is the dry drop.
+  // Sieve trays: Bennett et al. clear liquid and residual head (froth regime). Valve trays: Fair's aerated
+  // liquid head β(h_w + h_ow) as printed for valve trays (Perry 8th ed. eq. 14-106), no separate residual head.
+  const sieve = p.trayType === 'sieve';
+  const beta = sieve ? 0 : aerationFactorFrothDensity(uA, rhoV, rhoL);
+  let hL = 0;
+  let hSigma = 0;
+  if (L > 0 && sieve) {
+    hL = clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, p.weirLength);
+    hSigma = residualHeadBennett(sigma, rhoL, p.holeDiameter_mm);
+    // Bennett is a froth-regime correlation: warn in the spray regime (clear liquid below h_ct)
+    if (out && V > 0)
+      checkRange(
+        out,
+        BENNETT,
+        'transitionOverClearLiquid',
+        hct / hL,
+        tray,
+        'spray regime: the froth-regime clear liquid height and residual head are extrapolated',
+      );
+  } else if (L > 0) {
+    hL = aeratedLiquidHeadFair(beta, p.weirHeight_mm, crest);
+    if (out)
+      checkRange(
+        out,
+        BETA,
+        'fFactorBubbling_Pa05',
+        bubblingFFactor(uA, rhoV),
+        tray,
+        "aeration factor extrapolated beyond Fair's chart",
+      );
+  }
+  const hT = hd + hL + hSigma;
 
   // Weeping.
   let uWeep: number;
@@ -222,7 +254,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
       weirHeight_mm: p.weirHeight_mm,
       liquid_m3_s: qL,
       weirLength_m: p.weirLength,
-      residualHead_mm: hSigma,
+      residualHead_mm: sieve ? hSigma : L > 0 ? residualHeadBennett(sigma, rhoL, p.holeDiameter_mm) : 0,
     });
     uWeep = uFairWeep;
     weepMethod = weepPointHoleVelocityFair.meta.id;
@@ -306,6 +338,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     orificeCoefficient: p.orificeCoefficient,
     dryPressureDrop_mm: hd,
     clearLiquidHeight_mm: hL,
+    aerationFactor: beta,
     residualHead_mm: hSigma,
     totalHead_mm: hT,
     crestOverWeir_mm: crest,
@@ -327,7 +360,13 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
       tray,
       {
         liquid_m3_s: qL,
-        trayHead_mm: hT,
+        dryHead_mm: hd,
+        residualHead_mm: hSigma,
+        sieve,
+        bubblingVelocity_m_s: uA,
+        vapourDensity: rhoV,
+        liquidDensity: rhoL,
+        liquidAerationFactor: beta,
         weirHeight_mm: p.weirHeight_mm,
         clearance_mm: p.clearance_mm,
         traySpacing_mm: p.traySpacing_mm,

@@ -27,5 +27,6 @@ export * from './flooding.js';
 export * from './entrainment.js';
 export * from './weeping.js';
 export * from './pressureDrop.js';
+export * from './aeration.js';
 export * from './weir.js';
 export * from './downcomer.js';

@@ -19,6 +19,8 @@ export interface MethodMeta {
   readonly provenance: Provenance;
   /** validity ranges, keyed by input name with its unit in the key */
   readonly ranges: Readonly<Record<string, Range>>;
+  /** tray types the correlation was developed for (absent: any); other types get a warning */
+  readonly trayTypes?: readonly ('sieve' | 'fixed-valve' | 'moving-valve')[];
   /** the uncertainty reports state once for this correlation, in plain words (default: by provenance) */
   readonly uncertainty?: string;
 }

@@ -17,6 +17,8 @@
  */
 import type { PassLayout, PassOutlets, SectionGeometry, TrayDetails } from '../../shared/types/rating.js';
 import { crestOverWeirFrancis, weirLoadingVolumetric } from './weir.js';
+import { clearLiquidHeightBennett } from './pressureDrop.js';
+import { aeratedLiquidHeadFair } from './aeration.js';
 import {
   apronHeadLoss,
   downcomerBackupClear,
@@ -66,6 +68,8 @@ export interface PassPanel {
 /** The passes of one kind of tray (odd- or even-numbered) and the downcomers they drain into. */
 export interface PassTray {
   outlets: PassOutlets;
+  /** total outlet weir length of this kind of tray, all passes [m] */
+  weirLength: number;
   panels: PassPanel[];
   downcomers: PassDowncomer[];
 }
@@ -143,7 +147,7 @@ export function passTray(section: SectionGeometry, layout: PassLayout, outlets: 
       downcomer: d,
     };
   });
-  return { outlets, panels, downcomers };
+  return { outlets, weirLength: panels.reduce((a, p) => a + p.weirLength, 0), panels, downcomers };
 }
 
 /** Both kinds of tray of a multipass section, the liquid split and the pass imbalance (per section). */
@@ -203,6 +207,8 @@ const PASS_KEYS = [1, 2, 3, 4].map((n) => ({
   areaFraction: `pass${n}AreaFraction`,
   weirLoading: `pass${n}WeirLoading_m3_h_m`,
   crest: `pass${n}CrestOverWeir_mm`,
+  clearLiquid: `pass${n}ClearLiquidHeight_mm`,
+  trayHead: `pass${n}TrayHead_mm`,
   inletVelocity: `pass${n}DowncomerInletVelocity_m_s`,
   clearBackup: `pass${n}DowncomerClearBackup_mm`,
   backupPercent: `pass${n}DowncomerBackupPercent`,
@@ -214,8 +220,17 @@ export const PASS_DETAIL_FIELDS = Object.keys(PASS_KEYS[0]!) as (keyof (typeof P
 export interface PassLiquidInputs {
   /** tray's clear liquid flow [m³/s] */
   liquid_m3_s: number;
-  /** tray head h_t (dry + clear liquid + residual) [mm], taken equal under every pass */
-  trayHead_mm: number;
+  /** dry head h_d [mm] (vapour shared by bubbling area: the same under every pass) */
+  dryHead_mm: number;
+  /** residual head h_σ [mm] (sieve trays; 0 on valve trays) */
+  residualHead_mm: number;
+  /** sieve tray (Bennett clear liquid) or valve tray (aerated liquid head β(h_w + h_ow)) */
+  sieve: boolean;
+  bubblingVelocity_m_s: number;
+  vapourDensity: number;
+  liquidDensity: number;
+  /** valve trays: aeration factor β of the liquid on the tray [-] */
+  liquidAerationFactor: number;
   weirHeight_mm: number;
   clearance_mm: number;
   traySpacing_mm: number;
@@ -230,8 +245,9 @@ export interface PassLiquidInputs {
  * replaced by those of its worst pass (the tray-level checks then judge the worst pass). Per pass i with
  * liquid q_i = split_i·Q_L: weir loading and Francis crest on its own outlet weir; per downcomer d
  * (fed by the passes draining into it, Q_d): inlet velocity Q_d/A_d, apron loss on
- * min(clearance × apron walls, bottom area), clear backup h_t + h_w + h_ow,i + h_da,d (the tray below
- * taken to load like this one, as for single-pass trays).
+ * min(clearance × apron walls, bottom area), clear backup h_t,i + h_w + h_ow,i + h_da,d with the pass's own
+ * tray head h_t,i = h_d + h_L,i (+ h_σ on sieve trays), h_L,i from the pass's liquid and outlet weir (the
+ * tray below taken to load like this one, as for single-pass trays).
  */
 export function passHydraulics(pp: PreparedPasses, tray: number, x: PassLiquidInputs, details: TrayDetails): void {
   const t = tray % 2 === 1 ? pp.odd : pp.even;
@@ -266,7 +282,15 @@ export function passHydraulics(pp: PreparedPasses, tray: number, x: PassLiquidIn
     const q = pp.split[i]! * x.liquid_m3_s;
     const load = weirLoadingVolumetric(q, p.weirLength);
     const crest = crestOverWeirFrancis(q, p.weirLength);
-    const clear = downcomerBackupClear(x.trayHead_mm, x.weirHeight_mm, crest, hda[p.downcomer]!);
+    // the pass's own liquid on the tray, from its own liquid and outlet weir (Bennett on sieve trays,
+    // β(h_w + h_ow) on valve trays), so the head behind its downcomer is its own
+    let hL = 0;
+    if (q > 0)
+      hL = x.sieve
+        ? clearLiquidHeightBennett(x.bubblingVelocity_m_s, x.vapourDensity, x.liquidDensity, x.weirHeight_mm, q, p.weirLength)
+        : aeratedLiquidHeadFair(x.liquidAerationFactor, x.weirHeight_mm, crest);
+    const head = x.dryHead_mm + hL + (q > 0 ? x.residualHead_mm : 0);
+    const clear = downcomerBackupClear(head, x.weirHeight_mm, crest, hda[p.downcomer]!);
     details[k.outlet] = dcs[p.downcomer]!.kind;
     details[k.weirLength] = p.weirLength;
     details[k.flowPath] = p.flowPathLength;
@@ -274,6 +298,8 @@ export function passHydraulics(pp: PreparedPasses, tray: number, x: PassLiquidIn
     details[k.areaFraction] = p.areaFraction;
     details[k.weirLoading] = load;
     details[k.crest] = crest;
+    details[k.clearLiquid] = hL;
+    details[k.trayHead] = head;
     details[k.inletVelocity] = downcomerInletVelocity(qd[p.downcomer]!, dcs[p.downcomer]!.area);
     details[k.clearBackup] = clear;
     details[k.backupPercent] = (100 * clear) / x.aerationFactor / (x.traySpacing_mm + x.weirHeight_mm);

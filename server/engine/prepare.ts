@@ -14,6 +14,7 @@ import type {
 } from '../../shared/types/rating.js';
 import { fairFloodCapacityLygerosMagoulas, fairHoleAreaCorrection, kisterHaasFloodCapacity } from './flooding.js';
 import {
+  clearLiquidHeightBennett,
   kleinClosedValveK,
   kleinEddyLossCoefficient,
   kleinOpenValveK,
@@ -21,7 +22,7 @@ import {
 } from './pressureDrop.js';
 import { weepPointHoleVelocityEduljee } from './weeping.js';
 import { resolveLimits, type ResolvedLimits } from './limits.js';
-import { WARNING_CODES, checkRange, formatNumber, warning } from './validity.js';
+import { WARNING_CODES, checkRange, checkTrayType, formatNumber, warning } from './validity.js';
 import { preparePasses, type PreparedPasses } from './multipass.js';
 import { MIN_FLOW_PATH_M, passesWarning } from '../../shared/passes.js';
 
@@ -90,14 +91,14 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
   const valveTray = section.trayType !== 'sieve';
   const openAreaRatio =
     valveTray && section.slotArea_m2 !== undefined ? section.slotArea_m2 / section.activeArea_m2 : holeAreaRatio;
-  if (valveTray) {
-    w.push(
-      warning(
-        WARNING_CODES.bennettValveTray,
-        "tray pressure drop: the clear liquid height and residual head use Bennett et al. (1983), a sieve-tray correlation, applied here to a valve tray; Perry's 8th ed. rates the liquid on valve trays with an aeration factor (Fig. 14-37), which may give a different head.",
-      ),
+  // Fair's weep criterion of fixed valves compares with Bennett's clear liquid (a sieve-tray correlation)
+  if (section.trayType === 'fixed-valve')
+    checkTrayType(
+      w,
+      clearLiquidHeightBennett.meta,
+      section.trayType,
+      "in Fair's weep criterion (weep point of the fixed valves)",
     );
-  }
   if (valveTray && section.slotArea_m2 === undefined) {
     w.push(
       warning(

@@ -302,7 +302,8 @@ export function bennettWeirConstant(weirHeight_mm: number): number {
  * L_w 42.5 in, ρ 0.0408/59.5 lb/ft³) → 30.9 mm = 1.217 in (solution: 1.22 in).
  * Validity: sieve trays in the froth regime; Kister (1992, Ch. 6) notes it is not applicable to the spray
  * regime. The engine takes the spray regime as a clear liquid height below the Kister & Haas froth-to-spray
- * transition height h_ct (range h_ct/h_L ≤ 1) and warns there; on valve trays the section warns.
+ * transition height h_ct (range h_ct/h_L ≤ 1) and warns there; its tray types (sieve) are data too.
+ * Valve trays use the aerated liquid head of aeration.ts instead.
  */
 export const clearLiquidHeightBennett = method(
   'clearLiquidHeightBennett',
@@ -325,6 +326,7 @@ export const clearLiquidHeightBennett = method(
     equation: 'h_L = phi_e [h_w + C_l (q/(L_w phi_e))^(2/3)]',
     provenance: 'seen',
     ranges: { transitionOverClearLiquid: [0, 1] },
+    trayTypes: ['sieve'],
   },
 );
 
@@ -344,6 +346,7 @@ export const residualHeadBennett = method(
     equation: 'h_sigma = 6 sigma/(g rhoL dH)',
     provenance: 'seen',
     ranges: { transitionOverClearLiquid: [0, 1] },
+    trayTypes: ['sieve'],
   },
 );
 

@@ -6,6 +6,7 @@ import * as flooding from './flooding.js';
 import * as entrainment from './entrainment.js';
 import * as weeping from './weeping.js';
 import * as pressureDrop from './pressureDrop.js';
+import * as aeration from './aeration.js';
 import * as weir from './weir.js';
 import * as downcomer from './downcomer.js';
 import type { MethodFn, MethodMeta } from './meta.js';
@@ -30,7 +31,7 @@ function collect(...modules: Record<string, unknown>[]): Readonly<Record<string,
 }
 
 /** id → correlation function (with `.meta`). */
-export const METHOD_REGISTRY = collect(flooding, entrainment, weeping, pressureDrop, weir, downcomer);
+export const METHOD_REGISTRY = collect(flooding, entrainment, weeping, pressureDrop, aeration, weir, downcomer);
 
 /** id → metadata only (for the API and the client: labels, sources, validity ranges). */
 export const METHOD_METADATA: Readonly<Record<string, MethodMeta>> = Object.freeze(
@@ -59,6 +60,18 @@ export const METHOD_USES: Readonly<Record<string, readonly string[]>> = Object.f
     id(pressureDrop.orificeCoefficientHughmarkOConnell),
     id(pressureDrop.clearLiquidHeightBennett),
     id(pressureDrop.residualHeadBennett),
+  ],
+  [id(pressureDrop.dryTrayHeadKleinValve)]: [
+    id(pressureDrop.kleinClosedValveK),
+    id(pressureDrop.kleinOpenValveK),
+    id(pressureDrop.kleinBalanceHead),
+    id(aeration.aerationFactorFrothDensity),
+    id(aeration.aeratedLiquidHeadFair),
+  ],
+  [id(pressureDrop.dryTrayHeadK)]: [
+    id(pressureDrop.kleinOpenValveK),
+    id(aeration.aerationFactorFrothDensity),
+    id(aeration.aeratedLiquidHeadFair),
   ],
   [id(downcomer.downcomerBackupClear)]: [id(downcomer.apronHeadLoss)],
 });

@@ -21,7 +21,6 @@ export const WARNING_CODES = {
   weirLoadingHigh: 'weir-loading-high',
   valveSlotAreaMissing: 'valve-slot-area-missing',
   kisterHaasSurfaceTension: 'kister-haas-surface-tension',
-  bennettValveTray: 'bennett-valve-tray',
   kisterHaasValveTray: 'kister-haas-valve-tray',
   passesForDiameter: 'passes-for-diameter',
   passImbalance: 'pass-imbalance',
@@ -64,6 +63,8 @@ const INPUT_LABELS: Record<string, string> = {
   underflowVelocity_m_s: 'velocity under the downcomer apron (m/s)',
   psi: 'fractional entrainment',
   transitionOverClearLiquid: 'froth-to-spray transition height / clear liquid height',
+  crest_mm: 'crest over the weir (mm)',
+  fFactorBubbling_Pa05: 'F-factor on the bubbling area ((m/s)(kg/m³)^0.5)',
 };
 
 /**
@@ -89,6 +90,29 @@ export function checkRange(
   };
   if (tray !== undefined) w.tray = tray;
   out.push(w);
+  return false;
+}
+
+const TRAY_TYPE_LABELS: Record<string, string> = {
+  sieve: 'sieve',
+  'fixed-valve': 'fixed-valve',
+  'moving-valve': 'moving-valve',
+};
+
+/**
+ * Warn (code `range:<methodId>:trayType`) when a correlation is applied to a tray type outside those
+ * stored in its metadata (`meta.trayTypes`); `use` says what the engine uses it for.
+ */
+export function checkTrayType(out: EngineWarning[], meta: MethodMeta, trayType: string, use: string, tray?: number): boolean {
+  const types = meta.trayTypes;
+  if (types === undefined || (types as readonly string[]).includes(trayType)) return true;
+  out.push(
+    warning(
+      `range:${meta.id}:trayType`,
+      `${meta.label}: developed for ${types.map((t) => TRAY_TYPE_LABELS[t] ?? t).join(' and ')} trays, used here on a ${TRAY_TYPE_LABELS[trayType] ?? trayType} tray ${use}.`,
+      tray,
+    ),
+  );
   return false;
 }
 

@@ -10,6 +10,7 @@ import { method } from './meta.js';
  * plain Francis weir Q = 1.84 L h^1.5 gives 666 (derived).
  * @param liquid_m3_s q [m³/s]; @param weirLength_m L_w [m] (all passes); @param fw F_w [-]
  * @returns h_ow [mm]. Example: q/L_w = 3.09 m³/(h·m) → 6.0 mm.
+ * Range (crest_mm): 6–67.2 mm, see the metadata; outside it the crest is reported as computed, never capped.
  */
 export const crestOverWeirFrancis = method(
   'crestOverWeirFrancis',
@@ -22,7 +23,10 @@ export const crestOverWeirFrancis = method(
       "Perry's Chemical Engineers' Handbook 8th ed. Sec. 14 (Francis weir, F_w = 1) [from memory]; Holland, Fundamentals of Multicomponent Distillation Ch. 12",
     equation: 'h_ow = 664 Fw (q/Lw)^(2/3)',
     provenance: 'recalled',
-    ranges: {},
+    // 6 mm: below about 1/4 in crest a straight weir is replaced by a notched one (Holland Ch. 12, after
+    // Fair et al.; seen); 67.2 mm: the crest at 13 gpm/in = 116 m³/(h·m), the top of Kister's 7–13 gpm/in
+    // weir-load rule (Distillation Design 1992 §6.5; seen; crest derived with this formula)
+    ranges: { crest_mm: [6, 67.2] },
   },
 );
 

@@ -15,6 +15,8 @@ import { rateTray } from '../../../server/engine/rateTray.js';
 import { operatingWindow } from '../../../server/engine/operatingWindow.js';
 import { validateRatingRequest } from '../../../server/engine/validate.js';
 import { crestOverWeirFrancis, weirLoadingVolumetric } from '../../../server/engine/weir.js';
+import { aerationFactorFrothDensity } from '../../../server/engine/aeration.js';
+import { clearLiquidHeightBennett } from '../../../server/engine/pressureDrop.js';
 import type { SectionGeometry, TrayLoad } from '../../../shared/types/rating.js';
 import { IN, inventedRequest, rel } from './fixtures.js';
 
@@ -266,5 +268,65 @@ describe('passes and layout input', () => {
     expect(errs({ ...twoPass(), passLayout: { ...twoPass().passLayout!, oddTrayOutlets: 'centre' as 'side' } })[0]?.path).toBe(
       '/section/passLayout/oddTrayOutlets',
     );
+  });
+});
+
+describe("per-pass liquid: each pass's own clear liquid, crest and head", () => {
+  it('valve tray, unequal split: pass head = dry head + β (h_w + own crest); backup from its own head (derived)', () => {
+    const s: SectionGeometry = { ...twoPass(), passLayout: { ...twoPass().passLayout!, liquidSplit: [0.6, 0.4] } };
+    const t = rateTray(s, load(12, 140000)); // even tray: both passes drain to the centre downcomer
+    const d = t.details;
+    const beta = aerationFactorFrothDensity(d.bubblingAreaVelocity_m_s!, 3.5, 700);
+    for (const n of [1, 2]) {
+      const crest = d[`pass${n}CrestOverWeir_mm`]!;
+      expect(d[`pass${n}ClearLiquidHeight_mm`]).toBeCloseTo(beta * (50 + crest), 9);
+      expect(d[`pass${n}TrayHead_mm`]).toBeCloseTo(d.dryPressureDrop_mm + d[`pass${n}ClearLiquidHeight_mm`]!, 9);
+    }
+    expect(d.pass1TrayHead_mm!).toBeGreaterThan(d.pass2TrayHead_mm!);
+    // same downcomer, same apron loss: the backups differ by exactly the head and crest differences
+    const diff = d.pass1DowncomerClearBackup_mm! - d.pass2DowncomerClearBackup_mm!;
+    const expected = d.pass1TrayHead_mm! - d.pass2TrayHead_mm! + d.pass1CrestOverWeir_mm! - d.pass2CrestOverWeir_mm!;
+    expect(diff).toBeCloseTo(expected, 9);
+    expect(d.downcomerClearBackup_mm).toBeCloseTo(d.pass1DowncomerClearBackup_mm!, 9);
+  });
+
+  it("sieve tray: each pass's clear liquid is Bennett's on the pass's own liquid and weir (derived)", () => {
+    const s: SectionGeometry = {
+      ...twoPass(),
+      trayType: 'sieve',
+      holeDiameter_mm: 12.7,
+      deckThickness_mm: 3,
+      passLayout: { ...twoPass().passLayout!, liquidSplit: [0.55, 0.45] },
+    };
+    delete s.valves;
+    const t = rateTray(s, load(11, 140000));
+    const d = t.details;
+    for (const [n, share] of [
+      [1, 0.55],
+      [2, 0.45],
+    ] as const) {
+      const q = (share * 140000) / 700 / 3600;
+      const hl = clearLiquidHeightBennett(d.bubblingAreaVelocity_m_s!, 3.5, 700, 50, q, d[`pass${n}WeirLength_m`]!);
+      expect(d[`pass${n}ClearLiquidHeight_mm`]).toBeCloseTo(hl, 9);
+      expect(d[`pass${n}TrayHead_mm`]).toBeCloseTo(d.dryPressureDrop_mm + hl + d.residualHead_mm, 9);
+    }
+  });
+
+  it("Kister & Haas takes the liquid load on the tray's own total weir length, per kind of tray (Kister 1992 §6.5)", () => {
+    // Kister's two-pass example checks centre-to-side and side-to-centre trays apart, with the liquid load on
+    // the tray's total outlet weir ("single pass ... will roughly double the liquid load because the weir
+    // length will be halved"). Here: the layout tray equals a tray without a layout whose entered weir length
+    // is that tray's total.
+    const s = twoPass();
+    const methods = { jetFlood: 'kister-haas' as const };
+    for (const tray of [11, 12]) {
+      const t = rateTray(s, load(tray, 140000), methods);
+      const own = (t.details.pass1WeirLength_m ?? 0) + (t.details.pass2WeirLength_m ?? 0);
+      const plain = rateTray({ ...s, passLayout: undefined, outletWeirLength_m: own }, load(tray, 140000), methods);
+      expect(t.details.percentFloodKisterHaas).toBeCloseTo(plain.details.percentFloodKisterHaas!, 9);
+    }
+    const odd = rateTray(s, load(11, 140000), methods).details.percentFloodKisterHaas!;
+    const even = rateTray(s, load(12, 140000), methods).details.percentFloodKisterHaas!;
+    expect(odd).not.toBeCloseTo(even, 6);
   });
 });

@@ -99,10 +99,10 @@ describe('Bennett validity: froth regime, sieve trays (Kister, Distillation Desi
     for (const load of [seader748Bottom, seader749Top]) {
       const t = rateTray(seaderTray, load);
       expect(codes(t.warnings)).not.toContain('range:clearLiquidHeightBennett:transitionOverClearLiquid');
-      expect(codes(t.warnings)).not.toContain('bennett-valve-tray');
+      expect(codes(t.warnings)).not.toContain('range:clearLiquidHeightBennett:trayType');
     }
   });
-  it('warns in the spray regime (clear liquid below the Kister & Haas transition height) and on valve trays', () => {
+  it('warns in the spray regime (clear liquid below the Kister & Haas transition height) and where a valve tray relies on it', () => {
     // same tray, a tenth of the liquid and 1.6 × the vapour: clear liquid falls below h_ct
     const spray = rateTray(seaderTray, {
       ...seader749Top,
@@ -111,7 +111,13 @@ describe('Bennett validity: froth regime, sieve trays (Kister, Distillation Desi
     });
     expect(codes(spray.warnings)).toContain('range:clearLiquidHeightBennett:transitionOverClearLiquid');
     expect(spray.details.clearLiquidHeight_mm).toBeGreaterThan(0); // the value is still reported
+    // tray types as data: moving valves no longer use Bennett (aerated liquid head instead); the Fair weep
+    // criterion of fixed valves still compares with Bennett's clear liquid, and the section says so
+    expect(clearLiquidHeightBennett.meta.trayTypes).toEqual(['sieve']);
     const valve = inventedRequest();
-    expect(codes(rateTray(valve.section, valve.trays[0]!).warnings)).toContain('bennett-valve-tray');
+    const moving = codes(rateTray(valve.section, valve.trays[0]!).warnings);
+    expect(moving.filter((c) => c.includes('Bennett'))).toEqual([]);
+    const fixed = codes(rateTray({ ...valve.section, trayType: 'fixed-valve' }, valve.trays[0]!).warnings);
+    expect(fixed).toContain('range:clearLiquidHeightBennett:trayType');
   });
 });

@@ -3,12 +3,21 @@ import * as flooding from '../../../server/engine/flooding.js';
 import * as entrainment from '../../../server/engine/entrainment.js';
 import * as weeping from '../../../server/engine/weeping.js';
 import * as pressureDrop from '../../../server/engine/pressureDrop.js';
+import * as aeration from '../../../server/engine/aeration.js';
 import * as weir from '../../../server/engine/weir.js';
 import * as downcomer from '../../../server/engine/downcomer.js';
 import { METHOD_METADATA, METHOD_REGISTRY, rateSection } from '../../../server/engine/index.js';
 import { inventedRequest, seaderRequest } from './fixtures.js';
 
-const modules: Record<string, Record<string, unknown>> = { flooding, entrainment, weeping, pressureDrop, weir, downcomer };
+const modules: Record<string, Record<string, unknown>> = {
+  flooding,
+  entrainment,
+  weeping,
+  pressureDrop,
+  aeration,
+  weir,
+  downcomer,
+};
 
 describe('method registry', () => {
   it('each registry name maps to the function exported under that name', () => {
