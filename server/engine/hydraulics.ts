@@ -107,14 +107,15 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     p.systemFactor;
   const uFloodFair = floodVelocitySoudersBrown(cFair, rhoL, rhoV);
   const pctFair = uN > 0 ? (100 * uN) / uFloodFair : 0;
-  const weirLoad = weirLoadingVolumetric(qL, p.weirLength);
-  // Kister & Haas' liquid load on a multipass tray: the tray's liquid over the total outlet weir length of
-  // that tray (all passes), taken per kind of tray as in Kister's two-pass example (Distillation Design
-  // 1992 §6.5: centre-to-side and side-to-centre trays checked apart); Fair's F_LV divides L/V by the
-  // passes (Perry 8th ed.). Both are tray averages; per-pass liquid goes to the weir and downcomer checks.
+  // The tray's outlet weir, all passes: with a pass layout, this kind of tray's own weirs (side and centre
+  // weirs differ on a two-pass tray), else the entered total. Kister & Haas' liquid load is the tray's
+  // liquid over it, taken per kind of tray as in Kister's two-pass example (Distillation Design 1992 §6.5:
+  // centre-to-side and side-to-centre trays checked apart); Fair's F_LV divides L/V by the passes (Perry
+  // 8th ed.). Both are tray averages; the per-pass liquid goes to the weir and downcomer checks.
   const pl = p.passLayout;
-  const khLoad = pl ? weirLoadingVolumetric(qL, (tray % 2 === 1 ? pl.odd : pl.even).weirLength) : weirLoad;
-  const qKH = khLoad < 3 ? 3 : khLoad;
+  const weirLength = pl ? (tray % 2 === 1 ? pl.odd : pl.even).weirLength : p.weirLength;
+  const weirLoad = weirLoadingVolumetric(qL, weirLength);
+  const qKH = weirLoad < 3 ? 3 : weirLoad;
   const hct = transitionClearLiquidHeightKisterHaas(p.holeDiameter_mm, p.openAreaRatio, qKH, rhoL);
   const cKH = kisterHaasFloodCapacity(p.holeDiameter_mm, sigma, rhoL, rhoV, p.traySpacing_mm, hct) * p.systemFactor;
   const uFloodKH = floodVelocitySoudersBrown(cKH, rhoL, rhoV);
@@ -125,9 +126,9 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
       out,
       KH,
       'weirLoad_m3_h_m',
-      khLoad,
+      weirLoad,
       tray,
-      khLoad < 3 ? 'evaluated at 3 m³/(h·m) (conservative)' : 'value extrapolated',
+      weirLoad < 3 ? 'evaluated at 3 m³/(h·m) (conservative)' : 'value extrapolated',
     );
     checkRange(out, KH, 'vapourDensity_kg_m3', rhoV, tray);
     checkRange(out, KH, 'liquidDensity_kg_m3', rhoL, tray);
@@ -187,7 +188,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
     dryMethod = dryTrayHeadKleinValve.meta.id;
   }
   // Weir.
-  const crest = crestOverWeirFrancis(qL, p.weirLength);
+  const crest = crestOverWeirFrancis(qL, weirLength);
   // Francis' range (crest 6 mm to the crest at 13 gpm/in): the low-crest warning and the weir-loading check
   // cover it at the default limits; with limits relaxed past it, the range warning says so.
   if (out && L > 0 && crest >= p.limits.liquidLoad && weirLoad <= p.limits.weirLoading)
@@ -201,7 +202,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   let hL = 0;
   let hSigma = 0;
   if (L > 0 && sieve) {
-    hL = clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, p.weirLength);
+    hL = clearLiquidHeightBennett(uA, rhoV, rhoL, p.weirHeight_mm, qL, weirLength);
     hSigma = residualHeadBennett(sigma, rhoL, p.holeDiameter_mm);
     // Bennett is a froth-regime correlation: warn in the spray regime (clear liquid below h_ct)
     if (out && V > 0)
@@ -253,7 +254,7 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
       liquidDensity: rhoL,
       weirHeight_mm: p.weirHeight_mm,
       liquid_m3_s: qL,
-      weirLength_m: p.weirLength,
+      weirLength_m: weirLength,
       residualHead_mm: sieve ? hSigma : L > 0 ? residualHeadBennett(sigma, rhoL, p.holeDiameter_mm) : 0,
     });
     uWeep = uFairWeep;

@@ -23,7 +23,7 @@ import {
 import { weepPointHoleVelocityEduljee } from './weeping.js';
 import { resolveLimits, type ResolvedLimits } from './limits.js';
 import { WARNING_CODES, checkRange, checkTrayType, formatNumber, warning } from './validity.js';
-import { preparePasses, type PreparedPasses } from './multipass.js';
+import { preparePasses, type PassTray, type PreparedPasses } from './multipass.js';
 import { MIN_FLOW_PATH_M, passesWarning } from '../../shared/passes.js';
 
 export interface PreparedSection {
@@ -260,22 +260,26 @@ function passWarnings(w: EngineWarning[], s: SectionGeometry, pp: PreparedPasses
     );
   }
   const mismatch: string[] = [];
+  const nameOf = (t: PassTray): string => (t.outlets === 'side' ? 'trays draining to the side downcomers' : 'the other trays');
   for (const t of [pp.odd, pp.even]) {
     const area = t.downcomers.reduce((a, d) => a + d.area, 0);
-    const weir = t.panels.reduce((a, p) => a + p.weirLength, 0);
-    const name = t.outlets === 'side' ? 'trays draining to the side downcomers' : 'the other trays';
     if (Math.abs(area / s.downcomerTopArea_m2 - 1) > 0.1)
       mismatch.push(
-        `downcomer top area ${formatNumber(area)} m² for ${name} (entered ${formatNumber(s.downcomerTopArea_m2)} m²)`,
+        `downcomer top area ${formatNumber(area)} m² for ${nameOf(t)} (entered ${formatNumber(s.downcomerTopArea_m2)} m²)`,
       );
-    if (Math.abs(weir / s.outletWeirLength_m - 1) > 0.1)
-      mismatch.push(`outlet weir length ${formatNumber(weir)} m for ${name} (entered ${formatNumber(s.outletWeirLength_m)} m)`);
   }
+  // the two kinds of tray of a multipass layout have different outlet weirs (a two-pass tray's two side weirs
+  // are shorter than the centre downcomer's two); the entered total should lie within 10 % of their span
+  const weirs = [pp.odd.weirLength, pp.even.weirLength];
+  if (s.outletWeirLength_m < 0.9 * Math.min(...weirs) || s.outletWeirLength_m > 1.1 * Math.max(...weirs))
+    mismatch.push(
+      `outlet weir lengths ${formatNumber(pp.odd.weirLength)} m for ${nameOf(pp.odd)} and ${formatNumber(pp.even.weirLength)} m for ${nameOf(pp.even)} (entered ${formatNumber(s.outletWeirLength_m)} m)`,
+    );
   if (mismatch.length > 0) {
     w.push(
       warning(
         WARNING_CODES.passLayoutMismatch,
-        `the pass layout gives ${mismatch.join('; ')}, more than 10 % from the section totals: per-pass results use the layout, tray totals the entered values.`,
+        `the pass layout gives ${mismatch.join('; ')}, more than 10 % from the section totals: check the layout against the tray drawing (per-pass results, the weirs of each tray and its liquid use the layout).`,
       ),
     );
   }

@@ -48,13 +48,15 @@ export const GEOMETRY_FIELDS: NumericField[] = [
   field(G, 'activeArea_m2', 'Active (bubbling) area, all passes', 'area', { hint: 'per tray' }),
   field(G, 'downcomerTopArea_m2', 'Downcomer area, top, all passes', 'area', { hint: 'the downcomers one tray drains into' }),
   field(G, 'downcomerBottomArea_m2', 'Downcomer area, bottom, all passes', 'area'),
-  field(G, 'outletWeirLength_m', 'Outlet weir length, all passes', 'lengthLarge', { hint: 'sum of one tray’s outlet weirs' }),
+  field(G, 'outletWeirLength_m', 'Outlet weir length, all passes', 'lengthLarge', {
+    hint: 'sum of one tray’s outlet weirs; with a pass layout each tray’s own weirs come from the layout',
+  }),
   field(G, 'weirHeight_mm', 'Outlet weir height', 'lengthSmall'),
   field(G, 'downcomerClearance_mm', 'Downcomer clearance', 'lengthSmall'),
-  field(G, 'holeArea_m2', 'Hole (open) area', 'area'),
+  field(G, 'holeArea_m2', 'Hole (open) area, all passes', 'area', { hint: 'per tray; valve trays: deck orifices' }),
   field(G, 'holeDiameter_mm', 'Hole diameter', 'lengthSmall'),
-  field(G, 'slotArea_m2', 'Valve slot area, all open', 'area', {
-    hint: 'valve trays: curtain area of all valves fully open',
+  field(G, 'slotArea_m2', 'Valve slot area, all valves open, all passes', 'area', {
+    hint: 'valve trays, per tray: curtain area of all valves fully open',
     optional: true,
   }),
   field(G, 'deckThickness_mm', 'Deck thickness', 'lengthSmall'),
@@ -66,7 +68,7 @@ export const GEOMETRY_FIELDS: NumericField[] = [
 ];
 
 export const VALVE_FIELDS: NumericField[] = [
-  field(V, 'count', 'Valves per tray', 'ratio'),
+  field(V, 'count', 'Valves per tray, all passes', 'ratio'),
   field(V, 'orificeDiameter_mm', 'Valve orifice diameter', 'lengthSmall'),
   field(V, 'valveThickness_mm', 'Valve thickness', 'lengthSmall'),
   field(V, 'materialDensity_kg_m3', 'Valve material density', 'density'),

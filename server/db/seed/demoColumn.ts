@@ -35,9 +35,14 @@ const top: SectionGeometry = {
   valves: valves(2.4, 39),
 };
 
-/** Middle section, trays 9–30 (kerosene and diesel draws, diesel pump-around): two-pass moving valves, 760 mm spacing. */
+/**
+ * Middle section, trays 9–30 (kerosene and diesel draws, diesel pump-around): two-pass moving valves, 760 mm
+ * spacing, with its pass layout (side downcomers 590 mm, centre downcomer 490 mm; odd trays drain to the
+ * sides): side weirs 2 × 3.40 m, centre weirs 2 × 5.48 m, flow paths 1.92 m (derived from the widths).
+ */
 const middle: SectionGeometry = {
   ...top,
+  passLayout: { sideDowncomerWidth_mm: 590, centreDowncomerWidth_mm: 490, oddTrayOutlets: 'side' },
   traySpacing_mm: 760,
   activeArea_m2: 18.2,
   downcomerTopArea_m2: 2.7,

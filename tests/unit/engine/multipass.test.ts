@@ -330,3 +330,27 @@ describe("per-pass liquid: each pass's own clear liquid, crest and head", () => 
     expect(odd).not.toBeCloseTo(even, 6);
   });
 });
+
+describe('layout against the entered totals', () => {
+  it("accepts an entered outlet weir within the span of the two kinds of tray's weirs; warns far outside it (derived)", () => {
+    const s = twoPass(); // r 1.6: side weirs 2 × 2.305 = 4.61 m, centre weirs 2 × 3.183 = 6.37 m (derived)
+    const pp = preparePasses(s)!;
+    expect(pp.odd.weirLength).toBeLessThan(pp.even.weirLength);
+    const warns = (weir: number) =>
+      rateTray({ ...s, outletWeirLength_m: weir }, load(11, 140000)).warnings.filter(
+        (w) => w.code === 'pass-layout-mismatch' && w.message.includes('outlet weir'),
+      );
+    expect(warns((pp.odd.weirLength + pp.even.weirLength) / 2)).toEqual([]);
+    expect(warns(pp.odd.weirLength * 0.95)).toEqual([]);
+    expect(warns(pp.odd.weirLength * 0.8)).toHaveLength(1);
+    expect(warns(pp.even.weirLength * 1.2)).toHaveLength(1);
+  });
+
+  it("a layout tray's own weirs carry its tray-level crest and liquid (the entered total does not)", () => {
+    const s = twoPass();
+    const a = rateTray({ ...s, outletWeirLength_m: 5 }, load(12, 140000)).details;
+    const b = rateTray({ ...s, outletWeirLength_m: 6.5 }, load(12, 140000)).details;
+    expect(a.totalHead_mm).toBeCloseTo(b.totalHead_mm!, 12);
+    expect(a.clearLiquidHeight_mm).toBeCloseTo(b.clearLiquidHeight_mm, 12);
+  });
+});
