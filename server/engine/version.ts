@@ -12,5 +12,6 @@
 // 0.7.0: valve trays: wet pressure drop h_d + β(h_w + h_ow) (Perry 8th ed. eq. 14-106) with β = (1 + φ)/2
 //        from the Bennett froth density, no residual head (was Bennett's sieve-tray clear liquid and residual
 //        head); Bennett's tray types and the Francis crest range (6–67.2 mm) as data; multipass: each pass's own
-//        clear liquid and tray head behind its downcomer, Kister & Haas liquid load on the tray's own weirs
+//        clear liquid and tray head behind its downcomer; a layout tray's crest, liquid and
+//        Kister & Haas load on its own outlet weirs
 export const ENGINE_VERSION = '0.7.0';
