@@ -35,14 +35,9 @@ const top: SectionGeometry = {
   valves: valves(2.4, 39),
 };
 
-/**
- * Middle section, trays 9–30 (kerosene and diesel draws, diesel pump-around): two-pass moving valves, 760 mm
- * spacing, with its pass layout (side downcomers 590 mm, centre downcomer 490 mm; odd trays drain to the
- * sides): side weirs 2 × 3.40 m, centre weirs 2 × 5.48 m, flow paths 1.92 m (derived from the widths).
- */
+/** Middle section, trays 9–30 (kerosene and diesel draws, diesel pump-around): two-pass moving valves, 760 mm spacing. */
 const middle: SectionGeometry = {
   ...top,
-  passLayout: { sideDowncomerWidth_mm: 590, centreDowncomerWidth_mm: 490, oddTrayOutlets: 'side' },
   traySpacing_mm: 760,
   activeArea_m2: 18.2,
   downcomerTopArea_m2: 2.7,
@@ -54,7 +49,12 @@ const middle: SectionGeometry = {
   valves: valves(2.2, 39),
 };
 
-/** Wash zone, trays 31–40 (above the flash zone): two-pass sieve trays. */
+/**
+ * Wash zone, trays 31–40 (above the flash zone): two-pass sieve trays with their pass layout (side downcomers
+ * 620 mm, centre downcomer 520 mm; odd trays drain to the centre): side weirs 2 × 3.48 m, centre weirs
+ * 2 × 5.48 m, flow paths 1.87 m (derived from the widths). The wash liquid is small: on the odd trays, whose
+ * long centre weirs carry it, the crest comes close to the 6 mm minimum.
+ */
 const wash: SectionGeometry = {
   trayType: 'sieve',
   passes: 2,
@@ -66,6 +66,7 @@ const wash: SectionGeometry = {
   outletWeirLength_m: 8.4,
   weirHeight_mm: 65,
   downcomerClearance_mm: 55,
+  passLayout: { sideDowncomerWidth_mm: 620, centreDowncomerWidth_mm: 520, oddTrayOutlets: 'inner' },
   holeArea_m2: 1.25,
   holeDiameter_mm: 12.7,
   deckThickness_mm: 3.4,
