@@ -37,7 +37,7 @@ describe('stored run results (FRB4: checks and fields by name)', () => {
     };
     const r = rateSnapshot(snap!).results;
     const withPasses = r.trays.find((t) => t.sectionId === s0.sectionId)!;
-    // a tray of a section without a layout (the demo's middle section has one of its own)
+    // a tray of a section without a layout (the demo's wash zone has one of its own)
     const plain = new Set(snap!.sections.filter((s) => !s.geometry.passLayout).map((s) => s.sectionId));
     const without = r.trays.find((t) => plain.has(t.sectionId))!;
     expect(withPasses.details.pass2LiquidFraction).toBe(0.52);
