@@ -110,7 +110,7 @@ async function seedSimulationCases(
       },
     );
     const lc = await insertLoadCase(em, toSessionUser(author), columnId, {
-      name: `Simulation ${n + 1}: ${pas.map((pa, i) => `${pa.name} ${duties[i]! / 1000} MW`).join(', ')}`,
+      name: `Simulation case ${n + 1} (invented): ${duties.map((d) => `${d / 1000} MW`).join(' / ')}`,
       basis: 'other',
       source: 'imported',
       notes: 'Invented demo case standing in for a simulation at other pump-around duties.',
