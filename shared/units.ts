@@ -6,6 +6,7 @@
  * alphabetically / by kind of quantity). Each constant names its source. A value in unit u converts to
  * SI as `si = value·factor + offset`.
  */
+import { formatSig } from './numberFormat.js';
 import type { UnitSystem } from './types/api.js';
 
 // ---- exact definitions ----
@@ -288,11 +289,56 @@ export const toDisplay = (q: QuantityId, si: number, system: UnitSystem): number
 export const fromDisplay = (q: QuantityId, v: number, system: UnitSystem): number =>
   system === 'US' ? QUANTITIES[q].fromUS(v) : v;
 
-/** SI value formatted in the unit system with the quantity's decimals (no unit); '–' for a missing value. */
+/**
+ * SI value formatted in the unit system (no unit); '–' for a missing value. Four significant figures
+ * (shared/numberFormat.ts), never more decimals than the quantity's usual ones; `decimals` fixes them instead.
+ */
 export function formatQuantity(q: QuantityId, si: number | null | undefined, system: UnitSystem, decimals?: number): string {
   if (si === null || si === undefined || !Number.isFinite(si)) return '–';
-  const d = decimals ?? QUANTITIES[q].decimals[system];
-  return toDisplay(q, si, system).toLocaleString('en-US', { minimumFractionDigits: d, maximumFractionDigits: d });
+  const v = toDisplay(q, si, system);
+  if (decimals !== undefined)
+    return v.toLocaleString('en-US', { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
+  return formatSig(v, { sig: 4, maxDecimals: QUANTITIES[q].decimals[system] });
+}
+
+// ---- tray pressure drop as people read it ----
+/** Units a tray ΔP is shown in: head of the tray's own liquid (mm or in), or pressure (mbar, psi). */
+export const PRESSURE_DROP_UNITS = ['mm-liquid', 'in-liquid', 'mbar', 'psi'] as const;
+export type PressureDropUnit = (typeof PRESSURE_DROP_UNITS)[number];
+export const PRESSURE_DROP_UNIT_LABELS: Readonly<Record<PressureDropUnit, string>> = {
+  'mm-liquid': 'mm liquid',
+  'in-liquid': 'in liquid',
+  mbar: 'mbar',
+  psi: 'psi',
+};
+/**
+ * Gravity used to turn a ΔP back into a head: the engine's own 9.81 m/s² (server/engine/units.ts `G`, which made
+ * the ΔP from the head), so the head shown is the engine's head; standard gravity is 9.806 65 m/s² (0.04 % less).
+ */
+export const G_HEAD = 9.81;
+/** Head of liquid unless the user chose otherwise: mm in SI, inches in US customary. */
+export const defaultPressureDropUnit = (system: UnitSystem): PressureDropUnit => (system === 'US' ? 'in-liquid' : 'mm-liquid');
+
+/**
+ * A tray ΔP in Pa in the chosen unit. Liquid head uses the tray's liquid density (h = ΔP/(ρL g)); without a
+ * density the value is given in mbar (the caller's label must then say mbar: see pressureDropShownUnit).
+ */
+export function pressureDropIn(pa: number, unit: PressureDropUnit, liquidDensity_kg_m3?: number): number {
+  const u = pressureDropShownUnit(unit, liquidDensity_kg_m3);
+  if (u === 'mm-liquid') return (pa / (liquidDensity_kg_m3! * G_HEAD)) * 1000;
+  if (u === 'in-liquid') return pa / (liquidDensity_kg_m3! * G_HEAD) / M_PER_IN;
+  if (u === 'psi') return pa / PA_PER_PSI;
+  return pa / 100;
+}
+/** The unit a ΔP is actually shown in: a head needs a liquid density, else mbar. */
+export function pressureDropShownUnit(unit: PressureDropUnit, liquidDensity_kg_m3?: number): PressureDropUnit {
+  const head = unit === 'mm-liquid' || unit === 'in-liquid';
+  return head && !(liquidDensity_kg_m3 !== undefined && liquidDensity_kg_m3 > 0) ? 'mbar' : unit;
+}
+/** A tray ΔP in Pa as text in the chosen unit, three significant figures (no unit). */
+export function formatPressureDrop(pa: number | null | undefined, unit: PressureDropUnit, liquidDensity_kg_m3?: number): string {
+  if (pa === null || pa === undefined || !Number.isFinite(pa)) return '–';
+  return formatSig(pressureDropIn(pa, unit, liquidDensity_kg_m3), { sig: 3 });
 }
 
 /** The quantity behind a unit string reported by the engine in `CheckResult.unit`. */
@@ -323,4 +369,25 @@ export function detectUnit(text: string, candidates: QuantityId[]): { quantity: 
     if (unit) return { quantity: q, unit };
   }
   return undefined;
+}
+
+/**
+ * A check's value and limit as people read them: a tray ΔP (engine unit Pa) in the chosen ΔP unit with the
+ * tray's liquid density, other checks by their quantity in the unit system; `unit` is '' for a plain ratio.
+ */
+export function checkDisplay(
+  c: { unit: string; value: number; limit: number },
+  system: UnitSystem,
+  dpUnit: PressureDropUnit,
+  liquidDensity_kg_m3?: number,
+): { value: string; limit: string; unit: string } {
+  if (c.unit === 'Pa')
+    return {
+      value: formatPressureDrop(c.value, dpUnit, liquidDensity_kg_m3),
+      limit: formatPressureDrop(c.limit, dpUnit, liquidDensity_kg_m3),
+      unit: PRESSURE_DROP_UNIT_LABELS[pressureDropShownUnit(dpUnit, liquidDensity_kg_m3)],
+    };
+  const q = quantityOfEngineUnit(c.unit);
+  const unit = q === 'percent' ? (c.unit === '%' ? '%' : c.unit) : q === 'ratio' ? '' : unitLabel(q, system);
+  return { value: formatQuantity(q, c.value, system), limit: formatQuantity(q, c.limit, system), unit };
 }

@@ -80,6 +80,6 @@ export const authRoutes = [
   }),
   implement(c.preferences)({
     whilePasswordChangeDue: true,
-    handler: async ({ ds, user, body }) => ({ user: await setPreferences(ds, user.id, body.unitSystem) }),
+    handler: async ({ ds, user, body }) => ({ user: await setPreferences(ds, user.id, body) }),
   }),
 ];

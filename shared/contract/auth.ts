@@ -1,12 +1,14 @@
 /** Contracts of sign-in, the signed-in account, user administration and site access. */
 import { Type, type Static } from '@sinclair/typebox';
 import { ROLES } from '../permissions.js';
+import { PRESSURE_DROP_UNITS } from '../units.js';
 import { IdParams, ItemsOf, Obj, Ok, StringEnum, Timestamp, Uuid } from './schema.js';
 import { route } from './route.js';
 
 export const RoleSchema = StringEnum(ROLES);
 export const UnitSystemSchema = StringEnum(['SI', 'US'] as const);
 export type UnitSystem = Static<typeof UnitSystemSchema>;
+export const PressureDropUnitSchema = StringEnum(PRESSURE_DROP_UNITS);
 
 const sessionUserFields = {
   id: Uuid(),
@@ -14,6 +16,8 @@ const sessionUserFields = {
   name: Type.String(),
   role: RoleSchema,
   unitSystem: UnitSystemSchema,
+  /** tray ΔP unit chosen by the user; null: the unit system's default (mm liquid SI, in liquid US) */
+  pressureDropUnit: Type.Union([PressureDropUnitSchema, Type.Null()]),
   /** an administrator set a temporary password: the user changes it before anything else */
   mustChangePassword: Type.Boolean(),
 };
@@ -74,7 +78,15 @@ export const UpdateUserBodySchema = Obj({
 });
 export type UpdateUserBody = Static<typeof UpdateUserBodySchema>;
 
-export const PreferencesBodySchema = Obj({ unitSystem: UnitSystemSchema });
+/** either or both; pressureDropUnit null returns to the unit system's default */
+export const PreferencesBodySchema = Obj(
+  {
+    unitSystem: Type.Optional(UnitSystemSchema),
+    pressureDropUnit: Type.Optional(Type.Union([PressureDropUnitSchema, Type.Null()])),
+  },
+  { minProperties: 1 },
+);
+export type PreferencesBody = Static<typeof PreferencesBodySchema>;
 export const UserSitesBodySchema = Obj({ siteIds: Type.Array(Uuid(), { maxItems: 200 }) });
 
 const UserAnswer = Obj({ user: SessionUserSchema });
@@ -114,7 +126,7 @@ export const authContract = {
     method: 'put',
     path: '/auth/preferences',
     access: 'signed-in',
-    summary: 'Set the signed-in user’s unit system',
+    summary: 'Set the signed-in user’s unit system and tray ΔP unit',
     body: PreferencesBodySchema,
     response: UserAnswer,
   }),

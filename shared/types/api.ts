@@ -14,6 +14,7 @@ export interface Page<T> {
 export type {
   ChangePasswordBody,
   CreateUserBody,
+  PreferencesBody,
   ResetPasswordBody,
   SessionUser,
   SignInBody,

@@ -3,6 +3,7 @@ import { computed, ref } from 'vue';
 import { api, setUnauthorizedHandler } from '../boot/api';
 import { can, type Permission } from '../../shared/permissions';
 import type { ChangePasswordBody, SessionUser, SignInBody, UnitSystem } from '../../shared/types/api';
+import type { PressureDropUnit } from '../../shared/units';
 
 export const useAuthStore = defineStore('auth', () => {
   const user = ref<SessionUser | null>(null);
@@ -40,5 +41,20 @@ export const useAuthStore = defineStore('auth', () => {
   async function setUnitSystem(u: UnitSystem): Promise<void> {
     user.value = (await api.put<{ user: SessionUser }>('/auth/preferences', { unitSystem: u })).user;
   }
-  return { user, loaded, signedIn, unitSystem, allows, load, signIn, signOut, changePassword, setUnitSystem };
+  async function setPressureDropUnit(u: PressureDropUnit | null): Promise<void> {
+    user.value = (await api.put<{ user: SessionUser }>('/auth/preferences', { pressureDropUnit: u })).user;
+  }
+  return {
+    user,
+    loaded,
+    signedIn,
+    unitSystem,
+    allows,
+    load,
+    signIn,
+    signOut,
+    changePassword,
+    setUnitSystem,
+    setPressureDropUnit,
+  };
 });

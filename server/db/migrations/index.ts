@@ -11,6 +11,7 @@ import { RunResultsByName1764750000000 } from './1764750000000-RunResultsByName.
 import { PunchVoid1764840000000 } from './1764840000000-PunchVoid.js';
 import { FieldEvidence1764820000000 } from './1764820000000-FieldEvidence.js';
 import { HeatPlans1764830000000 } from './1764830000000-HeatPlans.js';
+import { PressureDropUnit1764840000001 } from './1764840000001-PressureDropUnit.js';
 
 /** Every migration in order; add new ones at the end. */
 export const migrations = [
@@ -27,4 +28,5 @@ export const migrations = [
   PunchVoid1764840000000,
   FieldEvidence1764820000000,
   HeatPlans1764830000000,
+  PressureDropUnit1764840000001,
 ];

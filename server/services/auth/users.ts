@@ -9,7 +9,7 @@ import { assertPasswordAcceptable } from './passwordPolicy.js';
 import { cachedSessionUser, forgetSessionUsers, rememberSessionUser } from './sessionCache.js';
 import { revokeUserSessions } from './sessions.js';
 import type { SessionClaims } from '../../http/auth.js';
-import type { CreateUserBody, SessionUser, UpdateUserBody, UserRecord } from '../../../shared/types/api.js';
+import type { CreateUserBody, PreferencesBody, SessionUser, UpdateUserBody, UserRecord } from '../../../shared/types/api.js';
 
 export const toSessionUser = (u: User): SessionUser => ({
   id: u.id,
@@ -17,6 +17,7 @@ export const toSessionUser = (u: User): SessionUser => ({
   name: u.name,
   role: u.role,
   unitSystem: u.unitSystem,
+  pressureDropUnit: u.pressureDropUnit,
   mustChangePassword: u.mustChangePassword,
 });
 
@@ -48,7 +49,7 @@ export async function activeSessionUser(ds: DataSource, session: SessionClaims):
   const rows = await preparedQuery<SessionUser>(
     ds,
     'frothline-session',
-    `SELECT u.id, u.email, u.name, u.role, u.unit_system AS "unitSystem", u.must_change_password AS "mustChangePassword"
+    `SELECT u.id, u.email, u.name, u.role, u.unit_system AS "unitSystem", u.pressure_drop_unit AS "pressureDropUnit", u.must_change_password AS "mustChangePassword"
        FROM user_sessions s JOIN users u ON u.id = s.user_id
       WHERE s.id = $1 AND s.user_id = $2 AND s.revoked_at IS NULL AND s.expires_at > now() AND u.active`,
     [session.sessionId, session.userId],
@@ -112,11 +113,11 @@ export async function updateUser(ds: DataSource, actorId: string, id: string, bo
   );
 }
 
-export async function setPreferences(ds: DataSource, userId: string, unitSystem: 'SI' | 'US'): Promise<SessionUser> {
+export async function setPreferences(ds: DataSource, userId: string, prefs: PreferencesBody): Promise<SessionUser> {
   return userWrite(() =>
     ds.transaction(async (em) => {
-      await em.update(User, { id: userId }, { unitSystem });
-      await audit(em, userId, 'update', 'user-preferences', userId, { unitSystem });
+      await em.update(User, { id: userId }, prefs);
+      await audit(em, userId, 'update', 'user-preferences', userId, prefs);
       const u = await em.findOneByOrFail(User, { id: userId });
       return toSessionUser(u);
     }),

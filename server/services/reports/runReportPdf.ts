@@ -24,7 +24,14 @@ import {
 } from '../../../shared/labels.js';
 import { coverageSentence, sectionCoverage, trayState } from '../../../shared/verdict.js';
 import { CHECK_NAMES } from '../../../shared/types/rating.js';
-import { formatQuantity, quantityOfEngineUnit, unitLabel, type QuantityId } from '../../../shared/units.js';
+import {
+  PRESSURE_DROP_UNIT_LABELS,
+  checkDisplay,
+  defaultPressureDropUnit,
+  formatQuantity,
+  unitLabel,
+  type PressureDropUnit,
+} from '../../../shared/units.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { ReviewEntry, RunRecord, RunTrayResult, RunWindow } from '../../../shared/types/runs.js';
 
@@ -69,20 +76,21 @@ function reviewBlock(run: RunRecord): Content[] {
   ];
 }
 
-function sectionTable(run: RunRecord, sys: SessionUser['unitSystem']): Content {
+function sectionTable(run: RunRecord, sys: SessionUser['unitSystem'], dp: PressureDropUnit): Content {
   const body: Content[] = [['Section', 'Trays', 'Check', 'Worst tray', 'Value', 'Limit', '% of limit', 'Status'].map(th)];
   for (const s of run.results.sections)
     for (const e of s.summary.worst.filter((x) => x.status !== 'na')) {
       const c = run.results.trays.find((t) => t.tray === e.worstTray)?.checks[e.check];
-      const q: QuantityId = quantityOfEngineUnit(c?.unit ?? '-');
-      const unit = q === 'percent' || q === 'ratio' ? (c?.unit === '-' ? '' : (c?.unit ?? '')) : unitLabel(q, sys);
+      const rhoL = run.snapshot.loads.find((l) => l.tray === e.worstTray)?.liquidDensity_kg_m3;
+      const shown = checkDisplay({ unit: c?.unit ?? '-', value: e.worstValue, limit: c?.limit ?? NaN }, sys, dp, rhoL);
+      const unit = shown.unit ? ` ${shown.unit}` : '';
       body.push([
         s.name,
         `${s.firstTray}–${s.lastTray}`,
         CHECK_LABELS[e.check],
         String(e.worstTray),
-        `${formatQuantity(q, e.worstValue, sys)} ${unit}`,
-        c ? `${SENSE_WORDS[c.sense]} ${formatQuantity(q, c.limit, sys)} ${unit}` : '—',
+        `${shown.value}${unit}`,
+        c ? `${SENSE_WORDS[c.sense]} ${shown.limit}${unit}` : '—',
         `${formatPercentOfLimit(e.percentOfLimit)} %`,
         { text: STATUS_LABELS[e.status], color: STATUS_HEX[e.status] },
       ]);
@@ -285,6 +293,7 @@ export function runReportDoc(
   w: RunWindow | null,
   sys: SessionUser['unitSystem'],
   printedAt = new Date(),
+  dp: PressureDropUnit = defaultPressureDropUnit(sys),
 ): PdfParts {
   const tag = run.snapshot.column.tag;
   const lc = run.snapshot.loadCase;
@@ -296,7 +305,7 @@ export function runReportDoc(
       { text: `Tray rating report — ${tag}`, style: 'h1' },
       { text: run.label, fontSize: 11 },
       {
-        text: `Load case ${lc.name} (${lc.basis}, version ${lc.version}) · rated ${pdfDateTime(run.createdAt)} by ${run.authorName ?? '—'} · engine ${run.engineVersion} · units ${sys}`,
+        text: `Load case ${lc.name} (${lc.basis}, version ${lc.version}) · rated ${pdfDateTime(run.createdAt)} by ${run.authorName ?? '—'} · engine ${run.engineVersion} · units ${sys}, tray ΔP in ${PRESSURE_DROP_UNIT_LABELS[dp]}`,
       },
       { text: verdictLine(run), bold: true, margin: [0, 4, 0, 0] },
       { text: coverageLine(run) },
@@ -305,7 +314,7 @@ export function runReportDoc(
       { ul: RATING_CAUTIONS },
       ...runCharts(run, w, sys),
       { text: 'Section results', style: 'h2', pageBreak: 'before' },
-      sectionTable(run, sys),
+      sectionTable(run, sys, dp),
       ...trayTable(run, sys),
       ...valveTable(run, sys),
       ...methodsBlock(run),
@@ -316,6 +325,6 @@ export function runReportDoc(
 export async function runReportPdf(ds: DataSource, user: SessionUser, id: string): Promise<{ pdf: Buffer; filename: string }> {
   const run = await getRun(ds, user, id);
   const w = await runWindow(ds, user, id, run.results.controllingTray).catch(() => null);
-  const pdf = await renderPdf(runReportDoc(run, w, user.unitSystem));
+  const pdf = await renderPdf(runReportDoc(run, w, user.unitSystem, new Date(), user.pressureDropUnit ?? undefined));
   return { pdf, filename: pdfFileName('rating', run.snapshot.column.tag, run.label) };
 }
