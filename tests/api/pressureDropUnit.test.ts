@@ -4,7 +4,7 @@
  */
 import { parse } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runReportDoc } from '../../server/services/runReportPdf.js';
+import { runReportDoc } from '../../server/services/reports/runReportPdf.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { loads, makePlant, section } from './columnsFixture.js';
 import type { RunRecord } from '../../shared/types/runs.js';
