@@ -279,10 +279,11 @@ describe('engineer path in Chromium', () => {
     await b.page.goto(runUrl);
     await b.page.locator('[data-test="tray-table"]').waitFor();
     await b.page.getByRole('button', { name: 'US', exact: true }).click();
-    await b.page.getByText('ΔP (psi)').waitFor();
+    // tray ΔP reads as a head of the tray's liquid: inches in US customary, mm in SI (no ΔP unit chosen)
+    await b.page.getByText('ΔP (in liquid)').waitFor();
     await shot(b.page, 'engineer-run-us');
     await b.page.getByRole('button', { name: 'SI', exact: true }).click();
-    await b.page.getByText('ΔP (Pa)').waitFor();
+    await b.page.getByText('ΔP (mm liquid)').waitFor();
   });
 
   it('the specialist edits section geometry in US units; out-of-range input is named before saving', async () => {
