@@ -3,6 +3,7 @@
  * Every error names the field by JSON path and, for tray entries, the tray number in the message.
  */
 import { Ajv, type ErrorObject } from 'ajv';
+import { engineFieldError, fieldInEntry } from '../../shared/contract/fieldErrors.js';
 import { ratingRequestSchema } from '../../shared/schemas/ratingRequest.js';
 import type { RatingRequest, SectionGeometry } from '../../shared/types/rating.js';
 
@@ -15,34 +16,11 @@ export type ValidationResult = { ok: true; value: RatingRequest } | { ok: false;
 const ajv = new Ajv({ useDefaults: true, allErrors: true, strict: true });
 const validateSchema = ajv.compile<RatingRequest>(ratingRequestSchema);
 
-function trayLabel(raw: unknown, index: number): string {
-  const trays = (raw as { trays?: unknown } | null)?.trays;
-  const t = Array.isArray(trays) ? (trays[index] as { tray?: unknown } | undefined)?.tray : undefined;
-  return typeof t === 'number' ? `tray ${t}` : `trays[${index}]`;
-}
-
 function describe(raw: unknown, path: string, message: string): FieldError {
-  const m = /^\/trays\/(\d+)(?:\/|$)/.exec(path);
-  const field = path.split('/').filter(Boolean).pop() ?? '(request)';
-  const where = m ? `${trayLabel(raw, Number(m[1]))}, ${field}` : field;
-  return { path: path || '/', message: `${where}: ${message}` };
+  return { path: path || '/', message: `${fieldInEntry(raw, path)}: ${message}` };
 }
 
-function fromAjv(raw: unknown, e: ErrorObject): FieldError {
-  let path = e.instancePath;
-  let message = e.message ?? 'is invalid';
-  const params = e.params as Record<string, unknown>;
-  if (e.keyword === 'required') {
-    path = `${path}/${String(params.missingProperty)}`;
-    message = 'is required';
-  } else if (e.keyword === 'additionalProperties') {
-    path = `${path}/${String(params.additionalProperty)}`;
-    message = 'is not a known field';
-  } else if (e.keyword === 'enum') {
-    message = `must be one of ${(params.allowedValues as unknown[]).map((v) => JSON.stringify(v)).join(', ')}`;
-  }
-  return describe(raw, path, message);
-}
+const fromAjv = (raw: unknown, e: ErrorObject): FieldError => engineFieldError(raw, e);
 
 /** Physics consistency of a schema-valid request; each error names the tray (if any) and the field. */
 export function physicsErrors(req: RatingRequest): FieldError[] {

@@ -4,6 +4,7 @@
  * and a message that starts with the field (and the tray, for tray entries). Inputs are not mutated.
  */
 import { Ajv, type ErrorObject, type ValidateFunction } from 'ajv';
+import { engineFieldError } from '../../../shared/contract/fieldErrors.js';
 import type { TSchema } from '@sinclair/typebox';
 import {
   gammaScanInputSchema,
@@ -24,26 +25,7 @@ export type Validation<T> = { ok: true; value: T } | { ok: false; errors: FieldE
 
 const ajv = new Ajv({ useDefaults: true, allErrors: true, strict: true });
 
-function fromAjv(raw: unknown, e: ErrorObject): FieldError {
-  let path = e.instancePath;
-  let message = e.message ?? 'is invalid';
-  const params = e.params as Record<string, unknown>;
-  if (e.keyword === 'required') {
-    path = `${path}/${String(params.missingProperty)}`;
-    message = 'is required';
-  } else if (e.keyword === 'additionalProperties') {
-    path = `${path}/${String(params.additionalProperty)}`;
-    message = 'is not a known field';
-  } else if (e.keyword === 'enum') {
-    message = `must be one of ${(params.allowedValues as unknown[]).map((v) => JSON.stringify(v)).join(', ')}`;
-  }
-  const field = path.split('/').filter(Boolean).pop() ?? '(input)';
-  const m = /^\/(trays|measurements)\/(\d+)(?:\/|$)/.exec(path);
-  const list = m ? (raw as Record<string, { tray?: unknown }[] | undefined>)[m[1]!] : undefined;
-  const tray = m ? list?.[Number(m[2])]?.tray : undefined;
-  const where = typeof tray === 'number' ? `tray ${tray}, ${field}` : field;
-  return { path: path || '/', message: `${where}: ${message}` };
-}
+const fromAjv = (raw: unknown, e: ErrorObject): FieldError => engineFieldError(raw, e, ['trays', 'measurements']);
 
 function schemaValidator<T>(schema: TSchema): (json: unknown) => Validation<T> {
   let check: ValidateFunction<T> | undefined;

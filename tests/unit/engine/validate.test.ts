@@ -67,7 +67,7 @@ describe('validateRatingRequest', () => {
     delete req.section.valves;
     expect(errorsOf(req).map((e) => e.path)).toContain('/section/valves');
     const extra = { ...inventedRequest(), colour: 'blue' };
-    expect(errorsOf(extra)).toContainEqual({ path: '/colour', message: 'colour: is not a known field' });
+    expect(errorsOf(extra)).toContainEqual({ path: '/colour', message: 'colour: is not an allowed field' });
     const bad = inventedRequest() as unknown as { section: { trayType: string } };
     bad.section.trayType = 'bubble-cap';
     expect(errorsOf(bad)[0]!.message).toMatch(/trayType: must be one of/);

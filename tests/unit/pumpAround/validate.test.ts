@@ -31,7 +31,7 @@ describe('validateStudyInput', () => {
   const cases: [string, (j: Json) => void, string, RegExp][] = [
     ['missing latent heat', (j) => delete j.latentHeat_kJ_kg, '/latentHeat_kJ_kg', /is required/],
     ['negative latent heat', (j) => (j.latentHeat_kJ_kg = -5), '/latentHeat_kJ_kg', /latentHeat_kJ_kg: must be > 0/],
-    ['unknown field', (j) => (j.pumpAround.colour = 'red'), '/pumpAround/colour', /is not a known field/],
+    ['unknown field', (j) => (j.pumpAround.colour = 'red'), '/pumpAround/colour', /is not an allowed field/],
     ['margin above 1', (j) => (j.margin = 1.4), '/margin', /margin: must be <= 1/],
     ['bad numbering', (j) => (j.numbering = 'sideways'), '/numbering', /must be one of "top-down", "bottom-up"/],
     [
