@@ -17,10 +17,10 @@ const ajv = new Ajv({ useDefaults: true, allErrors: true, strict: true });
 const validateSchema = ajv.compile<RatingRequest>(ratingRequestSchema);
 
 function describe(raw: unknown, path: string, message: string): FieldError {
-  return { path: path || '/', message: `${fieldInEntry(raw, path)}: ${message}` };
+  return { path: path || '/', message: `${fieldInEntry(raw, path, ['trays'], '(request)')}: ${message}` };
 }
 
-const fromAjv = (raw: unknown, e: ErrorObject): FieldError => engineFieldError(raw, e);
+const fromAjv = (raw: unknown, e: ErrorObject): FieldError => engineFieldError(raw, e, ['trays'], '(request)');
 
 /** Physics consistency of a schema-valid request; each error names the tray (if any) and the field. */
 export function physicsErrors(req: RatingRequest): FieldError[] {

@@ -44,9 +44,14 @@ export function ajvDetails(errors: readonly ErrorObject[] | null | undefined): F
  * The engine's form of an input error: the JSON pointer, and a message naming the field and, for an entry of
  * one of `lists` (e.g. `/trays/3/…`), the tray it carries (`tray 12, liquidMassFlow_kg_h: must be …`).
  */
-export function engineFieldError(raw: unknown, e: ErrorObject, lists: readonly string[] = ['trays']): FieldError {
+export function engineFieldError(
+  raw: unknown,
+  e: ErrorObject,
+  lists: readonly string[] = ['trays'],
+  whole = '(input)',
+): FieldError {
   const { pointer, message } = ajvFault(e);
-  return { path: pointer || '/', message: `${fieldInEntry(raw, pointer, lists)}: ${message}` };
+  return { path: pointer || '/', message: `${fieldInEntry(raw, pointer, lists, whole)}: ${message}` };
 }
 
 /** How an engine message names a field: its name, after the tray of the list entry holding it. */

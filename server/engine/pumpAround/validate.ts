@@ -13,7 +13,8 @@ const ajv = new Ajv({ useDefaults: true, allErrors: true, strict: true });
 const schemaCheck = ajv.compile<StudyInput>(pumpAroundStudySchema);
 
 /** One ajv error as a field error: JSON-pointer path and a message naming the field (and the tray). */
-export const ajvFieldError = (raw: unknown, e: ErrorObject): { path: string; message: string } => engineFieldError(raw, e);
+export const ajvFieldError = (raw: unknown, e: ErrorObject): { path: string; message: string } =>
+  engineFieldError(raw, e, ['trays'], '(study)');
 
 export function validateStudyInput(json: unknown): StudyValidation {
   const copy: unknown = json === undefined ? undefined : structuredClone(json);
