@@ -1,10 +1,12 @@
 import multer from 'multer';
 import { config } from '../config.js';
-import { defineRoutes } from '../http/route.js';
+import { defineRoutes, implement } from '../http/route.js';
 import { createEvidence, deleteEvidence, getEvidence, listEvidence, updateEvidence } from '../services/evidence/evidence.js';
+import { evidencePdf } from '../services/evidence/evidencePdf.js';
 import { readEvidence } from '../services/evidence/evidenceReading.js';
 import { commitScanImport, previewScanImport } from '../services/evidence/scanImport.js';
 import { ImportRowsError } from '../services/imports/imports.js';
+import { evidenceContract } from '../../shared/contract/evidence.js';
 import { uuidParams } from '../../shared/schemas/common.js';
 import {
   createEvidenceEnvelope,
@@ -112,4 +114,12 @@ export const evidenceRoutes = defineRoutes([
       }
     },
   },
+  implement(evidenceContract.report)({
+    handler: async ({ ds, user, params, query, res }) => {
+      const { pdf, filename } = await evidencePdf(ds, user, params.id, query.runId);
+      res.setHeader('Content-Type', 'application/pdf');
+      res.setHeader('Content-Disposition', `inline; filename="${filename}"`);
+      res.end(pdf);
+    },
+  }),
 ]);

@@ -33,4 +33,13 @@ describe('demo field evidence on T-701', () => {
     const t = (await reading('temperature-survey')).temperature!.result!.rows;
     expect(t.filter((x) => x.flag !== 'as-predicted').map((x) => x.tray)).toEqual([5]);
   });
+
+  it('prints each record as a PDF report', async () => {
+    for (const i of items) {
+      const res = await agent.get(`/api/evidence/${i.id}/report.pdf`).buffer(true);
+      expect(res.status).toBe(200);
+      expect(res.headers['content-type']).toBe('application/pdf');
+      expect((res.body as Buffer).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    }
+  });
 });
