@@ -75,6 +75,7 @@ describe('tray ΔP unit', () => {
       .waitFor();
     const t = run.results.trays.find((x) => x.checks.pressureDrop?.status !== 'na')!;
     const rho = run.snapshot.loads.find((l) => l.tray === t.tray)!.liquidDensity_kg_m3;
-    expect(Number(await dpCell(t.tray))).toBeCloseTo(t.checks.pressureDrop!.value / (rho * 9.81) / 0.0254, 2);
+    // the page shows inches of liquid to 0.1 in (shared/numberFormat.ts), so the check holds to that rounding
+    expect(Number(await dpCell(t.tray))).toBeCloseTo(t.checks.pressureDrop!.value / (rho * 9.81) / 0.0254, 1);
   });
 });
