@@ -37,7 +37,8 @@ export function scanChartSvg(r: EvidenceReading, res: GammaScanResult, u: ScanCh
     const z = u.z(d.deckElevation_m);
     if (z < z0 || z > z1) continue;
     p.push(`<line x1="${L}" y1="${Y(z)}" x2="${width - R}" y2="${Y(z)}" stroke="#8a8170" stroke-width="0.5"/>`);
-    text(L - 3, Y(z) + 2.5, trayBothWaysShort(d.tray, r.trayCount, r.numbering), 'end', 6.5, '#444');
+    // the PDF font has no arrows; the axis title says which way the second number counts
+    text(L - 3, Y(z) + 2.5, trayBothWaysShort(d.tray, r.trayCount, r.numbering).replace(/[↑↓]$/u, ''), 'end', 6.5, '#444');
   }
   for (const t of res.trays.filter((x) => x.finding !== 'normal')) {
     const mid = u.z(t.deckElevation_m + t.traySpacing_mm / 2000);
