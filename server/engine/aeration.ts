@@ -5,9 +5,10 @@
  */
 import { bennettEffectiveDensity } from './pressureDrop.js';
 import { method } from './meta.js';
+import { KG_M3_PER_LB_FT3, M_PER_FT } from '../../shared/units.js';
 
-/** 1 (ft/s)(lb/ft³)^0.5 in (m/s)(kg/m³)^0.5 = 0.3048 × 16.0185^0.5 (derived) */
-const F_FACTOR_SI_PER_US = 0.3048 * Math.sqrt(16.0185);
+/** 1 (ft/s)(lb/ft³)^0.5 in (m/s)(kg/m³)^0.5 = 0.3048 × 16.01846^0.5 (derived from shared/units.ts) */
+const F_FACTOR_SI_PER_US = M_PER_FT * Math.sqrt(KG_M3_PER_LB_FT3);
 
 /**
  * Aeration factor β of the liquid on the tray, from the relative froth density φ by Hutchinson's

@@ -23,6 +23,7 @@ import {
 } from './downcomer.js';
 import { WARNING_CODES, formatNumber, warning } from './validity.js';
 import { FLOOD_PERCENT } from '../../shared/verdict.js';
+import { WEIR_LOADING_SENSE } from '../../shared/studyWatched.js';
 
 const M_ENT = fairEntrainmentOwnFit.meta.id;
 const M_WEIR = weirLoadingVolumetric.meta.id;
@@ -68,7 +69,7 @@ export function rateTrayPrepared(p: PreparedSection, load: TrayLoad): TrayResult
     entrainment: makeCheck(d.entrainmentFraction, 'kg/kg', lim.entrainment, 'max', M_ENT, near),
     weeping: makeCheck(h.weepRatio, '-', lim.weeping, 'min', h.weepMethod, near),
     pressureDrop: makeCheck(d.totalPressureDrop_Pa, 'Pa', pressureDropLimitPa(p, load), 'max', h.dryMethod, near),
-    weirLoading: makeCheck(d.weirLoading_m3_h_m, 'm3/(h m)', lim.weirLoading, 'max', M_WEIR, near),
+    weirLoading: makeCheck(d.weirLoading_m3_h_m, 'm3/(h m)', lim.weirLoading, WEIR_LOADING_SENSE, M_WEIR, near),
     liquidLoad: makeCheck(d.crestOverWeir_mm, 'mm', lim.liquidLoad, 'min', M_CREST, near),
     downcomerBackup: makeCheck(d.downcomerBackupPercent!, '% of (TS + hw)', lim.downcomerBackup, 'max', M_DC, near),
     downcomerInletVelocity: makeCheck(d.downcomerInletVelocity_m_s, 'm/s', lim.downcomerInletVelocity, 'max', M_DCV, near),

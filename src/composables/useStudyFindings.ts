@@ -4,27 +4,12 @@
  * duty, and whether the trays above the return have run dry at a slider duty.
  */
 import type { CheckName } from '../../shared/types/rating';
+import { isWatched } from '../../shared/studyWatched';
 import type { SlimStudyPoint, SlimStudyResult } from '../../shared/types/studies';
-
-/**
- * The checks the engine guards when it suggests a duty (server/engine/pumpAround/checks.ts): above the
- * zone the liquid and vapour fall, so the weir crest (minimum liquid) and weeping; in the zone the
- * circulation adds liquid, so jet flood, downcomer backup, downcomer inlet velocity and weir loading.
- * The engine also watches weir loading above the zone when its sense is 'min'; the rating engine rates
- * weir loading as a maximum (server/engine/rateTray.ts), so it is not watched there.
- */
-export const WATCHED_ABOVE: readonly CheckName[] = ['liquidLoad', 'weeping'];
-export const WATCHED_ZONE: readonly CheckName[] = ['jetFlood', 'downcomerBackup', 'downcomerInletVelocity', 'weirLoading'];
 
 export type TrayRegion = SlimStudyPoint['trays'][number]['region'];
 /** 'watched': guarded when the duty is suggested; 'unwatched': rated but not guarded; 'below': below the draw, not changed by the duty */
 export type OverKind = 'watched' | 'unwatched' | 'below';
-
-export function isWatched(region: TrayRegion, check: CheckName): boolean {
-  if (region === 'above') return WATCHED_ABOVE.includes(check);
-  if (region === 'zone') return WATCHED_ZONE.includes(check);
-  return false;
-}
 
 /** One check over its limit at one duty, with the trays where it is over (in the point's tray order). */
 export interface OverLimit {

@@ -1,18 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { studyBody, studyFormFrom } from '../../src/composables/useStudyForm';
-import {
-  WATCHED_ABOVE,
-  WATCHED_ZONE,
-  baseAboveSuggested,
-  dryTraysAbove,
-  isWatched,
-  noteInPageWords,
-  overLimits,
-  trayList,
-} from '../../src/composables/useStudyFindings';
+import { baseAboveSuggested, dryTraysAbove, noteInPageWords, overLimits, trayList } from '../../src/composables/useStudyFindings';
 import { lowestLiquidAbove, percentGrid, trayWindow } from '../../src/composables/useStudyPlot';
 import { watchedChecks } from '../../server/engine/pumpAround/checks';
-import type { CheckName, TrayResult } from '../../shared/types/rating';
+import { rateTray } from '../../server/engine/rateTray';
+import { isWatched } from '../../shared/studyWatched';
+import { inventedRequest } from './engine/fixtures';
+import type { CheckName } from '../../shared/types/rating';
 import { fromDisplay, toDisplay, unitLabel, type QuantityId } from '../../shared/units';
 import type { SlimStudyPoint, SlimStudyResult, SlimTrayPoint, StudyRecord } from '../../shared/types/studies';
 
@@ -142,13 +136,21 @@ describe('study findings shown on the page (from the stored key points)', () => 
     expect(overLimits(names, undefined)).toEqual([]);
   });
 
-  it('watched checks match the engine: above the zone crest and weeping, in the zone flood, downcomer and weir loading', () => {
-    const rating = (sense: 'max' | 'min') => ({ checks: { weirLoading: { sense } } }) as unknown as TrayResult;
-    // the rating engine rates weir loading as a maximum (server/engine/rateTray.ts)
-    expect([...WATCHED_ABOVE].sort()).toEqual(watchedChecks('above', rating('max')).sort());
-    expect([...WATCHED_ZONE].sort()).toEqual(watchedChecks('zone', rating('max')).sort());
+  it('the page calls watched what the engine guards: above the zone crest and weeping, in the zone flood, downcomer and weir loading', () => {
+    // a real rated tray, so the weir-loading sense is the one the rating engine gives
+    const req = inventedRequest();
+    const rating = rateTray(req.section, req.trays[0]!);
+    const names = Object.keys(rating.checks) as CheckName[];
+    for (const region of ['above', 'zone', 'below'] as const)
+      expect(names.filter((c) => isWatched(region, c)).sort()).toEqual(watchedChecks(region, rating).sort());
+    expect(names.filter((c) => isWatched('above', c)).sort()).toEqual(['liquidLoad', 'weeping']);
+    expect(names.filter((c) => isWatched('zone', c)).sort()).toEqual([
+      'downcomerBackup',
+      'downcomerInletVelocity',
+      'jetFlood',
+      'weirLoading',
+    ]);
     expect(isWatched('below', 'jetFlood')).toBe(false);
-    expect(isWatched('above', 'entrainment')).toBe(false);
   });
 
   it('flags a base duty above the suggested one, with the base as a share of dry-out', () => {

@@ -23,10 +23,10 @@ import type {
 import { NormalEquations } from './leastSquares.js';
 import { planModel } from './model.js';
 import { shiftPlanTraffic, trayRoles, zoneLatentHeat } from './traffic.js';
+import { S_PER_H } from '../units.js';
 
 /** duties within this of each other are the same duty [kW] (our choice: below a simulation's precision) */
 export const DUTY_MATCH_KW = 0.5;
-const S_PER_H = 3600;
 type Prop = 'vapourDensity_kg_m3' | 'liquidDensity_kg_m3' | 'surfaceTension_mN_m' | 'liquidViscosity_mPa_s';
 
 export const caseName = (c: SimulationCase, i: number): string => c.name ?? `case ${i + 1}`;

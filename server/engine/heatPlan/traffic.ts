@@ -13,9 +13,7 @@ import type { TrayLoad } from '../../../shared/types/rating.js';
 import type { PlanPumpAround, TrayPropertyDrift } from '../../../shared/types/heatPlan.js';
 import type { TrayNumbering } from '../../../shared/types/pumpAround.js';
 import { condensedVapour, pumpAroundCirculation, shiftFraction } from '../pumpAround/traffic.js';
-
-/** seconds per hour: kW and kJ/kg give kg/s, flows are in kg/h */
-const S_PER_H = 3600;
+import { S_PER_H } from '../units.js';
 
 /** How one tray's traffic depends on the duties. */
 export interface TrayRole {

@@ -24,9 +24,7 @@
  */
 import type { TrayLoad } from '../../../shared/types/rating.js';
 import type { PumpAroundSpec, TrayNumbering } from '../../../shared/types/pumpAround.js';
-
-/** seconds per hour: kJ/kg and kW give kg/s, loads are in kg/h */
-const S_PER_H = 3600;
+import { S_PER_H } from '../units.js';
 
 export type TrayRegion = 'above' | 'zone' | 'below';
 
