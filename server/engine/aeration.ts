@@ -21,6 +21,10 @@ const F_FACTOR_SI_PER_US = M_PER_FT * Math.sqrt(KG_M3_PER_LB_FT3);
  * Example: Seader & Henley 7.48 bottom, K_s 0.196 ft/s, printed φ_e 0.381 → β = 0.690.
  * Range: Fair's aeration-factor chart (Ludwig Fig. 8-150, Perry Fig. 14-37) spans F_a = U_a ρV^0.5
  * 0–2.5 (ft/s)(lb/ft³)^0.5 = 0–3.05 (m/s)(kg/m³)^0.5 (axis seen; SI derived).
+ * Not a fit of the chart: we hold no readings of Perry Fig. 14-37 (only its existence and axis are
+ * seen), and Perry's sieve-tray fit of β (the sentence introducing it is seen; its form as recalled gave
+ * implausibly low β, about 0.44, and is unconfirmed) is not used. The uncertainty is stated once in the
+ * methods list (`uncertainty` below). Replace this form by a fit of the chart when readings are at hand.
  */
 export const aerationFactorFrothDensity = method(
   'aerationFactorFrothDensity',
@@ -36,7 +40,7 @@ export const aerationFactorFrothDensity = method(
     provenance: 'derived',
     ranges: { fFactorBubbling_Pa05: [0, 2.5 * F_FACTOR_SI_PER_US] },
     uncertainty:
-      "The aeration factor is computed from a published froth-density correlation rather than read from Fair's chart; it follows the chart's trend (1 with no vapour, falling as the vapour load rises) but has not been checked point by point against the chart, so the liquid part of the valve-tray pressure drop is approximate.",
+      "Fair's aeration-factor chart is not read: the aeration factor is computed as (1 + phi)/2, the relation to the froth density attributed to Hutchinson, Buron & Miller (1949) as commonly quoted, with the froth density of Bennett et al., a sieve-tray correlation. The result has not been compared with the chart point by point, so the liquid part of a valve-tray pressure drop (and the downcomer backup built on it) is approximate; the dry part (Klein) is not affected.",
   },
 );
 

@@ -19,11 +19,16 @@ import {
   dryTrayHeadKleinValve,
   dryTrayHeadOrifice,
   headToPascal,
-  kleinClosedBalanceVelocity,
   kleinOpenBalanceVelocity,
   residualHeadBennett,
 } from './pressureDrop.js';
-import { eduljeeK2OwnFit, weepPointHoleVelocityEduljee, weepPointHoleVelocityFair } from './weeping.js';
+import {
+  eduljeeK2OwnFit,
+  weepPointFixedValveFair,
+  weepPointHoleVelocityEduljee,
+  weepPointHoleVelocityFair,
+  weepPointMovingValveClosedBalance,
+} from './weeping.js';
 import { crestOverWeirFrancis, weirLoadingVolumetric } from './weir.js';
 import {
   apronHeadLoss,
@@ -228,7 +233,9 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   }
   const hT = hd + hL + hSigma;
 
-  // Weeping.
+  // Weeping, by tray type (weeping.ts WEEP_METHODS): moving valves, the closed balance point (valves start
+  // to open); fixed valves, Fair's criterion with the valves taken as open; sieve trays, the higher of Fair's
+  // criterion and Eduljee.
   let uWeep: number;
   let weepMethod: string;
   let uEdu = 0;
@@ -236,18 +243,18 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
   let uValvesOpen = 0;
   if (p.trayType === 'moving-valve') {
     const v = p.valves;
-    uWeep = kleinClosedBalanceVelocity(
-      v.legFactor,
-      v.valveThickness_mm,
-      v.materialDensity_kg_m3,
-      p.closedK,
-      rhoV,
-      p.eddyLossCoefficient,
-    );
-    weepMethod = kleinClosedBalanceVelocity.meta.id;
+    uWeep = weepPointMovingValveClosedBalance({
+      legFactor: v.legFactor,
+      valveThickness_mm: v.valveThickness_mm,
+      metalDensity: v.materialDensity_kg_m3,
+      closedK: p.closedK,
+      vapourDensity: rhoV,
+      eddyLossCoefficient: p.eddyLossCoefficient,
+    });
+    weepMethod = weepPointMovingValveClosedBalance.meta.id;
     uValvesOpen = kleinOpenBalanceVelocity(uWeep, p.closedK, p.dryK);
   } else {
-    uFairWeep = weepPointHoleVelocityFair({
+    const fairInput = {
       dryK: p.dryK,
       holeAreaRatio: p.holeAreaRatio,
       vapourDensity: rhoV,
@@ -256,10 +263,11 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
       liquid_m3_s: qL,
       weirLength_m: weirLength,
       residualHead_mm: sieve ? hSigma : L > 0 ? residualHeadBennett(sigma, rhoL, p.holeDiameter_mm) : 0,
-    });
-    uWeep = uFairWeep;
-    weepMethod = weepPointHoleVelocityFair.meta.id;
-    if (p.trayType === 'sieve') {
+    };
+    if (sieve) {
+      uFairWeep = weepPointHoleVelocityFair(fairInput);
+      uWeep = uFairWeep;
+      weepMethod = weepPointHoleVelocityFair.meta.id;
       const head = p.weirHeight_mm + crest;
       if (out) checkRange(out, K2, 'headAboveDeck_mm', head, tray);
       uEdu = weepPointHoleVelocityEduljee(eduljeeK2OwnFit(head), p.holeDiameter_mm, rhoV);
@@ -267,6 +275,10 @@ export function trayHydraulics(p: PreparedSection, load: TrayLoad, out: EngineWa
         uWeep = uEdu;
         weepMethod = weepPointHoleVelocityEduljee.meta.id;
       }
+    } else {
+      uFairWeep = weepPointFixedValveFair(fairInput);
+      uWeep = uFairWeep;
+      weepMethod = weepPointFixedValveFair.meta.id;
     }
   }
   const weepRatio = uWeep > 0 ? uH / uWeep : REPORT_CAP;

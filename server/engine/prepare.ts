@@ -20,7 +20,7 @@ import {
   kleinOpenValveK,
   orificeCoefficientHughmarkOConnell,
 } from './pressureDrop.js';
-import { weepPointHoleVelocityEduljee } from './weeping.js';
+import { weepPointHoleVelocityEduljee, weepPointHoleVelocityFair } from './weeping.js';
 import { resolveLimits, type ResolvedLimits } from './limits.js';
 import { WARNING_CODES, checkRange, checkTrayType, formatNumber, warning } from './validity.js';
 import { preparePasses, type PassTray, type PreparedPasses } from './multipass.js';
@@ -91,14 +91,22 @@ export function prepareSection(section: SectionGeometry, methods: MethodOptions 
   const valveTray = section.trayType !== 'sieve';
   const openAreaRatio =
     valveTray && section.slotArea_m2 !== undefined ? section.slotArea_m2 / section.activeArea_m2 : holeAreaRatio;
-  // Fair's weep criterion of fixed valves compares with Bennett's clear liquid (a sieve-tray correlation)
-  if (section.trayType === 'fixed-valve')
+  // The weep point of fixed valves (weepPointFixedValveFair, common practice) is Fair's sieve-tray criterion,
+  // which compares with Bennett's clear liquid (also a sieve-tray correlation): both are said, once per section
+  if (section.trayType === 'fixed-valve') {
+    checkTrayType(
+      w,
+      weepPointHoleVelocityFair.meta,
+      section.trayType,
+      'for the weep point, with the valves taken as permanently open (no published fixed-valve weep correlation is used; the weep margin is an indication only)',
+    );
     checkTrayType(
       w,
       clearLiquidHeightBennett.meta,
       section.trayType,
       "in Fair's weep criterion (weep point of the fixed valves)",
     );
+  }
   if (valveTray && section.slotArea_m2 === undefined) {
     w.push(
       warning(

@@ -56,6 +56,18 @@ export const METHOD_USES: Readonly<Record<string, readonly string[]>> = Object.f
   ],
   [id(entrainment.fairEntrainmentOwnFit)]: [id(entrainment.entrainedLiquidRate)],
   [id(weeping.weepPointHoleVelocityEduljee)]: [id(weeping.eduljeeK2OwnFit)],
+  [id(weeping.weepPointHoleVelocityFair)]: [id(pressureDrop.clearLiquidHeightBennett), id(pressureDrop.residualHeadBennett)],
+  [id(weeping.weepPointFixedValveFair)]: [
+    id(weeping.weepPointHoleVelocityFair),
+    id(pressureDrop.kleinOpenValveK),
+    id(pressureDrop.clearLiquidHeightBennett),
+    id(pressureDrop.residualHeadBennett),
+  ],
+  [id(weeping.weepPointMovingValveClosedBalance)]: [
+    id(pressureDrop.kleinClosedBalanceVelocity),
+    id(pressureDrop.kleinClosedValveK),
+    id(pressureDrop.kleinEddyLossCoefficient),
+  ],
   [id(pressureDrop.dryTrayHeadOrifice)]: [
     id(pressureDrop.orificeCoefficientHughmarkOConnell),
     id(pressureDrop.clearLiquidHeightBennett),

@@ -14,4 +14,9 @@
 //        head); Bennett's tray types and the Francis crest range (6–67.2 mm) as data; multipass: each pass's own
 //        clear liquid and tray head behind its downcomer; a layout tray's crest, liquid and
 //        Kister & Haas load on its own outlet weirs
-export const ENGINE_VERSION = '0.7.0';
+// 0.8.0: the weep check of each tray type explicit (WEEP_METHODS): moving valves report
+//        weepPointMovingValveClosedBalance (Klein's closed balance point as the weep limit, common practice),
+//        fixed valves weepPointFixedValveFair (Fair's criterion with the valves taken as open, common practice)
+//        with a section range warning (Fair's criterion is a sieve-tray one); values unchanged; the aeration
+//        factor's stated uncertainty says the chart is not read
+export const ENGINE_VERSION = '0.8.0';

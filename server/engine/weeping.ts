@@ -1,7 +1,12 @@
-/** Weeping: Eduljee weep point (own fit of its chart constant K2) and Fair's weep criterion. */
+/**
+ * Weeping: the weep point of each tray type, explicit (WEEP_METHODS). Sieve trays: Eduljee (own fit of its
+ * chart constant K2) and Fair's weep criterion, the higher governing; fixed valves: Fair's criterion on the
+ * valves taken as held open (common practice); moving valves: Klein's closed balance point (common practice).
+ */
+import type { TrayType } from '../../shared/types/rating.js';
 import { method } from './meta.js';
 import { brent } from './solve.js';
-import { bennettEffectiveDensity, bennettWeirConstant } from './pressureDrop.js';
+import { bennettEffectiveDensity, bennettWeirConstant, kleinClosedBalanceVelocity } from './pressureDrop.js';
 
 /** coefficients of our own K2 fit (see eduljeeK2OwnFit) */
 export const EDULJEE_K2_FIT = { a: 31.4, b: 4.39, c: 38.06 } as const;
@@ -55,6 +60,7 @@ export const weepPointHoleVelocityEduljee = method(
     equation: 'u_h,min = [K2 - 0.90 (25.4 - d_h)]/rhoV^0.5',
     provenance: 'recalled',
     ranges: { holeDiameter_mm: [2.5, 12.7] },
+    trayTypes: ['sieve'],
   },
 );
 
@@ -111,5 +117,89 @@ export const weepPointHoleVelocityFair = method(
     equation: 'h_d(u) + h_sigma = h_L(u)',
     provenance: 'seen',
     ranges: {},
+    trayTypes: ['sieve'],
   },
 );
+
+/**
+ * Weep point of a fixed-valve tray: Fair's simplified criterion h_d + h_σ = h_L (weepPointHoleVelocityFair)
+ * with the valves taken as permanently open, i.e. the dry head from Klein's open-valve K (dryTrayHeadK) and
+ * Bennett's clear liquid. Common practice: no published weep correlation for fixed valves is used here,
+ * and both Fair's criterion and Bennett's clear liquid were developed for sieve trays, so the section
+ * carries a range warning (`range:weepPointHoleVelocityFair:trayType`). Fixed valves have large
+ * openings with a cover over them; their weeping depends on the valve design (supplier data governs).
+ * @returns weep-point velocity on the deck-orifice area [m/s]
+ */
+export const weepPointFixedValveFair = method(
+  'weepPointFixedValveFair',
+  function weepPointFixedValveFair(p: FairWeepInput): number {
+    return weepPointHoleVelocityFair(p);
+  },
+  {
+    label: 'Fixed-valve weep point (Fair criterion, valves taken as open)',
+    source:
+      "Fair's simplified weep criterion (Seader & Henley, Separation Process Principles (1998) solutions; Kister, Distillation Design (1992) Fig. 6.18) applied to fixed valves taken as permanently open moving valves (Klein's open-valve loss coefficient, Ludwig, Applied Process Design Vol. 2 3rd ed. Table 8-23) [common practice]",
+    equation: 'h_d(u) + h_sigma = h_L(u), h_d = Ko rhoV/rhoL u^2',
+    provenance: 'common-practice',
+    ranges: {},
+    trayTypes: ['fixed-valve'],
+    uncertainty:
+      "No published weep correlation for fixed valves is used: Fair's weep criterion and the Bennett et al. clear liquid height were developed for sieve trays and are applied to the valves as if held open. The weep margin of a fixed-valve tray is an indication only; confirm turndown with the valve supplier's data.",
+  },
+);
+
+/** Klein's valve data and the vapour density for the moving-valve weep limit. */
+export interface MovingValveWeepInput {
+  legFactor: number;
+  valveThickness_mm: number;
+  metalDensity: number;
+  closedK: number;
+  vapourDensity: number;
+  eddyLossCoefficient: number;
+}
+
+/**
+ * Weep limit of a moving-valve tray: the hole velocity at which the valves start to open, Klein's closed
+ * balance point (kleinClosedBalanceVelocity, with C_vw as printed in Ludwig Vol. 2 3rd ed. Example 8-41).
+ * Valves close at low vapour rates and weeping, then dumping, follow at still lower rates (Lieberman, A
+ * Working Guide to Process Equipment); below the closed balance point every valve sits closed on its tabs
+ * and the tray behaves like a sieve tray of small open area. Keeping the vapour above this point is common
+ * practice, not a published weep correlation: the real weep point lies somewhere below it, so a margin on
+ * this limit is on the safe side.
+ * Example: Ludwig Example 8-41 inputs → 3.06 ft/s (0.93 m/s), as printed for V_pt,A.
+ * @returns limit on the deck-orifice area [m/s]
+ */
+export const weepPointMovingValveClosedBalance = method(
+  'weepPointMovingValveClosedBalance',
+  function weepPointMovingValveClosedBalance(p: MovingValveWeepInput): number {
+    return kleinClosedBalanceVelocity(
+      p.legFactor,
+      p.valveThickness_mm,
+      p.metalDensity,
+      p.closedK,
+      p.vapourDensity,
+      p.eddyLossCoefficient,
+    );
+  },
+  {
+    label: 'Moving-valve weep limit (valves start to open)',
+    source:
+      "Klein's closed balance point (Klein, Chem. Eng. May 3 1982 p. 81, as printed in Ludwig, Applied Process Design Vol. 2 3rd ed. Example 8-41) taken as the lowest vapour rate before weeping; valves close, then weep and dump at low rates (Lieberman, A Working Guide to Process Equipment) [common practice]",
+    equation: 'U_weep = U_A = [t_v R_vw (C_vw/Kc) (rhoM/rhoV)]^0.5',
+    provenance: 'common-practice',
+    ranges: {},
+    trayTypes: ['moving-valve'],
+    uncertainty:
+      'The limit is the velocity at which the valves start to open, not a measured weep point: weeping starts somewhere below it, depending on the valve design, so the margin is on the safe side.',
+  },
+);
+
+/**
+ * The weep-point methods of each tray type (registry ids), explicit: a sieve tray reports whichever of its
+ * two governs (the higher weep-point velocity); a valve tray its one method.
+ */
+export const WEEP_METHODS: Readonly<Record<TrayType, readonly string[]>> = Object.freeze({
+  sieve: [weepPointHoleVelocityEduljee.meta.id, weepPointHoleVelocityFair.meta.id],
+  'fixed-valve': [weepPointFixedValveFair.meta.id],
+  'moving-valve': [weepPointMovingValveClosedBalance.meta.id],
+});

@@ -112,6 +112,6 @@ describe('moving-valve tray rating reports the Klein balance points', () => {
     expect(Math.abs(rel(t.details.valvesStartOpenVelocity_m_s! / FT_S, 3.06))).toBeLessThan(0.01);
     expect(Math.abs(rel(t.details.valvesAllOpenVelocity_m_s! / FT_S, 8.01))).toBeLessThan(0.015);
     expect(Math.abs(rel(t.details.valvePartlyOpenDryHead_mm! / IN, 1.788))).toBeLessThan(0.002);
-    expect(t.checks.weeping.method).toBe('kleinClosedBalanceVelocity');
+    expect(t.checks.weeping.method).toBe('weepPointMovingValveClosedBalance');
   });
 });

@@ -145,3 +145,20 @@ describe('Francis crest range as data (crest 6–67.2 mm)', () => {
     expect(codes(t.warnings)).toContain('range:crestOverWeirFrancis:crest_mm');
   });
 });
+
+describe('aeration factor: its uncertainty stated once, in the methods list (issue 13)', () => {
+  it('says the chart is not read, how β is computed and what it affects, in plain words', () => {
+    const u = aerationFactorFrothDensity.meta.uncertainty ?? '';
+    // no reading of Perry's 8th ed. Fig. 14-37 is at hand: the method must say so rather than claim a chart fit
+    expect(u).toMatch(/chart is not read/);
+    expect(u).toMatch(/\(1 \+ phi\)\/2/);
+    expect(u).toMatch(/approximate/);
+    expect(u).not.toMatch(/from memory|to confirm|recalled|\.md\b/i);
+    expect(aerationFactorFrothDensity.meta.source).not.toMatch(/fitted to/i);
+  });
+  it('is not repeated as a warning on the trays of a valve-tray rating', () => {
+    const req = inventedRequest();
+    const t = rateTray(req.section, req.trays[0]!);
+    expect(t.warnings.filter((w) => /aeration factor/i.test(w.message) && !w.code.startsWith('range:'))).toEqual([]);
+  });
+});
