@@ -5,7 +5,7 @@
  */
 import { ValidationError } from '../../errors.js';
 import { calibrateHeatPlan, validateSimulationCases } from '../../engine/heatPlan/index.js';
-import { netZoneLiquid } from '../studies/studyInputs.js';
+import { netZoneLiquidOf } from '../studies/studyInputs.js';
 import type { PlanParts } from './planInputs.js';
 import type { CalibrationResult, HeatPlanInput, SimulationCase } from '../../../shared/types/heatPlan.js';
 import type { HeatPlanSource, PlanCalibrationView } from '../../../shared/types/heatPlans.js';
@@ -30,7 +30,7 @@ function simulationCases(
     let loads = c.loads.filter((t) => trays.has(t.tray));
     if (includesCirculation)
       input.pumpArounds.forEach((pa, k) => {
-        loads = netZoneLiquid(loads, { ...pa, baseDuty_kW: duties[k]! }, input.numbering ?? 'top-down').trays;
+        loads = netZoneLiquidOf(loads, { ...pa, baseDuty_kW: duties[k]! }, input.numbering ?? 'top-down').trays;
       });
     return { name: c.name, duties_kW: duties, trays: loads };
   });

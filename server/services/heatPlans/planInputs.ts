@@ -6,7 +6,7 @@
  */
 import type { DataSource, EntityManager } from 'typeorm';
 import { ValidationError, type ErrorDetail } from '../../errors.js';
-import { netZoneLiquid } from '../studies/studyInputs.js';
+import { netZoneLiquidOf } from '../studies/studyInputs.js';
 import type { TrayNumbering } from '../../../shared/types/columns.js';
 import type { HeatPlanInput, PlanPumpAround } from '../../../shared/types/heatPlan.js';
 import type { CreateHeatPlanBody, HeatPlanSource } from '../../../shared/types/heatPlans.js';
@@ -127,7 +127,7 @@ export function planInputFrom(parts: PlanParts, body: CreateHeatPlanBody): { inp
   });
   const numbering = parts.column.numbering;
   let trays = parts.base.loads.filter((t) => inside(parts)(t.tray));
-  if (body.zoneLiquidIncludesCirculation) for (const pa of pumpArounds) trays = netZoneLiquid(trays, pa, numbering).trays;
+  if (body.zoneLiquidIncludesCirculation) for (const pa of pumpArounds) trays = netZoneLiquidOf(trays, pa, numbering).trays;
   const input: HeatPlanInput = {
     sections,
     trays,

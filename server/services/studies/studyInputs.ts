@@ -7,7 +7,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { ValidationError } from '../../errors.js';
 import type { TrayLoad } from '../../../shared/types/rating.js';
 import type { PumpAroundSpec, StudyInput, StudySection } from '../../../shared/types/pumpAround.js';
-import { pumpAroundCirculation, shiftFraction } from '../../engine/pumpAround/index.js';
+import { netZoneLiquid } from '../../engine/pumpAround/index.js';
 import type { PumpAroundRecord, TraySectionRecord, TrayNumbering } from '../../../shared/types/columns.js';
 import type { CreateStudyBody } from '../../../shared/types/studies.js';
 
@@ -49,33 +49,24 @@ export async function loadStudyParts(
 }
 
 /**
- * Zone liquid without the base circulation: a load case taken from a rating case often carries the
- * pump-around circulation on the zone trays, while the engine wants the net internal liquid there (it adds
- * the circulation at each duty itself). With zoneLiquidIncludesCirculation the base circulation
- * m0 = Q0/(c_p ΔT) (or the fixed circulation) is taken off every zone tray; below zero is an error.
+ * Zone liquid without the base circulation (the engine's netZoneLiquid); a zone tray whose liquid is below
+ * the base circulation is a 400 naming zoneLiquidIncludesCirculation.
  */
-export function netZoneLiquid(
+export function netZoneLiquidOf(
   trays: TrayLoad[],
   pa: PumpAroundSpec,
   numbering: TrayNumbering,
 ): { trays: TrayLoad[]; m0: number } {
-  const hasOne = (pa.returnTemperatureDrop_K !== undefined) !== (pa.circulation_kg_h !== undefined);
-  if (!hasOne || !(pa.liquidHeatCapacity_kJ_kgK > 0)) return { trays, m0: 0 };
-  const m0 = pumpAroundCirculation(pa, pa.baseDuty_kW).circulation_kg_h;
-  const short = trays.filter((t) => shiftFraction(t.tray, pa, numbering).region === 'zone' && t.liquidMassFlow_kg_h < m0);
+  const net = netZoneLiquid(trays, pa, numbering);
+  const short = net.shortTrays;
   if (short.length)
     throw new ValidationError('The zone liquid cannot carry the base circulation', [
       {
         path: 'zoneLiquidIncludesCirculation',
-        message: `the base circulation ${Math.round(m0)} kg/h exceeds the liquid of zone tray${short.length > 1 ? 's' : ''} ${short.map((t) => `${t.tray} (${Math.round(t.liquidMassFlow_kg_h)} kg/h)`).join(', ')}`,
+        message: `the base circulation ${Math.round(net.m0)} kg/h exceeds the liquid of zone tray${short.length > 1 ? 's' : ''} ${short.map((t) => `${t.tray} (${Math.round(t.liquidMassFlow_kg_h)} kg/h)`).join(', ')}`,
       },
     ]);
-  return {
-    trays: trays.map((t) =>
-      shiftFraction(t.tray, pa, numbering).region === 'zone' ? { ...t, liquidMassFlow_kg_h: t.liquidMassFlow_kg_h - m0 } : t,
-    ),
-    m0,
-  };
+  return { trays: net.trays, m0: net.m0 };
 }
 
 /** The engine input; load-case trays outside every section are left out (and listed). */
@@ -111,7 +102,7 @@ export function studyInputFrom(
   };
   let netOfCirculation_kg_h: number | null = null;
   if (body.zoneLiquidIncludesCirculation) {
-    const net = netZoneLiquid(input.trays, input.pumpAround, input.numbering ?? 'top-down');
+    const net = netZoneLiquidOf(input.trays, input.pumpAround, input.numbering ?? 'top-down');
     input.trays = net.trays;
     netOfCirculation_kg_h = net.m0;
   }
