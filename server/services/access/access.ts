@@ -6,15 +6,20 @@ import type { SessionUser } from '../../../shared/types/api.js';
 export type Viewer = Pick<SessionUser, 'id' | 'role'>;
 
 /**
- * Column visibility: admins see every site; everyone else sees the sites they are members of.
- * A column the user may not see answers 404 (its existence is not revealed).
+ * The site-visibility rule, the one place it is written in SQL: admins see every site; everyone else sees
+ * the sites they are members of. A column the user may not see answers 404 (its existence is not revealed).
+ * Every query that lists or reads site data filters with these (tests/api/siteIsolation.test.ts).
  */
+
+/** `siteIdExpr` is a site the user named by `userIdExpr` (an SQL expression: a parameter or a column) is a member of. */
+export function memberSiteSql(siteIdExpr: string, userIdExpr: string): string {
+  return `${siteIdExpr} IN (SELECT site_id FROM site_members WHERE user_id = ${userIdExpr})`;
+}
+
+/** The filter for one viewer, the user id as positional parameter `$paramIndex`. */
 export function siteFilterSql(user: Viewer, siteIdExpr: string, paramIndex: number): { sql: string; params: unknown[] } {
   if (user.role === 'admin') return { sql: 'TRUE', params: [] };
-  return {
-    sql: `${siteIdExpr} IN (SELECT site_id FROM site_members WHERE user_id = $${paramIndex})`,
-    params: [user.id],
-  };
+  return { sql: memberSiteSql(siteIdExpr, `$${paramIndex}`), params: [user.id] };
 }
 
 export async function canSeeColumn(db: DataSource | EntityManager, user: Viewer, columnId: string): Promise<boolean> {

@@ -5,6 +5,7 @@
  */
 import type { EntityManager } from 'typeorm';
 import { ValidationError } from '../../errors.js';
+import { memberSiteSql } from '../access/access.js';
 import { can, COLUMN_ENGINEER_PERMISSION, ROLE_LABELS, rolesWith, type Role } from '../../../shared/permissions.js';
 
 // Canonical textual form only: PostgreSQL would refuse other spellings the schema format lets through.
@@ -19,7 +20,7 @@ export const engineerRoleNames = (): string =>
 export async function engineerProblem(em: EntityManager, userId: string, siteId: string): Promise<string | null> {
   if (!UUID.test(userId)) return 'is not a user id';
   const [u] = (await em.query(
-    `SELECT u.name, u.role, u.active, EXISTS (SELECT 1 FROM site_members m WHERE m.user_id = u.id AND m.site_id = $2) AS member
+    `SELECT u.name, u.role, u.active, ${memberSiteSql('$2::uuid', 'u.id')} AS member
        FROM users u WHERE u.id = $1`,
     [userId, siteId],
   )) as { name: string; role: Role; active: boolean; member: boolean }[];

@@ -2,7 +2,7 @@
 import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 import { TowerColumn } from '../../db/entities/TowerColumn.js';
 import { ConflictError, NotFoundError } from '../../errors.js';
-import { assertColumnVisible } from '../access/access.js';
+import { assertColumnVisible, memberSiteSql } from '../access/access.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 
 /** Optimistic lock: a stale version answers 409 and nothing is written. */
@@ -18,10 +18,7 @@ export function assertVersion(what: string, current: number, given: number): voi
 export async function visibleColumn(em: EntityManager, user: SessionUser, columnId: string, lock = false): Promise<TowerColumn> {
   const qb = em.createQueryBuilder(TowerColumn, 'c').where('c.id = :columnId', { columnId });
   if (user.role !== 'admin')
-    qb.innerJoin('process_units', 'u', 'u.id = c.unit_id').andWhere(
-      'u.site_id IN (SELECT sm.site_id FROM site_members sm WHERE sm.user_id = :userId)',
-      { userId: user.id },
-    );
+    qb.innerJoin('process_units', 'u', 'u.id = c.unit_id').andWhere(memberSiteSql('u.site_id', ':userId'), { userId: user.id });
   if (lock) qb.setLock('pessimistic_write', undefined, ['c']);
   const col = await qb.getOne();
   if (!col) throw new NotFoundError('Column');

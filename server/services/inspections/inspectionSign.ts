@@ -10,6 +10,7 @@ import { Inspection } from '../../db/entities/Inspection.js';
 import { ConflictError, ForbiddenError } from '../../errors.js';
 import { queueNotice, userEmail } from '../../mail/outbox.js';
 import { audit } from '../audit/audit.js';
+import { memberSiteSql } from '../access/access.js';
 import { engineerRoleNames } from '../columns/columnEngineer.js';
 import { assertVersion } from '../columns/columnsCommon.js';
 import { toInspectionRecord } from './inspectionRead.js';
@@ -43,7 +44,7 @@ async function engineerEmails(em: EntityManager, engineerId: string | null, site
     if (e) return [e];
   }
   const rows = (await em.query(
-    `SELECT u.email FROM users u JOIN site_members m ON m.user_id = u.id WHERE m.site_id = $1 AND u.active AND u.role = ANY($2)`,
+    `SELECT u.email FROM users u WHERE ${memberSiteSql('$1::uuid', 'u.id')} AND u.active AND u.role = ANY($2)`,
     [siteId, rolesWith(COLUMN_ENGINEER_PERMISSION)],
   )) as { email: string }[];
   return rows.map((r) => r.email);

@@ -16,7 +16,7 @@ import { randomUUID } from 'node:crypto';
 import { driverPool, preparedQuery } from '../../db/prepared.js';
 import { WriteBatcher } from '../../db/writeBatcher.js';
 import { NotFoundError } from '../../errors.js';
-import { siteFilterSql } from '../access/access.js';
+import { memberSiteSql, siteFilterSql } from '../access/access.js';
 import { encodeJson } from '../../db/codec/index.js';
 import type { RatingRun } from '../../db/entities/RatingRun.js';
 import type { SessionUser } from '../../../shared/types/api.js';
@@ -154,7 +154,7 @@ function insertRunsSql(n: number): string {
      ok AS (
        SELECT v.* FROM v JOIN columns c ON c.id = v.column_id AND c.version = v.column_version
          JOIN process_units u ON u.id = c.unit_id
-       WHERE (v.member IS NULL OR u.site_id IN (SELECT m.site_id FROM site_members m WHERE m.user_id = v.member))
+       WHERE (v.member IS NULL OR ${memberSiteSql('u.site_id', 'v.member')})
          AND EXISTS (SELECT 1 FROM load_cases l WHERE l.id = v.load_case_id AND l.column_id = c.id AND l.version = v.load_case_version)
          AND (SELECT coalesce(array_agg(s.id::text || ':' || s.version ORDER BY s.first_tray), '{}'::text[])
               FROM tray_sections s WHERE s.column_id = c.id) = v.sections),
