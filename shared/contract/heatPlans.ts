@@ -14,6 +14,7 @@ import type {
   HeatPlanInput,
   PlanSuggestion,
   PlanViolation,
+  PointLoadsSource,
   PumpAroundHeat,
   SectionFractionation,
 } from '../types/heatPlan.js';
@@ -146,6 +147,16 @@ const gridPointFields = {
   worstPercent: Num(),
   worstTray: Nullable(Type.Integer()),
   worstCheck: Nullable(CheckName),
+  /** where the point's loads came from (plans with simulation cases; absent: the model) */
+  loads: Type.Optional(
+    json<PointLoadsSource>(
+      Obj({
+        source: StringEnum(['case', 'interpolated', 'model'] as const),
+        cases: Type.Array(Type.String()),
+        fraction: Nullable(Num()),
+      }),
+    ),
+  ),
 };
 /** A point of the duty grid for the map: the engine's point without its trays, plus the worst tray. */
 export const PlanGridPointSchema = Obj(gridPointFields);

@@ -75,6 +75,15 @@ export interface PlanViolation {
   check: PlanCheck;
 }
 
+/** Which loads a point was rated on (plans run with simulation cases): the model, one case, or two cases. */
+export interface PointLoadsSource {
+  source: 'case' | 'interpolated' | 'model';
+  /** the case(s) used, by name */
+  cases: string[];
+  /** position between the two bracketing cases (0 = first, 1 = second), interpolated only */
+  fraction: number | null;
+}
+
 export interface PlanPoint {
   duties_kW: number[];
   /** change of the overhead condenser duty from the base case = −Σ(Q − Q0) [kW] */
@@ -90,6 +99,8 @@ export interface PlanPoint {
   heat: PumpAroundHeat[];
   fractionation: SectionFractionation[];
   trays: PlanTrayPoint[];
+  /** present when the plan ran with simulation cases: where this point's loads came from */
+  loads?: PointLoadsSource;
 }
 
 export interface BoundaryPoint {
@@ -198,12 +209,7 @@ export interface CalibrationResult {
   notes: string[];
 }
 
-/** Where the loads at some duties came from: a simulated case, two bracketing cases, or the model. */
-export interface CalibratedLoads {
-  source: 'case' | 'interpolated' | 'model';
-  /** the case(s) used, by name */
-  cases: string[];
-  /** position between the two bracketing cases (0 = first, 1 = second), interpolated only */
-  fraction: number | null;
+/** The loads at some duties and where they came from: a simulated case, two bracketing cases, or the model. */
+export interface CalibratedLoads extends PointLoadsSource {
   trays: TrayLoad[];
 }

@@ -63,3 +63,15 @@ export async function makeHeatPlanColumn(ds: DataSource): Promise<HeatPlanFixtur
   }
   return { ...f, lowerPumpAroundId: p!.id, simulationCaseIds: sims };
 }
+
+/** invented third pump-around of the test column, above the other two (draw tray 5, return tray 3) */
+export const UPPER_PA = { name: 'Upper PA (invented)', drawTray: 5, returnTray: 3, baseDuty_kW: 1500 };
+
+/** Add UPPER_PA to a fixture column; its id. */
+export async function addUpperPumpAround(ds: DataSource, columnId: string): Promise<string> {
+  const [p] = (await ds.query(
+    `INSERT INTO pump_arounds (column_id, name, draw_tray, return_tray, base_duty_kw) VALUES ($1, $2, $3, $4, $5) RETURNING id`,
+    [columnId, UPPER_PA.name, UPPER_PA.drawTray, UPPER_PA.returnTray, UPPER_PA.baseDuty_kW],
+  )) as { id: string }[];
+  return p!.id;
+}

@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { planReportDoc } from '../../server/services/reports/heatPlanReportFiles.js';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { EXAMPLE } from './study-fixture.js';
-import { makeHeatPlanColumn, SIM_LATENT_HEAT, type HeatPlanFixture } from './heatPlan-fixture.js';
+import { addUpperPumpAround, makeHeatPlanColumn, SIM_LATENT_HEAT, UPPER_PA, type HeatPlanFixture } from './heatPlan-fixture.js';
 import type { HeatPlanRecord, SlimPlanPoint } from '../../shared/types/heatPlans.js';
 
 let ctx: TestContext;
@@ -143,6 +143,58 @@ describe('a stored heat-recovery plan', () => {
   });
 });
 
+describe('a plan of three pump-arounds', () => {
+  it('rates every duty triple with the identities: condenser change = −(sum of duty changes), trays below the lowest draw unchanged', async () => {
+    const upper = await addUpperPumpAround(ctx.ds, fx.columnId);
+    const body = planBody(fx) as { pumpArounds: Record<string, unknown>[] };
+    body.pumpArounds[0]!.sweep = { fromDuty_kW: 4000, toDuty_kW: 6000, steps: 2 };
+    body.pumpArounds[1]!.sweep = { fromDuty_kW: 3000, toDuty_kW: 5000, steps: 2 };
+    // the third with a fixed circulation instead of a fixed return temperature drop
+    body.pumpArounds.push({
+      pumpAroundId: upper,
+      sweep: { fromDuty_kW: 1000, toDuty_kW: 2000, steps: 2 },
+      liquidHeatCapacity_kJ_kgK: 2.5,
+      circulation_kg_h: 40000,
+      drawTemperature_C: 150,
+    });
+    const res = await create(author, body);
+    expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(201);
+    const plan = res.body as HeatPlanRecord;
+    const r = plan.result;
+    expect(plan.pumpAroundNames).toEqual([EXAMPLE.pumpAround.name, 'Lower PA (invented)', UPPER_PA.name]);
+    expect(r.axes.map((a) => a.length)).toEqual([3, 3, 3]);
+    expect(r.grid).toHaveLength(27);
+    expect(r.grid[1]!.duties_kW).toEqual([4000, 3000, 1500]);
+    expect(r.grid[3]!.duties_kW).toEqual([4000, 4000, 1000]);
+    const base = [EXAMPLE.pumpAround.baseDuty_kW, 4000, UPPER_PA.baseDuty_kW];
+    for (const g of r.grid) {
+      const sum = g.duties_kW.reduce((s, q, i) => s + q - base[i]!, 0);
+      expect(g.condenserDutyChange_kW).toBeCloseTo(-sum, 6);
+      expect(g.heat.map((h) => h.name)).toEqual(plan.pumpAroundNames);
+    }
+    // the fixed circulation: ΔT = Q·3600/(m c_p) at each duty
+    const heat = r.grid[2]!.heat[2]!;
+    expect(heat.circulation_kg_h).toBe(40000);
+    expect(heat.drawTemperature_C - heat.returnTemperature_C).toBeCloseTo((2000 * 3600) / (40000 * 2.5), 9);
+    // below the lowest draw (tray 14) trays 15 and 16 keep the base case's traffic at every point
+    for (let i = 0; i < r.grid.length; i++) {
+      const p = (await author.get(`/api/heat-plans/${plan.id}/points/${i}`)).body as SlimPlanPoint;
+      for (const tray of [15, 16]) {
+        const t = p.trays.find((x) => x.tray === tray)!;
+        const b = EXAMPLE.trays.find((x) => x.tray === tray)!;
+        expect(t.vapourMassFlow_kg_h).toBe(b.vapourMassFlow_kg_h);
+        expect(t.liquidMassFlow_kg_h).toBe(b.liquidMassFlow_kg_h);
+      }
+    }
+    for (const b of r.boundary) expect(b.duties_kW).toHaveLength(3);
+    if (r.suggestion) expect(r.suggestion.duties_kW).toHaveLength(3);
+    // the report names all three (its map shows the first two)
+    expect(readerText(planReportDoc(plan, 'SI').content).join('\n')).toContain(`Pump-around 3`);
+    await ctx.ds.query(`DELETE FROM heat_plans WHERE id = $1`, [plan.id]);
+    await ctx.ds.query(`DELETE FROM pump_arounds WHERE id = $1`, [upper]);
+  });
+});
+
 describe('a plan calibrated against simulation cases', () => {
   it('fits the latent heat the cases were made with, rates on the calibrated model and states the fit quality', async () => {
     const res = await create(author, { ...planBody(fx), simulationCaseIds: fx.simulationCaseIds });
@@ -160,6 +212,42 @@ describe('a plan calibrated against simulation cases', () => {
     const t = cal.cases[0]!.trays.find((x) => x.tray === 8)!;
     expect(t.modelVapour_kg_h).toBeCloseTo(t.simVapour_kg_h, 0);
     expect(readerText(planReportDoc(plan, 'SI').content).join('\n')).toContain(cal.summary);
+  });
+
+  it('rates grid points at a case on its loads and between two cases on interpolated loads, and says so everywhere', async () => {
+    // grid nodes on both cases (fixture: 4160/5200 kW and 6240/3200 kW) and on the midpoint between them
+    const body = planBody(fx) as { pumpArounds: { sweep: unknown }[] };
+    body.pumpArounds[0]!.sweep = { fromDuty_kW: 4160, toDuty_kW: 6240, steps: 2 };
+    body.pumpArounds[1]!.sweep = { fromDuty_kW: 3200, toDuty_kW: 5200, steps: 2 };
+    const res = await create(author, { ...body, simulationCaseIds: fx.simulationCaseIds });
+    expect(res.status, JSON.stringify(res.body).slice(0, 400)).toBe(201);
+    const plan = res.body as HeatPlanRecord;
+    const g = plan.result.grid;
+    const index = (duties: number[]) => g.findIndex((p) => p.duties_kW.every((d, i) => Math.abs(d - duties[i]!) < 1e-6));
+    expect(g[index([4160, 5200])]!.loads).toEqual({ source: 'case', cases: ['Simulation case 1'], fraction: null });
+    expect(g[index([6240, 3200])]!.loads).toEqual({ source: 'case', cases: ['Simulation case 2'], fraction: null });
+    const mid = g[index([5200, 4200])]!.loads!;
+    expect(mid.source).toBe('interpolated');
+    expect(mid.cases).toEqual(['Simulation case 1', 'Simulation case 2']);
+    expect(mid.fraction).toBeCloseTo(0.5, 9);
+    expect(g[index([4160, 3200])]!.loads?.source).toBe('model');
+    // the point's trays are the case's stored loads (vapour as stored; zone liquid plus the circulation)
+    const [stored] = (await ctx.ds.query(`SELECT loads FROM load_cases WHERE id = $1`, [fx.simulationCaseIds[0]])) as {
+      loads: { tray: number; vapourMassFlow_kg_h: number }[];
+    }[];
+    const pt = (await author.get(`/api/heat-plans/${plan.id}/points/${index([4160, 5200])}`)).body as SlimPlanPoint;
+    expect(pt.loads?.source).toBe('case');
+    for (const t of pt.trays)
+      expect(t.vapourMassFlow_kg_h).toBeCloseTo(stored!.loads.find((l) => l.tray === t.tray)!.vapourMassFlow_kg_h, 6);
+    // the report and the export say which loads each point used
+    const text = readerText(planReportDoc(plan, 'SI').content).join('\n');
+    expect(text).toContain('3 of the 9 grid points are rated on simulated loads');
+    expect(text).toContain('interpolated between simulation cases “Simulation case 1” and “Simulation case 2” (50 % of the way)');
+    expect(text).toContain(plan.result.calibration!.summary);
+    const csv = await author.get(`/api/heat-plans/${plan.id}/export?format=csv`);
+    expect(csv.text).toContain('Loads rated');
+    expect(csv.text).toContain('simulation case “Simulation case 2”');
+    expect(csv.text).toContain('model calibrated against the simulation cases');
   });
 
   it('a case without the load of every tray is refused, naming the case', async () => {

@@ -6,7 +6,8 @@
  * trays, as a rating case does, so the plan takes the base circulations off first. The margin is 80 %: at the
  * usual 70 % no split of this invented case keeps the margin (the plan's margin table shows it).
  * Two invented "simulation" cases are added and tagged with their duties: made by the traffic model itself
- * with zone latent heats 8 % and 5 % above the plan's (no simulator was run), so the demo shows a calibration.
+ * with zone latent heats 8 % and 5 % above the plan's (no simulator was run), so the demo shows a calibration,
+ * and placed on grid nodes, so that its map shows points rated on simulated (and interpolated) loads.
  */
 import type { EntityManager } from 'typeorm';
 import type { User } from '../entities/User.js';
@@ -92,10 +93,17 @@ async function seedSimulationCases(
   pumpAroundIds: string[],
 ): Promise<string[]> {
   const pas = input.pumpArounds.map((pa, i) => ({ ...pa, latentHeat_kJ_kg: input.latentHeat_kJ_kg * DEMO_TRUE_LATENT[i]! }));
+  // on grid nodes one step either side of the middle of both sweeps, so that the demo map shows points rated on
+  // a case's loads and, at the middle node between them, on loads interpolated between the two cases
+  const node = (i: number, k: number) => {
+    const s = pas[i]!.sweep;
+    return s.fromDuty_kW + ((s.toDuty_kW - s.fromDuty_kW) * k) / s.steps;
+  };
+  const mid = (i: number) => pas[i]!.sweep.steps / 2;
   const at = [
-    [1.06, 0.94],
-    [0.95, 1.02],
-  ].map((f) => pas.map((pa, i) => Math.round((pa.baseDuty_kW * f[i]!) / 100) * 100));
+    [node(0, mid(0) + 1), node(1, mid(1) - 1)],
+    [node(0, mid(0) - 1), node(1, mid(1) + 1)],
+  ];
   const ids: string[] = [];
   for (const [n, duties] of at.entries()) {
     // a deterministic ±1 % wobble tray by tray, so that the fit is not exact (invented)
@@ -110,7 +118,7 @@ async function seedSimulationCases(
       },
     );
     const lc = await insertLoadCase(em, toSessionUser(author), columnId, {
-      name: `Simulation case ${n + 1} (invented): ${duties.map((d) => `${d / 1000} MW`).join(' / ')}`,
+      name: `Simulation case ${n + 1} (invented): ${duties.map((d) => `${(d / 1000).toFixed(2)} MW`).join(' / ')}`,
       basis: 'other',
       source: 'imported',
       notes: 'Invented demo case standing in for a simulation at other pump-around duties.',

@@ -40,14 +40,11 @@ export function interpolateLoads(a: readonly TrayLoad[], b: readonly TrayLoad[],
 }
 
 /**
- * @param calibrated the calibrated plan input (CalibrationResult.calibratedInput)
- * @param cases the simulation cases it was fitted to
+ * The simulated loads at some duties, or null where no case gives them: a case whose duties match (within
+ * DUTY_MATCH_KW on every pump-around), else the straight-line interpolation between the two closest cases
+ * whose segment passes through the duties (within DUTY_MATCH_KW). Trays as in the cases (net zone liquid).
  */
-export function calibratedLoadsAt(
-  calibrated: HeatPlanInput,
-  cases: readonly SimulationCase[],
-  duties_kW: readonly number[],
-): CalibratedLoads {
+export function simulatedLoadsAt(cases: readonly SimulationCase[], duties_kW: readonly number[]): CalibratedLoads | null {
   const matched = cases.findIndex((c) => gap(c.duties_kW, duties_kW) <= DUTY_MATCH_KW);
   if (matched >= 0)
     return {
@@ -75,15 +72,27 @@ export function calibratedLoadsAt(
       if (!best || dd < best.span) best = { a, b, f, span: dd };
     }),
   );
-  if (best) {
-    const { a, b, f } = best;
-    return {
-      source: 'interpolated',
-      cases: [caseName(cases[a]!, a), caseName(cases[b]!, b)],
-      fraction: f,
-      trays: interpolateLoads(cases[a]!.trays, cases[b]!.trays, f),
-    };
-  }
+  if (!best) return null;
+  const { a, b, f } = best;
+  return {
+    source: 'interpolated',
+    cases: [caseName(cases[a]!, a), caseName(cases[b]!, b)],
+    fraction: f,
+    trays: interpolateLoads(cases[a]!.trays, cases[b]!.trays, f),
+  };
+}
+
+/**
+ * @param calibrated the calibrated plan input (CalibrationResult.calibratedInput)
+ * @param cases the simulation cases it was fitted to
+ */
+export function calibratedLoadsAt(
+  calibrated: HeatPlanInput,
+  cases: readonly SimulationCase[],
+  duties_kW: readonly number[],
+): CalibratedLoads {
+  const simulated = simulatedLoadsAt(cases, duties_kW);
+  if (simulated) return simulated;
   const m = planModel(calibrated);
   const model = shiftPlanTraffic(
     calibrated.trays,

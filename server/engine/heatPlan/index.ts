@@ -22,7 +22,7 @@ export { SENSITIVITY_MARGINS } from './suggestion.js';
 export { validateHeatPlanInput } from './validate.js';
 export { heatPlanFaults, MAX_GRID_POINTS } from './faults.js';
 export { calibrateHeatPlan, DUTY_MATCH_KW } from './calibration.js';
-export { calibratedLoadsAt, interpolateLoads } from './calibratedLoads.js';
+export { calibratedLoadsAt, interpolateLoads, simulatedLoadsAt } from './calibratedLoads.js';
 export { validateSimulationCases } from './validateCases.js';
 export type { CasesValidation } from './validateCases.js';
 export { driftFaults } from './faults.js';

@@ -4,12 +4,23 @@
  * suggest the split that recovers most heat above the useful temperature while keeping the margin.
  * The input must have passed validateHeatPlanInput. See README.md for the model and its limits.
  */
-import type { BoundaryPoint, HeatPlanInput, HeatPlanResult, PlanPoint, PlanViolation } from '../../../shared/types/heatPlan.js';
+import type {
+  BoundaryPoint,
+  HeatPlanInput,
+  HeatPlanResult,
+  PlanPoint,
+  PlanViolation,
+  PointLoadsSource,
+  SimulationCase,
+} from '../../../shared/types/heatPlan.js';
+import { simulatedLoadsAt } from './calibratedLoads.js';
 import { BoundarySolver } from './boundary.js';
 import { sectionMembers } from './fractionation.js';
 import { dutyGrid, GridRatings, nodeDuties, nodeIndices } from './grid.js';
 import { constraintName, planModel } from './model.js';
-import { planPoint, pointAt } from './points.js';
+import { planPoint, pointAt, pointOnLoads } from './points.js';
+import type { SectionMembers } from './fractionation.js';
+import type { PlanModel } from './model.js';
 import { overAtDuties, overAtNode, positiveAtNode } from './nodes.js';
 import { SENSITIVITY_MARGINS, suggestSplit } from './suggestion.js';
 
@@ -18,6 +29,30 @@ export type HeatPlanResultOf<P> = Omit<HeatPlanResult, 'points'> & { points: P[]
 export interface HeatPlanOptions {
   /** share the rating of a tray between points whose duties it does not depend on (default true) */
   reuseRatings?: boolean;
+  /**
+   * simulation cases (validated, net zone liquid; normally those the input was calibrated against): a grid
+   * point at a case's duties is rated on that case's loads, one on the line between two cases on loads
+   * interpolated between them (calibratedLoads.ts); every point then says which loads it used (`loads`).
+   * The boundary and the suggestion stay on the model.
+   */
+  cases?: readonly SimulationCase[];
+}
+
+const MODEL_LOADS: PointLoadsSource = { source: 'model', cases: [], fraction: null };
+
+/** The model's point, or the point rated on the simulated loads at these duties when the cases give them. */
+function pointWithCases(
+  m: PlanModel,
+  duties: number[],
+  model: () => PlanPoint,
+  sections: readonly SectionMembers[],
+  cases: readonly SimulationCase[] | undefined,
+): PlanPoint {
+  if (!cases) return model();
+  const sim = simulatedLoadsAt(cases, duties);
+  if (!sim) return { ...model(), loads: MODEL_LOADS };
+  const { trays, ...source } = sim;
+  return { ...pointOnLoads(m, duties, trays, sections), loads: source };
 }
 
 export const PLAN_NOTES = [
@@ -52,7 +87,7 @@ export function runHeatPlanWith<P>(
     const trays = ratings.rateNode(n, idx);
     const over = overAtNode(ratings, n);
     feasible.push(over.length === 0);
-    points.push(mapPoint(planPoint(m, duties, trays, over, sections)));
+    points.push(mapPoint(pointWithCases(m, duties, () => planPoint(m, duties, trays, over, sections), sections, options.cases)));
   }
 
   const boundary: BoundaryPoint[] = [];
@@ -82,6 +117,10 @@ export function runHeatPlanWith<P>(
   }));
   const suggestion = marginSensitivity.find((s) => s.margin === m.margin)!.suggestion;
   const notes = [...PLAN_NOTES];
+  if (options.cases?.length)
+    notes.push(
+      "Grid points at a simulation case's duties are rated on that case's loads, points on the straight line between two cases on loads interpolated between them; all other points, the limit lines and the suggestion come from the model calibrated against the cases.",
+    );
   if (!feasible.some(Boolean)) notes.push('No point of the duty grid is free of dry trays and watched limits: no suggestion.');
   else if (!suggestion) notes.push('No feasible point of the duty grid keeps the margin: no suggestion.');
   return {
@@ -98,8 +137,13 @@ export function runHeatPlanWith<P>(
 }
 
 /** A full point (every tray's traffic and rating, heat level, feasibility) at any duties, rated afresh. */
-export function heatPlanPointAt(input: HeatPlanInput, duties_kW: readonly number[]): PlanPoint {
-  return pointAt(planModel(input), duties_kW);
+export function heatPlanPointAt(
+  input: HeatPlanInput,
+  duties_kW: readonly number[],
+  cases?: readonly SimulationCase[],
+): PlanPoint {
+  const m = planModel(input);
+  return pointWithCases(m, [...duties_kW], () => pointAt(m, duties_kW), sectionMembers(input.sections, m.trays, m.roles), cases);
 }
 
 /** Whether the plan's duties are feasible, and what is over: the model rated afresh at any duties. */

@@ -63,7 +63,7 @@ export function calibratePlan(
   source: HeatPlanSource,
   input: HeatPlanInput,
   includesCirculation: boolean,
-): { input: HeatPlanInput; view: PlanCalibrationView; notes: string[] } {
+): { input: HeatPlanInput; cases: SimulationCase[]; view: PlanCalibrationView; notes: string[] } {
   const checked = validateSimulationCases(input, simulationCases(parts, source, input, includesCirculation));
   if (!checked.ok)
     throw new ValidationError(
@@ -92,5 +92,5 @@ export function calibratePlan(
       })),
     })),
   };
-  return { input: cal.calibratedInput, view, notes: cal.notes };
+  return { input: cal.calibratedInput, cases: checked.value, view, notes: cal.notes };
 }

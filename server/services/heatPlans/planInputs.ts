@@ -153,15 +153,3 @@ export function planInputFrom(parts: PlanParts, body: CreateHeatPlanBody): { inp
   };
   return { input, source };
 }
-
-/** Simulation cases as the calibration takes them: their trays inside the sections and duties in input order. */
-export function simulationCasesFor(
-  parts: PlanParts,
-  source: HeatPlanSource,
-): { name: string; trays: TrayLoad[]; duties_kW: number[] }[] {
-  return parts.simulations.map((c, i) => ({
-    name: c.name,
-    trays: c.loads.filter((t) => inside(parts)(t.tray)),
-    duties_kW: source.simulationCases[i]!.duties_kW,
-  }));
-}

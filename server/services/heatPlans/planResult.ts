@@ -5,7 +5,7 @@
  * engine's boundary, suggestion, margin sensitivity and notes are kept exactly, by field name.
  */
 import { CHECK_NAMES, type CheckName } from '../../../shared/types/rating.js';
-import type { HeatPlanInput, PlanPoint } from '../../../shared/types/heatPlan.js';
+import type { HeatPlanInput, PlanPoint, SimulationCase } from '../../../shared/types/heatPlan.js';
 import type { PlanGridPoint, SlimPlanPoint, SlimPlanTray, StoredHeatPlanResult } from '../../../shared/types/heatPlans.js';
 import { heatPlanPointAt, runHeatPlanWith } from '../../engine/heatPlan/index.js';
 
@@ -62,19 +62,30 @@ export function planAxes(input: HeatPlanInput): number[][] {
   );
 }
 
-/** The stored plan: the engine run with every grid point slimmed as it is rated; trays per point returned apart. */
-export function runStoredPlan(input: HeatPlanInput): { result: StoredHeatPlanResult; gridTrays: SlimPlanTray[][] } {
+/**
+ * The stored plan: the engine run with every grid point slimmed as it is rated; trays per point returned
+ * apart. With simulation cases, points at or between them are rated on the simulated loads (each says so).
+ */
+export function runStoredPlan(
+  input: HeatPlanInput,
+  cases?: readonly SimulationCase[],
+): { result: StoredHeatPlanResult; gridTrays: SlimPlanTray[][] } {
   const methods = new Set<string>();
-  const r = runHeatPlanWith(input, (p) => {
-    for (const t of p.trays) for (const c of Object.values(t.rating.checks)) methods.add(c.method);
-    return slimPlanPoint(p);
-  });
+  const r = runHeatPlanWith(
+    input,
+    (p) => {
+      for (const t of p.trays) for (const c of Object.values(t.rating.checks)) methods.add(c.method);
+      return slimPlanPoint(p);
+    },
+    { cases },
+  );
   const { points, ...rest } = r;
   // the base and the suggestion rated at their own duties (they lie between grid nodes)
   const keyPoints: StoredHeatPlanResult['keyPoints'] = [
-    { kind: 'base', point: slimPlanPoint(heatPlanPointAt(input, r.baseDuties_kW)) },
+    { kind: 'base', point: slimPlanPoint(heatPlanPointAt(input, r.baseDuties_kW, cases)) },
   ];
-  if (r.suggestion) keyPoints.push({ kind: 'suggestion', point: slimPlanPoint(heatPlanPointAt(input, r.suggestion.duties_kW)) });
+  if (r.suggestion)
+    keyPoints.push({ kind: 'suggestion', point: slimPlanPoint(heatPlanPointAt(input, r.suggestion.duties_kW, cases)) });
   return {
     result: {
       ...rest,

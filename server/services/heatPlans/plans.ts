@@ -53,7 +53,7 @@ export async function buildPlan(db: DataSource | EntityManager, columnId: string
     ? calibratePlan(parts, source, checked.value, body.zoneLiquidIncludesCirculation === true)
     : null;
   const input = calibrated?.input ?? checked.value;
-  const { result, gridTrays } = runStoredPlan(input);
+  const { result, gridTrays } = runStoredPlan(input, calibrated?.cases);
   if (calibrated) {
     result.calibration = calibrated.view;
     result.notes.push(...calibrated.notes);

@@ -5,6 +5,7 @@
  */
 import { CHECK_LABELS } from '../../../shared/labels.js';
 import { HEAT_PLAN_CAUTIONS } from '../../../shared/heatPlanCautions.js';
+import { loadsSourceText } from '../../../shared/heatPlanLoads.js';
 import { formatQuantity, unitLabel, type QuantityId } from '../../../shared/units.js';
 import type { UnitSystem } from '../../../shared/types/api.js';
 import type { HeatPlanRecord } from '../../../shared/types/heatPlans.js';
@@ -21,6 +22,15 @@ export interface PlanReportData {
   trafficHeaders: string[];
   traffic: Row[];
   fit: string;
+  /** the fitted values, as [name, value] */
+  fitted: [string, string][];
+  pointHeaders: string[];
+  /** every grid point: duties, the loads it was rated on, feasibility, heat above the useful temperature, worst tray */
+  points: Row[];
+  /** the points rated on simulated loads (a case, or two interpolated), as in `points` */
+  simulatedPoints: Row[];
+  /** what the points' loads were, in one sentence (the report lists only the points not on the model) */
+  pointsSummary: string;
   cautions: string[];
   notes: string[];
 }
@@ -37,6 +47,15 @@ export function planReportData(p: HeatPlanRecord, sys: UnitSystem): PlanReportDa
   const s = r.suggestion;
   const sugPoint = r.keyPoints.find((k) => k.kind === 'suggestion')?.point;
   const condenser = req.baseCondenserDuty_kW;
+  const pointRow = (g: HeatPlanRecord['result']['grid'][number]): Row => [
+    ...g.duties_kW.map((d) => n('duty', d)),
+    loadsSourceText(g.loads, r.calibration !== null),
+    g.feasible ? 'yes' : 'no',
+    g.withinMargin ? 'yes' : 'no',
+    n('duty', g.recoveredAboveTemperature_kW),
+    Math.round(g.worstPercent),
+    g.worstTray === null ? '—' : `tray ${g.worstTray}, ${checkWords(g.worstCheck ?? '')}`,
+  ];
   const groups = new Map<string, number[][]>();
   for (const b of r.boundary)
     groups.set(`${b.tray}\u0000${b.check}`, [...(groups.get(`${b.tray}\u0000${b.check}`) ?? []), b.duties_kW]);
@@ -85,6 +104,7 @@ export function planReportData(p: HeatPlanRecord, sys: UnitSystem): PlanReportDa
             `${h.name} heat level`,
             `${q('temperature', h.drawTemperature_C)} to ${q('temperature', h.returnTemperature_C)}; ${q('duty', h.aboveTemperature_kW)} above the useful temperature`,
           ]),
+          ['Loads rated at the suggestion', loadsSourceText(sugPoint?.loads, r.calibration !== null)],
         ]
       : [['Suggested split', 'none: no split in the duty ranges keeps every tray within its limits and the margin']],
     marginHeaders: [
@@ -123,6 +143,19 @@ export function planReportData(p: HeatPlanRecord, sys: UnitSystem): PlanReportDa
         i >= 0 ? Math.round(t.percent[i]!) : null,
       ];
     }),
+    fitted: (r.calibration?.fitted ?? []).map((f): [string, string] => [f.name, `${f.value.toPrecision(4)} ${f.unit}`]),
+    pointHeaders: [
+      ...r.pumpArounds.map((name) => `${name} (${unitLabel('duty', sys)})`),
+      'Loads rated',
+      'Within limits',
+      'Within margin',
+      `Above the useful temperature (${unitLabel('duty', sys)})`,
+      'Worst % of limit',
+      'Worst tray and check',
+    ],
+    points: r.grid.map(pointRow),
+    simulatedPoints: r.grid.filter((g) => g.loads && g.loads.source !== 'model').map(pointRow),
+    pointsSummary: pointsSummary(r),
     fit: r.calibration
       ? r.calibration.summary
       : 'No simulation cases were used: away from the base case the traffic comes from the shortcut model alone, not checked against a simulation.',
@@ -130,4 +163,13 @@ export function planReportData(p: HeatPlanRecord, sys: UnitSystem): PlanReportDa
     // the cautions above already say what the engine's screening note says
     notes: r.notes.filter((n) => !n.startsWith('Screening estimate')),
   };
+}
+
+/** How many grid points were rated on simulated loads, and on what the rest were. */
+function pointsSummary(r: HeatPlanRecord['result']): string {
+  if (!r.calibration) return `All ${r.grid.length} grid points are rated on the shortcut model's traffic.`;
+  const sim = r.grid.filter((g) => g.loads && g.loads.source !== 'model').length;
+  return sim
+    ? `${sim} of the ${r.grid.length} grid points are rated on simulated loads (listed below); the other ${r.grid.length - sim} on the model calibrated against the simulation cases.`
+    : `No grid point lies at a simulation case's duties or on the line between two cases: all ${r.grid.length} are rated on the model calibrated against the simulation cases.`;
 }

@@ -112,6 +112,12 @@ export function planReportDoc(p: HeatPlanRecord, sys: UnitSystem, printedAt = ne
       d.limits.length ? table(d.limitHeaders, d.limits) : { text: 'No tray reaches a limit in the duty ranges searched.' },
       { text: 'Fit against simulation', style: 'h2' },
       { text: d.fit },
+      d.fitted.length
+        ? { table: { widths: ['auto', '*'], body: d.fitted }, layout: 'lightHorizontalLines', margin: [0, 4, 0, 0] }
+        : '',
+      { text: 'Loads at the grid points', style: 'h2' },
+      { text: d.pointsSummary },
+      d.simulatedPoints.length ? table(d.pointHeaders, d.simulatedPoints) : '',
       d.traffic.length ? { text: 'Traffic at the suggestion', style: 'h2' } : '',
       d.traffic.length ? table(d.trafficHeaders, d.traffic, ['auto', 'auto', 'auto', '*', 'auto']) : '',
       { text: 'Methods and sources', style: 'h2' },
@@ -148,6 +154,12 @@ export function planCsv(d: PlanReportData): Buffer {
     [],
     ['Fit against simulation'],
     [d.fit],
+    ...d.fitted,
+    [],
+    ['Grid points'],
+    [d.pointsSummary],
+    d.pointHeaders,
+    ...d.points,
     [],
     ['Traffic at the suggestion'],
     d.trafficHeaders,
@@ -172,7 +184,13 @@ export async function planXlsx(d: PlanReportData): Promise<Buffer> {
     widths.forEach((w, i) => (ws.getColumn(i + 1).width = w));
   };
   sheet('Inputs', null, d.inputs, [34, 110]);
-  sheet('Suggested split', null, [...d.suggestion, [], ['Fit against simulation', d.fit]], [34, 90]);
+  sheet('Suggested split', null, [...d.suggestion, [], ['Fit against simulation', d.fit], ...d.fitted], [34, 90]);
+  sheet(
+    'Grid points',
+    d.pointHeaders,
+    [...d.points, [], [d.pointsSummary]],
+    [...d.pointHeaders.slice(6).map(() => 16), 60, 12, 12, 22, 14, 30],
+  );
   sheet('Margin', d.marginHeaders, d.margins, [12, 22, 22, 22, 30]);
   sheet('Limits', d.limitHeaders, d.limits, [8, 26, 14, 30, 30, 30]);
   sheet('Traffic at suggestion', d.trafficHeaders, d.traffic, [8, 16, 16, 24, 12]);
