@@ -12,12 +12,12 @@ import type {
 import { prepareSection } from './prepare.js';
 import { rateTrayPrepared } from './rateTray.js';
 import { ENGINE_VERSION } from './version.js';
-import { trayState } from '../../shared/verdict.js';
+import { isFloodedTray, trayState } from '../../shared/verdict.js';
 
 /**
  * Worst tray per check; the section's controlling check and tray are those of the tray whose own
- * controlling check (rateTray: jet flood on a flooded tray) is furthest past its limit, and the margin is
- * measured on that check, so section and trays give one verdict.
+ * controlling check (rateTray: jet flood on a flooded tray) is furthest past its limit, a flooded tray
+ * before any other, and the margin is measured on that check, so section and trays give one verdict.
  */
 export function summarise(trays: readonly TrayResult[]): SectionSummary {
   const worst: SectionSummaryEntry[] = [];
@@ -31,15 +31,20 @@ export function summarise(trays: readonly TrayResult[]): SectionSummary {
     }
     if (best) worst.push(best);
   }
+  // A flooded tray controls ahead of any tray that is not (a specialist names the flooded tray first, even
+  // where another tray's entrainment is further past its own limit); then the furthest past its limit.
   let controllingCheck: CheckName = CHECK_NAMES[0];
   let controllingTray = trays[0]?.tray ?? 0;
   let maxPct = -1;
+  let controlFlooded = false;
   for (const t of trays) {
     const pct = t.checks[t.controllingCheck].percentOfLimit;
-    if (pct > maxPct) {
+    const flooded = isFloodedTray(t);
+    if ((flooded && !controlFlooded) || (flooded === controlFlooded && pct > maxPct)) {
       maxPct = pct;
       controllingCheck = t.controllingCheck;
       controllingTray = t.tray;
+      controlFlooded = flooded;
     }
   }
   let turndown = Number.POSITIVE_INFINITY;

@@ -18,5 +18,6 @@
 //        weepPointMovingValveClosedBalance (Klein's closed balance point as the weep limit, common practice),
 //        fixed valves weepPointFixedValveFair (Fair's criterion with the valves taken as open, common practice)
 //        with a section range warning (Fair's criterion is a sieve-tray one); values unchanged; the aeration
-//        factor's stated uncertainty says the chart is not read
+//        factor's stated uncertainty says the chart is not read; a flooded tray controls its section (and
+//        the run) ahead of trays that are not flooded
 export const ENGINE_VERSION = '0.8.0';

@@ -48,6 +48,21 @@ describe('flooded trays', () => {
     expect(r.trays.filter((t) => trayState(t) === 'flooded').map((t) => t.tray)).toContain(1);
   });
 
+  it('the whole column of the demo Kister & Haas run is controlled by jet flood on flooded tray 1, not by entrainment on an unflooded tray', () => {
+    const r = demoRun('Winter maximum', 'kister-haas');
+    // tray 21 (middle section, about 78 % of flood) has entrainment further past its own limit than tray 1's
+    // jet flood; a specialist still names the flooded tray first
+    const t21 = r.trays.find((t) => t.tray === 21)!;
+    expect(trayState(t21)).not.toBe('flooded');
+    expect(t21.checks.entrainment!.percentOfLimit).toBeGreaterThan(r.trays[0]!.checks.jetFlood!.percentOfLimit);
+    expect(r.controllingCheck).toBe('jetFlood');
+    expect(r.controllingTray).toBe(1);
+    expect(r.maxPercentOfLimit).toBeCloseTo(r.trays[0]!.checks.jetFlood!.percentOfLimit, 9);
+    // a section without a flooded tray keeps the check furthest past its limit
+    const middle = r.sections[1]!.summary;
+    expect(middle.controllingCheck).toBe('entrainment');
+  });
+
   it('a tray past flood with a Fair rating is flooded too (100 % of flood is the threshold)', () => {
     const req = inventedRequest();
     const heavy = rateTray(req.section, { ...req.trays[0]!, vapourMassFlow_kg_h: req.trays[0]!.vapourMassFlow_kg_h * 3 });
