@@ -15,3 +15,31 @@ export function passesWarning(passes: 1 | 2 | 4, diameter_m: number): string | u
     ? `${passes}-pass trays are unusual below about ${min} m column diameter (common practice): the flow paths get short`
     : undefined;
 }
+
+/** A tray section's span and its number of liquid passes. */
+export interface SectionPasses {
+  firstTray: number;
+  lastTray: number;
+  passes: number;
+}
+
+/** Passes of a tray: those of the section that holds it; a tray outside every section has one. */
+export function trayPassCount(sections: readonly SectionPasses[], tray: number): number {
+  const s = sections.find((x) => tray >= Math.min(x.firstTray, x.lastTray) && tray <= Math.max(x.firstTray, x.lastTray));
+  return s?.passes ?? 1;
+}
+
+/** The pass numbers a tray has: 1…n. */
+export const passNumbers = (n: number): number[] => Array.from({ length: Math.max(1, n) }, (_, i) => i + 1);
+
+/**
+ * Why `pass` is not a pass of `tray`, or undefined when it is. Without a tray, the pass must exist on some tray
+ * of the column (at most the largest number of passes of its sections).
+ */
+export function passFault(sections: readonly SectionPasses[], tray: number | null, pass: number): string | undefined {
+  const n = tray === null ? Math.max(1, ...sections.map((s) => s.passes)) : trayPassCount(sections, tray);
+  if (Number.isInteger(pass) && pass >= 1 && pass <= n) return undefined;
+  const has = n === 1 ? 'one pass' : `${n} passes`;
+  const give = n === 1 ? 'the pass is 1' : `give a pass from 1 to ${n}`;
+  return tray === null ? `no tray of this column has more than ${has}: ${give}` : `tray ${tray} has ${has}: ${give}`;
+}

@@ -316,6 +316,9 @@ export const PRESSURE_DROP_UNIT_LABELS: Readonly<Record<PressureDropUnit, string
  * the ΔP from the head), so the head shown is the engine's head; standard gravity is 9.806 65 m/s² (0.04 % less).
  */
 export const G_HEAD = 9.81;
+/** A head of liquid [mm] of density ρL as a pressure drop [Pa]: ΔP = ρL g h (the engine's g, see G_HEAD). */
+export const headToPressureDrop = (head_mm: number, liquidDensity_kg_m3: number): number =>
+  (head_mm / 1000) * liquidDensity_kg_m3 * G_HEAD;
 /** Head of liquid unless the user chose otherwise: mm in SI, inches in US customary. */
 export const defaultPressureDropUnit = (system: UnitSystem): PressureDropUnit => (system === 'US' ? 'in-liquid' : 'mm-liquid');
 

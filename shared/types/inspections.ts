@@ -189,7 +189,8 @@ export interface InspectionRecord extends InspectionSummary {
   asFoundRunIds: string[];
   /** trays of the column (1..columnTrayCount) and the design values of each tray section */
   columnTrayCount: number;
-  designSections: { firstTray: number; lastTray: number; design: TrayDesign }[];
+  /** the column's tray sections: span, number of liquid passes (the pass numbers a tray has) and design values */
+  designSections: { firstTray: number; lastTray: number; passes: number; design: TrayDesign }[];
 }
 
 // ---- request bodies ----
@@ -270,7 +271,10 @@ export interface AsFoundTrayChange {
   controllingChanged: boolean;
   /** checks whose status changed (ok/near/over) */
   movedChecks: { check: string; design: number; asFound: number; designStatus: string; asFoundStatus: string }[];
+  /** dry-tray head of the tray's liquid [mm], design and as found */
   dryPressureDrop_mm: { design: number; asFound: number };
+  /** the load case's liquid density on the tray [kg/m³], to show the dry ΔP in the user's ΔP unit */
+  liquidDensity_kg_m3: number | null;
 }
 
 export interface AsFoundResult {

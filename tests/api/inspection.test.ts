@@ -5,6 +5,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { config } from '../../server/config.js';
 import { deliverPending } from '../../server/mail/sender.js';
+import { toleranceTable } from '../../server/services/reports/inspectionPdf.js';
 import { makeUser, setupApp, signedIn, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
 import { cleanFindings, makeInspectionColumn, noMeasurements, type InspectionFixture } from './inspection-fixture.js';
 
@@ -94,6 +95,26 @@ describe('inspections: records and tolerance checks', () => {
     expect(r2.status).toBe(400);
     expect(r2.body.details[0]).toMatchObject({ path: 'tray' });
   });
+
+  it('a pass the tray does not have is refused naming the field (the fixture column has one pass)', async () => {
+    const t = await inspector
+      .put(`/api/inspections/${inspectionId}/trays/4/2`)
+      .send({ findings: cleanFindings, asFound: noMeasurements, asLeft: noMeasurements });
+    expect(t.status).toBe(400);
+    expect(t.body.details).toEqual([{ path: 'pass', message: 'tray 4 has one pass: the pass is 1' }]);
+    const p = await inspector
+      .post(`/api/inspections/${inspectionId}/punch`)
+      .send({ tray: 4, pass: 2, finding: 'Loose clamp', action: 'Tighten', priority: 'before-box-up' });
+    expect(p.status).toBe(400);
+    expect(p.body.details[0].path).toBe('pass');
+    const ph = await inspector.post(`/api/inspections/${inspectionId}/photos`).field('pass', '3').attach('photo', png, 'x.png');
+    expect(ph.status).toBe(400);
+    expect(ph.body.details[0]).toMatchObject({ path: 'pass', message: expect.stringMatching(/more than one pass/) });
+    const rec = (await inspector.get(`/api/inspections/${inspectionId}`)).body;
+    expect(rec.trays.some((x: { tray: number }) => x.tray === 4)).toBe(false);
+    expect(rec.punch.some((x: { finding: string }) => x.finding === 'Loose clamp')).toBe(false);
+    expect(rec.designSections[0].passes).toBe(1);
+  });
 });
 
 describe('inspection photos', () => {
@@ -165,6 +186,7 @@ describe('rating as found', () => {
     const t3 = r.body.trays.find((t: { tray: number }) => t.tray === 3);
     // orifice dry head scales with (hole velocity)²: 30 % fewer holes → about (1/0.7)² ≈ 2× the dry drop
     expect(t3.dryPressureDrop_mm.asFound).toBeGreaterThan(t3.dryPressureDrop_mm.design * 1.5);
+    expect(t3.liquidDensity_kg_m3).toBe(700); // the fixture's load case: the page shows the head in the user's ΔP unit
     expect(r.body.asFoundRunId).not.toBe(r.body.designRunId);
     const rec = await engineer.get(`/api/inspections/${inspectionId}`);
     expect(rec.body.asFoundRunIds).toContain(r.body.asFoundRunId);
@@ -269,6 +291,23 @@ describe('PDF report', () => {
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
     expect(pdf.toString('latin1')).toMatch(/NotoSans/);
     expect(pdf.length).toBeGreaterThan(10000);
+  });
+
+  it('says in a sentence that nothing was checked when no measurement was entered, instead of an empty table', async () => {
+    const c = await inspector
+      .post('/api/inspections')
+      .send({ columnId: fx.columnId, turnaround: 'TA-no-measure', startDate: '2026-03-03' });
+    expect(c.status, JSON.stringify(c.body)).toBe(201);
+    const t = await inspector
+      .put(`/api/inspections/${c.body.id}/trays/5/1`)
+      .send({ findings: cleanFindings, asFound: noMeasurements, asLeft: noMeasurements });
+    expect(t.status, JSON.stringify(t.body)).toBe(200);
+    const none = JSON.stringify(toleranceTable(t.body));
+    expect(none).not.toContain('"table"');
+    expect(none).toMatch(/nothing is checked against the tolerances/);
+    const measured = JSON.stringify(toleranceTable((await inspector.get(`/api/inspections/${inspectionId}`)).body));
+    expect(measured).toContain('"table"');
+    expect(measured).toContain('Outlet weir height, point 1');
   });
 });
 

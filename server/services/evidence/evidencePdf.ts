@@ -189,6 +189,6 @@ export async function evidencePdf(
   const rec = await getEvidence(ds, user, id);
   const reading = await readEvidence(ds, user, id, runId);
   const [col] = (await ds.query(`SELECT tag FROM columns WHERE id = $1`, [rec.columnId])) as { tag: string }[];
-  const pdf = await renderPdf(evidenceReportDoc(rec, reading, col!.tag, user.unitSystem));
+  const pdf = await renderPdf(evidenceReportDoc(rec, reading, col!.tag, user.unitSystem), user.unitSystem);
   return { pdf, filename: pdfFileName('evidence', col!.tag, rec.title) };
 }

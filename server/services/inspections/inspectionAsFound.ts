@@ -149,6 +149,7 @@ export async function rateAsFound(ds: DataSource, user: SessionUser, id: string,
 function compareDesignAsFound(design: RatingRun, asFound: RatingRun, geometry: AsFoundResult['geometry']): AsFoundResult {
   const da = new Map(design.results.trays.map((t) => [t.tray, t]));
   const db = new Map(asFound.results.trays.map((t) => [t.tray, t]));
+  const rhoL = new Map(asFound.snapshot.loads.map((l) => [l.tray, l.liquidDensity_kg_m3]));
   const trays: AsFoundTrayChange[] = compareResults(design.results.trays, asFound.results.trays).map((d) => {
     const a = da.get(d.tray);
     const b = db.get(d.tray);
@@ -166,6 +167,7 @@ function compareDesignAsFound(design: RatingRun, asFound: RatingRun, geometry: A
       controllingChanged: d.controllingChanged,
       movedChecks: moved,
       dryPressureDrop_mm: { design: a?.details.dryPressureDrop_mm ?? 0, asFound: b?.details.dryPressureDrop_mm ?? 0 },
+      liquidDensity_kg_m3: rhoL.get(d.tray) ?? null,
     };
   });
   const sum = (r: RatingRun) => ({

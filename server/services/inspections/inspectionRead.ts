@@ -6,6 +6,7 @@ import { InspectionTray } from '../../db/entities/InspectionTray.js';
 import { PunchItemEntity } from '../../db/entities/PunchItem.js';
 import { iso } from '../columns/columnsCommon.js';
 import { checkMeasurements, ruleSetFor } from '../../../shared/inspectionTolerance.js';
+import type { SectionPasses } from '../../../shared/passes.js';
 import type { SectionGeometry } from '../../../shared/types/rating.js';
 import type {
   InspectionRecord,
@@ -43,6 +44,10 @@ export async function columnSections(em: EntityManager, columnId: string): Promi
     [columnId],
   )) as SectionRow[];
 }
+
+/** The sections' spans and pass counts, as shared/passes.ts reads them. */
+export const sectionPasses = (sections: SectionRow[]): SectionPasses[] =>
+  sections.map((s) => ({ firstTray: s.first_tray, lastTray: s.last_tray, passes: s.geometry.passes }));
 
 export function trayRecord(t: InspectionTray, design: TrayDesign, insp: Inspection): InspectionTrayRecord {
   const rules = ruleSetFor(insp.rules);
@@ -165,6 +170,7 @@ export async function toInspectionRecord(em: EntityManager, insp: Inspection): P
     designSections: sections.map((s) => ({
       firstTray: s.first_tray,
       lastTray: s.last_tray,
+      passes: s.geometry.passes,
       design: designFor(sections, s.first_tray),
     })),
   };

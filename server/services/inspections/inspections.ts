@@ -6,7 +6,8 @@ import { ConflictError, ValidationError } from '../../errors.js';
 import { siteFilterSql } from '../access/access.js';
 import { audit } from '../audit/audit.js';
 import { assertVersion, iso, trayOutOfRange, visibleChild, visibleColumn } from '../columns/columnsCommon.js';
-import { toInspectionRecord } from './inspectionRead.js';
+import { columnSections, sectionPasses, toInspectionRecord } from './inspectionRead.js';
+import { passFault } from '../../../shared/passes.js';
 import { measurementErrors } from '../../../shared/inspectionTolerance.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type {
@@ -127,6 +128,13 @@ export async function updateInspection(
   });
 }
 
+/** 400 naming `pass` when the tray (or, without a tray, every tray of the column) has no such pass. */
+export async function assertPass(em: EntityManager, columnId: string, tray: number | null, pass: number | null): Promise<void> {
+  if (pass === null) return;
+  const fault = passFault(sectionPasses(await columnSections(em, columnId)), tray, pass);
+  if (fault) throw new ValidationError('Invalid pass', [{ path: 'pass', message: fault }]);
+}
+
 /** Create or replace the record of one tray and pass (optimistic lock on its version when it exists). */
 export async function saveTray(
   ds: DataSource,
@@ -146,6 +154,7 @@ export async function saveTray(
     const [col] = (await em.query(`SELECT tray_count FROM columns WHERE id = $1`, [insp.columnId])) as { tray_count: number }[];
     const bad = trayOutOfRange(tray, col?.tray_count ?? 0);
     if (bad) throw new ValidationError('Invalid tray', [{ path: 'tray', message: bad }]);
+    await assertPass(em, insp.columnId, tray, pass);
     const existing = await em.findOneBy(InspectionTray, { inspectionId: id, tray, pass });
     if (existing) {
       if (body.version === undefined)

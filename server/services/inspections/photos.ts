@@ -11,7 +11,7 @@ import { NotFoundError, ValidationError } from '../../errors.js';
 import { sniffImageType } from '../../storage/imageType.js';
 import { getObjectStream, putObject } from '../../storage/s3.js';
 import { audit } from '../audit/audit.js';
-import { assertDraft, visibleInspection } from './inspections.js';
+import { assertDraft, assertPass, visibleInspection } from './inspections.js';
 import { photoRecord } from './inspectionRead.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { PhotoRecord } from '../../../shared/types/inspections.js';
@@ -42,6 +42,7 @@ export async function uploadPhoto(ds: DataSource, user: SessionUser, id: string,
     ]);
   const insp = await visibleInspection(ds.manager, user, id);
   assertDraft(insp);
+  await assertPass(ds.manager, insp.columnId, tray, pass);
   let thumb: Buffer;
   let meta: sharp.Metadata;
   try {

@@ -8,7 +8,7 @@ import { ConflictError, NotFoundError, ValidationError } from '../../errors.js';
 import { audit } from '../audit/audit.js';
 import { assertVersion } from '../columns/columnsCommon.js';
 import { toInspectionRecord } from './inspectionRead.js';
-import { assertDraft, visibleInspection } from './inspections.js';
+import { assertDraft, assertPass, visibleInspection } from './inspections.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { CreatePunchBody, InspectionRecord, UpdatePunchBody, VoidPunchBody } from '../../../shared/types/inspections.js';
 
@@ -23,6 +23,7 @@ export async function addPunchItem(
   return ds.transaction(async (em) => {
     const insp = await visibleInspection(em, user, id, true);
     assertDraft(insp);
+    await assertPass(em, insp.columnId, body.tray ?? null, body.pass ?? null);
     const [m] = (await em.query(`SELECT coalesce(max(item_no), 0)::int AS n FROM punch_items WHERE inspection_id = $1`, [
       id,
     ])) as { n: number }[];

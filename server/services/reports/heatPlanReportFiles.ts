@@ -204,7 +204,10 @@ export async function heatPlanReportPdf(
   id: string,
 ): Promise<{ pdf: Buffer; filename: string }> {
   const p = await getHeatPlan(ds, user, id);
-  return { pdf: await renderPdf(planReportDoc(p, user.unitSystem)), filename: pdfFileName('heat-plan', p.columnTag, p.label) };
+  return {
+    pdf: await renderPdf(planReportDoc(p, user.unitSystem), user.unitSystem),
+    filename: pdfFileName('heat-plan', p.columnTag, p.label),
+  };
 }
 
 export async function exportHeatPlan(ds: DataSource, user: SessionUser, id: string, format: 'csv' | 'xlsx'): Promise<ExportFile> {

@@ -82,7 +82,14 @@ function traySheet(t: InspectionTrayRecord): Content[] {
   ];
 }
 
-function toleranceTable(r: InspectionRecord): Content {
+/** The checks of every measurement entered; a sentence instead of an empty table when none was entered. */
+export function toleranceTable(r: InspectionRecord): Content {
+  if (!r.trays.some((t) => t.checks.asFound.length + t.checks.asLeft.length > 0))
+    return {
+      text: r.trays.length
+        ? 'No weir height, downcomer clearance, levelness or tray spacing has been entered yet, so nothing is checked against the tolerances.'
+        : 'No trays recorded.',
+    };
   const body: Content[] = [
     ['Tray', 'Pass', 'State', 'Item', 'Measured', 'Check', 'Result'].map((h) => ({ text: h, bold: true })),
   ];
@@ -123,7 +130,7 @@ export async function inspectionPdf(ds: DataSource, user: SessionUser, id: strin
       margin: [0, 0, 0, 8],
     });
   }
-  const pdf = await renderPdf(inspectionDoc(r, photos));
+  const pdf = await renderPdf(inspectionDoc(r, photos), user.unitSystem);
   return { pdf, filename: pdfFileName('inspection', r.columnTag, r.turnaround) };
 }
 
@@ -167,7 +174,7 @@ export function inspectionDoc(r: InspectionRecord, photos: Content[]): PdfParts 
           }
         : { text: 'No punch items.' },
       { text: 'Tolerance checks', style: 'h2' },
-      r.trays.length ? toleranceTable(r) : { text: 'No trays recorded.' },
+      toleranceTable(r),
       { text: 'Photo log', style: 'h2', pageBreak: 'before' },
       photos.length ? photos : { text: 'No photos.' },
       ...r.trays.flatMap(traySheet),

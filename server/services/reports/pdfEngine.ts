@@ -1,10 +1,12 @@
 /**
  * pdfmake 0.3 with Noto Sans (TTF from @expo-google-fonts/noto-sans; pdfmake cannot read WOFF2), shared by the
- * PDF reports. No remote or local file access beyond the fonts. Header and footer on every page name the
- * document and say "page x of y" (pdfmake knows the page count; Chromium's print does not fill @page boxes).
+ * PDF reports. No remote or local file access beyond the fonts. The header of every page names the document, the
+ * footer says "page x of y" once (pdfmake knows the page count; Chromium's print does not fill @page boxes). US Letter
+ * for users working in US customary units, A4 otherwise.
  */
 import { createRequire } from 'node:module';
 import path from 'node:path';
+import type { UnitSystem } from '../../../shared/types/api.js';
 
 export type Content = Record<string, unknown> | string | Content[];
 interface PdfMake {
@@ -45,17 +47,10 @@ export interface PdfParts {
   content: Content[];
 }
 
-/** Header and footer of every page: the document's name and "page x of y". */
+/** Header and footer of every page: the document's name above, the footer's text and "page x of y" below. */
 export function pageFrame(p: Pick<PdfParts, 'header' | 'footer'>) {
   return {
-    header: (page: number, pages: number) => ({
-      columns: [
-        { text: p.header, bold: true },
-        { text: `page ${page} of ${pages}`, alignment: 'right', width: 80 },
-      ],
-      margin: [28, 16, 28, 0],
-      fontSize: 8,
-    }),
+    header: () => ({ text: p.header, bold: true, margin: [28, 16, 28, 0], fontSize: 8 }),
     footer: (page: number, pages: number) => ({
       columns: [{ text: p.footer }, { text: `page ${page} of ${pages}`, alignment: 'right', width: 80 }],
       margin: [28, 10, 28, 0],
@@ -65,9 +60,12 @@ export function pageFrame(p: Pick<PdfParts, 'header' | 'footer'>) {
   };
 }
 
-export function renderPdf(p: PdfParts): Promise<Buffer> {
+/** Paper people print on: US Letter where US customary units are used, A4 elsewhere. */
+export const paperFor = (sys: UnitSystem): 'LETTER' | 'A4' => (sys === 'US' ? 'LETTER' : 'A4');
+
+export function renderPdf(p: PdfParts, sys: UnitSystem): Promise<Buffer> {
   const doc = {
-    pageSize: 'A4',
+    pageSize: paperFor(sys),
     pageOrientation: p.pageOrientation ?? 'portrait',
     pageMargins: [28, 40, 28, 34],
     defaultStyle: { font: 'NotoSans', fontSize: 8.5 },

@@ -13,7 +13,7 @@ const CURVE_HEX = ['#b3261e', '#e07a6f', '#8c4f7a', '#3c6e8f', '#2f8f9d', '#d982
 export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser['unitSystem']): Content[] {
   const trays = run.results.trays;
   const pct = chartSvg({
-    width: 780,
+    width: 730,
     height: 210,
     xTitle: 'Tray',
     yTitle: 'Highest percent of limit on the tray (%)',
@@ -36,11 +36,11 @@ export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser[
       unbreakable: true,
       stack: [
         { text: 'Percent of limit per tray (the controlling check of each tray)', style: 'h2' },
-        { svg: pct, width: 780 },
+        { svg: pct, width: 730 },
         {
           svg: legendSvg(
             (['ok', 'near', 'over'] as CheckStatus[]).map((s) => ({
-              name: `${STATUS_LABELS[s]} the limit`,
+              name: `${STATUS_LABELS[s]}${s === 'near' ? ' to' : ''} the limit`,
               color: STATUS_HEX[s],
             })),
             400,

@@ -325,6 +325,9 @@ export function runReportDoc(
 export async function runReportPdf(ds: DataSource, user: SessionUser, id: string): Promise<{ pdf: Buffer; filename: string }> {
   const run = await getRun(ds, user, id);
   const w = await runWindow(ds, user, id, run.results.controllingTray).catch(() => null);
-  const pdf = await renderPdf(runReportDoc(run, w, user.unitSystem, new Date(), user.pressureDropUnit ?? undefined));
+  const pdf = await renderPdf(
+    runReportDoc(run, w, user.unitSystem, new Date(), user.pressureDropUnit ?? undefined),
+    user.unitSystem,
+  );
   return { pdf, filename: pdfFileName('rating', run.snapshot.column.tag, run.label) };
 }

@@ -157,7 +157,10 @@ export async function studyXlsx(d: StudyReportData): Promise<Buffer> {
 
 export async function studyReportPdf(ds: DataSource, user: SessionUser, id: string): Promise<{ pdf: Buffer; filename: string }> {
   const s = await getStudy(ds, user, id);
-  return { pdf: await renderPdf(studyReportDoc(s, user.unitSystem)), filename: pdfFileName('study', s.columnTag, s.label) };
+  return {
+    pdf: await renderPdf(studyReportDoc(s, user.unitSystem), user.unitSystem),
+    filename: pdfFileName('study', s.columnTag, s.label),
+  };
 }
 
 export async function exportStudy(ds: DataSource, user: SessionUser, id: string, format: 'csv' | 'xlsx'): Promise<ExportFile> {
