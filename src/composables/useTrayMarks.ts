@@ -27,6 +27,17 @@ export function trayMarks(
   return marks;
 }
 
+/** Marks of a pump-around study: its sections' boundaries and its pump-around's draw and return. */
+export function studyMarks(input: {
+  sections: readonly { name: string; fromTray: number; toTray: number }[];
+  pumpAround: { name: string; drawTray: number; returnTray: number };
+}): TrayMark[] {
+  return trayMarks(
+    input.sections.map((s) => ({ name: s.name, firstTray: s.fromTray, lastTray: s.toTray })),
+    [input.pumpAround],
+  );
+}
+
 const STYLE = {
   section: { color: '#707a80', dash: 'dot' },
   'pump-around': { color: '#8c4f7a', dash: 'dash' },
