@@ -1,8 +1,8 @@
-import { defineRoutes } from '../http/route.js';
+import { implement } from '../http/route.js';
 import { ENGINE_VERSION, METHOD_METADATA, METHOD_USES } from '../engine/index.js';
 import limitsTable from '../../reference-tables/limits.json' with { type: 'json' };
 import { PROVENANCE_UNCERTAINTY, publishedSource } from '../../shared/labels.js';
-import type { MethodsPayload } from '../../shared/types/methods.js';
+import { LIMIT_SENSES, methodsContract, type MethodsPayload } from '../../shared/contract/methods.js';
 
 /** Cautions printed with every rating (usual cautions of the trade for operating changes and column entry). */
 export const RATING_CAUTIONS = [
@@ -10,6 +10,12 @@ export const RATING_CAUTIONS = [
   'Any operating change (rate increase, pump-around duty change) goes through management-of-change review, with a pre-start-up safety review where applicable.',
   'Confirm the rating with the internals vendor and licensed engineers before acting on it; site permits and local codes govern.',
 ];
+
+function sense(check: string, s: string): (typeof LIMIT_SENSES)[number] {
+  const known = LIMIT_SENSES.find((k) => k === s);
+  if (!known) throw new Error(`reference-tables/limits.json: the sense of ${check} is neither min nor max`);
+  return known;
+}
 
 const payload: MethodsPayload = {
   engineVersion: ENGINE_VERSION,
@@ -29,19 +35,11 @@ const payload: MethodsPayload = {
     check: r.check,
     limit: r.limit,
     unit: r.unit,
-    sense: r.sense,
+    sense: sense(r.check, r.sense),
     note: publishedSource(r.note),
     source: publishedSource(r.source),
   })),
   cautions: RATING_CAUTIONS,
 };
 
-export const methodRoutes = defineRoutes([
-  {
-    method: 'get',
-    path: '/methods',
-    access: 'read',
-    summary: 'Rating correlations and default limits with their published sources, and the report cautions',
-    handler: () => payload,
-  },
-]);
+export const methodRoutes = [implement(methodsContract.list)({ handler: () => payload })];

@@ -3,7 +3,7 @@
  * answers. The server validates requests and (in tests) answers with them, the handler's types come from
  * them, and the OpenAPI document (GET /api/openapi.json) is built from them (server/http/openapi.ts).
  */
-import type { Static, TObject, TSchema } from '@sinclair/typebox';
+import type { TObject, TSchema } from '@sinclair/typebox';
 import type { Permission } from '../permissions.js';
 
 export type Access = Permission | 'public' | 'signed-in';
@@ -40,7 +40,7 @@ export const route = <C extends RouteContract>(c: C): C => c;
 export const isFileAnswer = (r: RouteContract['response']): r is FileAnswer =>
   r !== null && Array.isArray((r as { file?: unknown }).file);
 
-type StaticOf<S> = S extends TSchema ? Static<S> : undefined;
+type StaticOf<S> = S extends TSchema ? S['static'] : undefined;
 /** What a client sends to a route: its path parameters, query and JSON body as the contract types them. */
 export type RequestOf<C extends RouteContract> = {
   params?: StaticOf<C['params']>;

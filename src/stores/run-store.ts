@@ -4,6 +4,7 @@ import { api, type RequestOptions } from '../boot/api';
 import type { CreateRunBody, ReviewActionBody, RunComparison, RunRecord, RunWindow } from '../../shared/types/runs';
 import type { MethodsPayload } from '../../shared/types/methods';
 import { runContract } from '../../shared/contract/runs';
+import { methodsContract } from '../../shared/contract/methods';
 
 /** The open rating run, its review actions, operating windows, comparisons and the method sources. */
 export const useRunStore = defineStore('run', () => {
@@ -35,7 +36,7 @@ export const useRunStore = defineStore('run', () => {
   const compare = (a: string, b: string) => api.get<RunComparison>('/runs/compare', { query: { a, b } });
 
   async function loadMethods(): Promise<MethodsPayload> {
-    methods.value ??= await api.get<MethodsPayload>('/methods');
+    methods.value ??= await api.call(methodsContract.list);
     return methods.value;
   }
   return { run, methods, load, create, review, window, compare, loadMethods };

@@ -6,19 +6,24 @@
 import { Ajv } from 'ajv';
 import addFormatsModule from 'ajv-formats';
 import { execFile } from 'node:child_process';
-import { copyFileSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { copyFileSync, mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
 import path from 'node:path';
 import { promisify } from 'node:util';
 import openapiTS, { astToString } from 'openapi-typescript';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { makeUser, setupApp, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
+import { makeUser, sessionCookie, setupApp, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
 
 const run = promisify(execFile);
 
 type Answers = { path: string; method: string; status: number; body: unknown }[];
 type RateAgain = (base: string, email: string, password: string) => Promise<Answers>;
+/** tests/fixtures/typedClient/records.ts */
+type ReadRecords = (
+  base: string,
+  cookie: string,
+) => Promise<{ sense?: string; rangeWidth?: number; failed?: number; answers: Answers }>;
 /** tests/fixtures/typedClient/client.ts (type-checked on its own, against the generated types) */
 type Exercise = (
   base: string,
@@ -63,7 +68,9 @@ describe('a client generated from the published OpenAPI document', () => {
     const types = astToString(await openapiTS(doc as unknown as Parameters<typeof openapiTS>[0]));
     expect(types).toMatch(/"\/api\/runs": \{/);
     writeFileSync(path.join(dir, 'api.d.ts'), types);
-    copyFileSync(path.join(root, 'tests/fixtures/typedClient/client.ts'), path.join(dir, 'client.ts'));
+    const fixtures = path.join(root, 'tests/fixtures/typedClient');
+    const clients = readdirSync(fixtures).filter((f) => f.endsWith('.ts'));
+    for (const f of clients) copyFileSync(path.join(fixtures, f), path.join(dir, f));
     writeFileSync(
       path.join(dir, 'tsconfig.json'),
       JSON.stringify({
@@ -77,7 +84,7 @@ describe('a client generated from the published OpenAPI document', () => {
           types: [],
           skipLibCheck: true,
         },
-        files: ['client.ts', 'api.d.ts'],
+        files: [...clients, 'api.d.ts'],
       }),
     );
     const tsc = path.join(root, 'node_modules/typescript/bin/tsc');
@@ -101,6 +108,13 @@ describe('a client generated from the published OpenAPI document', () => {
     const runs = await rateAgain(base, engineer.email, TEST_PASSWORD);
     expect(runs.map((a) => a.status)).toEqual([200, 201, 200]);
     r.answers.push(...runs);
+    const { readRecords } = (await import(path.join(dir, 'records.ts'))) as { readRecords: ReadRecords };
+    const records = await readRecords(base, await sessionCookie(ctx.ds, admin));
+    expect(records.answers.map((a) => a.status)).toEqual([200, 200]);
+    expect(['min', 'max']).toContain(records.sense);
+    expect(records.rangeWidth).toBeGreaterThan(0);
+    expect(records.failed).toBeGreaterThanOrEqual(0);
+    r.answers.push(...records.answers);
     expect(r.role).toBe('admin');
     expect(r.status).toBe('ok');
     expect(r.firstUserVersion).toBeGreaterThanOrEqual(1);
