@@ -23,6 +23,7 @@ export const orificeCoefficientHughmarkOConnell = method(
     equation: 'Cv = 0.74 Ah/Aa + exp(0.29 t/dH - 0.56)',
     provenance: 'recalled',
     ranges: { holeAreaRatio: [0.05, 0.2], thicknessOverDiameter: [0.1, 1.2] },
+    trayTypes: ['sieve'],
   },
 );
 
@@ -52,6 +53,7 @@ export const dryTrayHeadOrifice = method(
     equation: 'h_d = 50.8 (u_h/Cv)^2 rhoV/rhoL',
     provenance: 'seen',
     ranges: {},
+    trayTypes: ['sieve'],
   },
 );
 
@@ -85,6 +87,7 @@ export const kleinClosedValveK = method(
     equation: 'table',
     provenance: 'seen',
     ranges: {},
+    trayTypes: ['moving-valve'],
   },
 );
 
@@ -114,6 +117,7 @@ export const kleinOpenValveK = method(
     equation: 'table, linear in deck thickness',
     provenance: 'seen',
     ranges: { deckThickness_mm: [1.88, 3.4] },
+    trayTypes: ['fixed-valve', 'moving-valve'],
   },
 );
 
@@ -135,6 +139,7 @@ export const dryTrayHeadK = method(
     equation: 'h_d = K rhoV/rhoL u_h^2',
     provenance: 'common-practice',
     ranges: {},
+    trayTypes: ['fixed-valve'],
   },
 );
 
@@ -157,6 +162,7 @@ export const kleinEddyLossCoefficient = method(
     equation: 'C_vw = 1.3',
     provenance: 'seen',
     ranges: {},
+    trayTypes: ['moving-valve'],
   },
 );
 
@@ -190,6 +196,7 @@ export const kleinBalanceHead = method(
     equation: 'h_d = C_vw R_vw t_v rhoM/rhoL',
     provenance: 'derived',
     ranges: {},
+    trayTypes: ['moving-valve'],
   },
 );
 
@@ -225,6 +232,7 @@ export const kleinClosedBalanceVelocity = method(
     equation: 'U_A = [t_v R_vw (C_vw/Kc) (rhoM/rhoV)]^0.5',
     provenance: 'seen',
     ranges: {},
+    trayTypes: ['moving-valve'],
   },
 );
 
@@ -245,6 +253,7 @@ export const kleinOpenBalanceVelocity = method(
     equation: 'U_B = U_A (Kc/Ko)^0.5',
     provenance: 'seen',
     ranges: {},
+    trayTypes: ['moving-valve'],
   },
 );
 
@@ -277,6 +286,7 @@ export const dryTrayHeadKleinValve = method(
     equation: 'closed Kc rhoV/rhoL U^2; partly open C_vw Rvw tv rhoM/rhoL; open Ko rhoV/rhoL U^2',
     provenance: 'seen',
     ranges: {},
+    trayTypes: ['moving-valve'],
   },
 );
 

@@ -36,6 +36,7 @@ export const eduljeeK2OwnFit = method(
     equation: 'K2 = 31.40 - 4.39 exp(-(hw + how)/38.06)',
     provenance: 'own-fit',
     ranges: { headAboveDeck_mm: [0, 120] },
+    trayTypes: ['sieve'],
   },
 );
 

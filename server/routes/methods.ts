@@ -29,6 +29,7 @@ const payload: MethodsPayload = {
       ranges: m.ranges,
       uncertainty: m.uncertainty ?? PROVENANCE_UNCERTAINTY[m.provenance],
       uses: METHOD_USES[m.id] ?? [],
+      trayTypes: m.trayTypes ?? null,
     }))
     .sort((a, b) => a.label.localeCompare(b.label)),
   limits: limitsTable.map((r) => ({

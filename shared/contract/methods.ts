@@ -2,8 +2,11 @@
 import { Type, type Static } from '@sinclair/typebox';
 import { route } from './route.js';
 import { Nullable, Obj, StringEnum } from './schema.js';
+import type { TrayType } from '../types/rating.js';
 
 export const PROVENANCES = ['seen', 'recalled', 'derived', 'common-practice', 'own-fit'] as const;
+/** the tray types of shared/types/rating.ts, as the answer schema lists them */
+const METHOD_TRAY_TYPES = ['sieve', 'fixed-valve', 'moving-valve'] as const satisfies readonly TrayType[];
 
 export const MethodInfoSchema = Obj({
   /** correlation id; `CheckResult.method` values are ids */
@@ -19,6 +22,8 @@ export const MethodInfoSchema = Obj({
   uncertainty: Nullable(Type.String()),
   /** ids of the correlations this one relies on (listed with it in reports) */
   uses: Type.Unsafe<readonly string[]>(Type.Array(Type.String())),
+  /** tray types the correlation was developed for (null: any type) */
+  trayTypes: Nullable(Type.Unsafe<readonly TrayType[]>(Type.Array(StringEnum(METHOD_TRAY_TYPES)))),
 });
 export type MethodInfo = Static<typeof MethodInfoSchema>;
 
