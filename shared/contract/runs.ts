@@ -169,21 +169,29 @@ export const RelabelBodySchema = Obj({
 export const ExportQuerySchema = Obj({ format: Defaulted(StringEnum(['csv', 'xlsx'] as const), 'csv') });
 export const EXPORT_TYPES = ['text/csv', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'];
 
-const RunListQuery = Obj({
+/** what a run list can be ordered by (the newest first among equals) */
+export const RUN_SORT_KEYS = ['createdAt', 'label', 'maxPercentOfLimit'] as const;
+export type RunSortKey = (typeof RUN_SORT_KEYS)[number];
+
+export const RunListQuerySchema = Obj({
   ...pageFields,
   columnId: Type.Optional(uuid),
   status: Type.Optional(ReviewStatusSchema),
   /** also list the runs of ratings as found (the as-found runs and their design working copies) */
   inspection: Defaulted(Type.Boolean(), false),
+  sortBy: Defaulted(StringEnum(RUN_SORT_KEYS), 'createdAt'),
+  descending: Defaulted(Type.Boolean(), true),
 });
+export type RunListQuery = Static<typeof RunListQuerySchema>;
 
 export const runContract = {
   list: route({
     method: 'get',
     path: '/runs',
     access: 'read',
-    summary: 'Rating runs the user may see, newest first (filter by columnId, status; paged)',
-    query: RunListQuery,
+    summary:
+      'Rating runs the user may see (filter by columnId, status; paged: page, pageSize up to 200, total gives all; ordered by sortBy, newest first by default)',
+    query: RunListQuerySchema,
     response: PageOf(RunSummarySchema),
   }),
   create: route({

@@ -8,6 +8,8 @@ import { siteFilterSql } from '../access/access.js';
 import { iso, visibleChild } from '../columns/columnsCommon.js';
 import type { Page, SessionUser } from '../../../shared/types/api.js';
 import type { ReviewStatus, RunRecord, RunSummary, RunWindow } from '../../../shared/types/runs.js';
+import type { RunListQuerySchema, RunSortKey } from '../../../shared/contract/runs.js';
+import type { Validated } from '../../../shared/contract/schema.js';
 
 export function toRunSummary(r: Omit<RatingRun, 'results'>, authorName: string | null): RunSummary {
   return {
@@ -85,10 +87,17 @@ export async function listRunSummaries(em: EntityManager, columnId: string): Pro
   return rows.map(fromRow);
 }
 
+const ORDER_OF: Record<RunSortKey, string> = {
+  createdAt: 'r.created_at',
+  label: 'r.label',
+  maxPercentOfLimit: `(r.summary->>'maxPercentOfLimit')::float8`,
+};
+
+/** One page of the runs the user may see, with the total of all pages. */
 export async function listRuns(
   ds: DataSource,
   user: SessionUser,
-  q: { page: number; pageSize: number; columnId?: string; status?: ReviewStatus; inspection?: boolean },
+  q: Validated<typeof RunListQuerySchema>,
 ): Promise<Page<RunSummary>> {
   const f = siteFilterSql(user, 'u.site_id', 1);
   const params: unknown[] = [...f.params];
@@ -102,14 +111,21 @@ export async function listRuns(
     params.push(q.status);
     where += ` AND r.status = $${params.length}`;
   }
-  params.push(q.pageSize, (q.page - 1) * q.pageSize);
+  const from = `rating_runs r JOIN columns c ON c.id = r.column_id JOIN process_units u ON u.id = c.unit_id WHERE ${where}`;
+  const dir = q.descending ? 'DESC' : 'ASC';
+  const order = `${ORDER_OF[q.sortBy]} ${dir} NULLS LAST, r.created_at DESC, r.id`;
+  const page = [...params, q.pageSize, (q.page - 1) * q.pageSize];
   const rows = (await ds.query(
     `SELECT * FROM (${SUMMARY_SQL.replace('SELECT r.id,', 'SELECT count(*) OVER () AS total, r.id,')}
        JOIN columns c ON c.id = r.column_id JOIN process_units u ON u.id = c.unit_id
-      WHERE ${where} ORDER BY r.created_at DESC LIMIT $${params.length - 1} OFFSET $${params.length}) x`,
-    params,
+      WHERE ${where} ORDER BY ${order} LIMIT $${page.length - 1} OFFSET $${page.length}) x`,
+    page,
   )) as SummaryRow[];
-  return { items: rows.map(fromRow), total: rows[0]?.total ? Number(rows[0].total) : 0, page: q.page, pageSize: q.pageSize };
+  // a page past the end has no row to carry the total: count on its own
+  const total = rows[0]?.total
+    ? Number(rows[0].total)
+    : Number(((await ds.query(`SELECT count(*)::int AS n FROM ${from}`, params)) as { n: number }[])[0]?.n ?? 0);
+  return { items: rows.map(fromRow), total, page: q.page, pageSize: q.pageSize };
 }
 
 export async function getRun(ds: DataSource, user: SessionUser, id: string): Promise<RunRecord> {
