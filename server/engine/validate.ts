@@ -5,6 +5,7 @@
 import { Ajv, type ErrorObject } from 'ajv';
 import { engineFieldError, fieldInEntry } from '../../shared/contract/fieldErrors.js';
 import { ratingRequestSchema } from '../../shared/schemas/ratingRequest.js';
+import { densityFault } from '../../shared/trayLoadRules.js';
 import type { RatingRequest, SectionGeometry } from '../../shared/types/rating.js';
 
 export interface FieldError {
@@ -65,12 +66,8 @@ export function physicsErrors(req: RatingRequest): FieldError[] {
   const seen = new Map<number, number>();
   req.trays.forEach((t, i) => {
     const p = `/trays/${i}`;
-    if (!(t.vapourDensity_kg_m3 < t.liquidDensity_kg_m3)) {
-      add(
-        `${p}/vapourDensity_kg_m3`,
-        `vapour density (${t.vapourDensity_kg_m3} kg/m³) must be below the liquid density (${t.liquidDensity_kg_m3} kg/m³)`,
-      );
-    }
+    const density = densityFault(t);
+    if (density) add(`${p}/vapourDensity_kg_m3`, density);
     const first = seen.get(t.tray);
     if (first !== undefined) add(`${p}/tray`, `tray number ${t.tray} appears twice (also at trays[${first}])`);
     else seen.set(t.tray, i);

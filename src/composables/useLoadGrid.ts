@@ -1,5 +1,5 @@
 import { computed, ref } from 'vue';
-import { trayLoadSchema } from '../../shared/schemas/ratingRequest';
+import { parseLoadNumber, trayLoadFaults } from '../../shared/trayLoadRules';
 import { QUANTITIES, convert, type QuantityId } from '../../shared/units';
 import type { TrayLoad } from '../../shared/types/rating';
 import type { UnitSystem } from '../../shared/types/api';
@@ -29,8 +29,7 @@ export interface CellError {
   message: string;
 }
 
-type Bound = { minimum?: number; exclusiveMinimum?: number; maximum?: number };
-const BOUNDS = trayLoadSchema.properties as unknown as Record<string, Bound>;
+const COLUMN_OF = Object.fromEntries(GRID_COLUMNS.map((c, i) => [c.key, i])) as Record<keyof TrayLoad, number>;
 /** six significant digits: enough for loads and properties, and clean to read */
 const fmt = (n: number) => String(Number(n.toPrecision(6)));
 
@@ -63,8 +62,8 @@ export function useLoadGrid(system: UnitSystem) {
     const from = units.value[col];
     if (!q || !from) return;
     for (const r of [...rows.value, ...saved.value]) {
-      const n = Number(r[col]);
-      if (r[col] !== '' && Number.isFinite(n)) r[col] = fmt(convert(q, n, from, unit));
+      const n = parseLoadNumber(r[col] ?? '');
+      if (n !== null) r[col] = fmt(convert(q, n, from, unit));
     }
     units.value[col] = unit;
   }
@@ -95,51 +94,30 @@ export function useLoadGrid(system: UnitSystem) {
     rows.value.splice(i, 1);
   }
 
-  /** Loads in SI, and an error per bad cell (row, column, what is wrong). */
+  /**
+   * Loads in SI, and an error per bad cell (row, column, what is wrong): the numbers read by the shared
+   * parser, then the per-tray load rules the loads API and the import apply (shared/trayLoadRules.ts).
+   */
   function toLoads(): { loads: TrayLoad[]; errors: CellError[] } {
     const errors: CellError[] = [];
-    const seen = new Map<number, number>();
+    const unreadable = new Set<string>();
     const loads = rows.value.map((cells, r) => {
       const out: Record<string, number> = {};
       GRID_COLUMNS.forEach((c, i) => {
         const text = (cells[i] ?? '').trim();
-        if (text === '') {
-          if (!c.optional) errors.push({ row: r, col: i, message: `${c.label} is missing` });
-          return;
+        if (text === '') return;
+        const n = parseLoadNumber(text);
+        if (n === null) {
+          unreadable.add(`${r}:${c.key}`);
+          return void errors.push({ row: r, col: i, message: `"${text}" is not a number` });
         }
-        const n = Number(text);
-        if (!Number.isFinite(n)) return void errors.push({ row: r, col: i, message: `${c.label}: "${text}" is not a number` });
-        const si = c.quantity ? convert(c.quantity, n, units.value[i]!, QUANTITIES[c.quantity].siUnit) : n;
-        const b = BOUNDS[c.key] ?? {};
-        const lo = b.minimum ?? b.exclusiveMinimum;
-        if (
-          (lo !== undefined && (b.exclusiveMinimum !== undefined ? si <= lo : si < lo)) ||
-          (b.maximum !== undefined && si > b.maximum)
-        ) {
-          const u = c.quantity ? units.value[i]! : '';
-          const show = (x: number) => fmt(c.quantity ? convert(c.quantity, x, QUANTITIES[c.quantity].siUnit, u) : x);
-          errors.push({
-            row: r,
-            col: i,
-            message: `${c.label} ${text} ${u} is outside ${show(lo ?? 0)}…${show(b.maximum ?? Infinity)} ${u}`.trim(),
-          });
-        }
-        if (c.key === 'tray' && !Number.isInteger(n)) errors.push({ row: r, col: i, message: 'Tray must be a whole number' });
-        out[c.key] = si;
+        out[c.key] = c.quantity ? convert(c.quantity, n, units.value[i]!, QUANTITIES[c.quantity].siUnit) : n;
       });
-      if (out.tray !== undefined) {
-        const prev = seen.get(out.tray);
-        if (prev !== undefined) errors.push({ row: r, col: 0, message: `Tray ${out.tray} also on row ${prev + 1}` });
-        else seen.set(out.tray, r);
-      }
-      if (
-        out.vapourDensity_kg_m3 !== undefined &&
-        out.liquidDensity_kg_m3 !== undefined &&
-        out.vapourDensity_kg_m3 >= out.liquidDensity_kg_m3
-      )
-        errors.push({ row: r, col: 3, message: 'Vapour density must be below the liquid density' });
       return out as unknown as TrayLoad;
     });
+    for (const f of trayLoadFaults(loads))
+      if (!unreadable.has(`${f.index}:${f.field}`)) errors.push({ row: f.index, col: COLUMN_OF[f.field], message: f.message });
+    errors.sort((a, b) => a.row - b.row || a.col - b.col);
     return { loads: [...loads].sort((a, b) => a.tray - b.tray), errors };
   }
 

@@ -128,7 +128,7 @@ describe('row, column and cell limits', () => {
     // trays 21 to 4999 are outside the 20-tray column: counted, the first ones listed
     expect(p.errorCount).toBe(4999 - 20);
     expect(p.errors).toHaveLength(IMPORT_LIMITS.listedErrors);
-    expect(p.errors[0]).toEqual({ row: 22, column: 'Tray', message: 'gives tray 21, outside the column (trays 1–20)' });
+    expect(p.errors[0]).toEqual({ row: 22, column: 'Tray', message: 'tray 21 is outside the column (trays 1–20)' });
     expect(p.loads).toHaveLength(20);
     expect(res.text.length).toBeLessThan(200_000);
   });

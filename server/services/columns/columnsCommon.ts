@@ -49,6 +49,5 @@ export async function visibleChild<T extends ObjectLiteral & { columnId: string 
 
 export const iso = (d: Date | string): string => new Date(d).toISOString();
 
-/** A tray number inside the column: 1..trayCount. */
-export const trayOutOfRange = (tray: number, trayCount: number): string | null =>
-  tray < 1 || tray > trayCount ? `tray ${tray} is outside the column (trays 1–${trayCount})` : null;
+/** A tray number inside the column: 1..trayCount (the per-tray load rule, shared/trayLoadRules.ts). */
+export { trayOutsideColumn as trayOutOfRange } from '../../../shared/trayLoadRules.js';

@@ -4,7 +4,7 @@
  * header; shared/units.ts), and convert rows to SI points with every fault listed as { row, column, message }.
  */
 import { splitHeader } from '../imports/importsDetect.js';
-import { parseNumber } from '../imports/importsRows.js';
+import { parseLoadNumber as parseNumber } from '../../../shared/trayLoadRules.js';
 import { findUnit, toSI } from '../../../shared/units.js';
 import type { ImportRowError } from '../../../shared/types/imports.js';
 import type { ScanImportMapping, ScanImportUnits, ScanMeasure, ScanPoint } from '../../../shared/types/evidence.js';

@@ -1,18 +1,15 @@
 /**
  * Convert confirmed import rows to SI TrayLoad rows with stored tray numbers, collecting every fault as
- * { row, column, message }: numbers, units (shared/units.ts), the engine's per-tray schema (ajv), tray range,
- * duplicates and vapour density below liquid density.
+ * { row, column, message }: numbers and units (shared/units.ts), then the per-tray load rules
+ * (shared/trayLoadRules.ts, as the grid and the loads API word them): bounds, vapour density below liquid
+ * density, tray range and duplicates.
  */
-import { Ajv } from 'ajv';
-import { trayLoadSchema } from '../../../shared/schemas/ratingRequest.js';
+import { fieldFault, densityFault, parseLoadNumber, trayOutsideColumn } from '../../../shared/trayLoadRules.js';
 import { toSI } from '../../../shared/units.js';
 import { FIELD_QUANTITY, defaultUnit } from './importsDetect.js';
 import type { TrayNumbering } from '../../../shared/types/columns.js';
 import type { ImportField, ImportMapping, ImportNumbering, ImportRowError, ImportUnits } from '../../../shared/types/imports.js';
 import type { TrayLoad } from '../../../shared/types/rating.js';
-
-const ajv = new Ajv({ allErrors: true, strict: false });
-const validateLoad = ajv.compile<TrayLoad>(trayLoadSchema);
 
 const TARGET: Partial<Record<ImportField, keyof TrayLoad>> = {
   vapourMassFlow: 'vapourMassFlow_kg_h',
@@ -24,16 +21,7 @@ const TARGET: Partial<Record<ImportField, keyof TrayLoad>> = {
   temperature: 'temperature_C',
   pressure: 'pressure_kPa',
 };
-const FIELD_OF = Object.fromEntries(Object.entries(TARGET).map(([f, k]) => [k, f])) as Record<string, ImportField>;
 const REQUIRED: ImportField[] = ['vapourMassFlow', 'liquidMassFlow', 'vapourDensity', 'liquidDensity', 'surfaceTension'];
-
-/** "1 234.5", "1,234.5" and "1234,5" are not guessed at: only plain numbers, optional thousands commas with a decimal point. */
-export function parseNumber(text: string): number | null {
-  const t = text.trim().replace(/\s+/g, '');
-  if (/^[-+]?\d{1,3}(,\d{3})+(\.\d+)?$/.test(t)) return Number(t.replace(/,/g, ''));
-  if (!/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(t)) return null;
-  return Number(t);
-}
 
 export interface ConvertInput {
   headers: string[];
@@ -48,6 +36,13 @@ export interface ConvertInput {
 }
 
 export function convertRows(inp: ConvertInput): { loads: TrayLoad[]; errors: ImportRowError[] } {
+  /** a bound is in SI: say so when the file's unit is another */
+  const convertedFrom = (f: ImportField, si: number | undefined): string => {
+    const unit = inp.units[f] ?? defaultUnit(f);
+    return FIELD_QUANTITY[f] && unit !== defaultUnit(f) && si !== undefined
+      ? ` (in SI, after conversion from ${unit}: ${Number(si.toPrecision(6))})`
+      : '';
+  };
   const errors: ImportRowError[] = [];
   const loads: TrayLoad[] = [];
   const colName = (f: ImportField): string => {
@@ -69,11 +64,11 @@ export function convertRows(inp: ConvertInput): { loads: TrayLoad[]; errors: Imp
     for (const [f, c] of Object.entries(inp.mapping) as [ImportField, number][]) {
       const text = (cells[c] ?? '').trim();
       if (!text) {
-        if (REQUIRED.includes(f) || f === key) rowErrors.push({ row, column: colName(f), message: 'is empty' });
+        if (REQUIRED.includes(f) || f === key) rowErrors.push({ row, column: colName(f), message: 'is required' });
         continue;
       }
-      const n = parseNumber(text);
-      if (n === null || !Number.isFinite(n)) {
+      const n = parseLoadNumber(text);
+      if (n === null) {
         rowErrors.push({ row, column: colName(f), message: `"${text}" is not a number` });
         continue;
       }
@@ -95,46 +90,28 @@ export function convertRows(inp: ConvertInput): { loads: TrayLoad[]; errors: Imp
       }
     }
     for (const tray of trays) {
-      if (tray < 1 || tray > inp.trayCount) {
-        rowErrors.push({
-          row,
-          column: colName(key),
-          message: `gives tray ${tray}, outside the column (trays 1–${inp.trayCount})`,
-        });
+      const outside = trayOutsideColumn(tray, inp.trayCount);
+      if (outside) {
+        rowErrors.push({ row, column: colName(key), message: outside });
         continue;
       }
       const prev = firstRowOfTray.get(tray);
-      if (prev !== undefined) rowErrors.push({ row, column: colName(key), message: `tray ${tray} already given in row ${prev}` });
+      if (prev !== undefined)
+        rowErrors.push({ row, column: colName(key), message: `tray ${tray} appears twice (also in row ${prev})` });
       else firstRowOfTray.set(tray, row);
     }
     if (rowErrors.length === 0) {
       const base: Record<string, number> = {};
       for (const [f, k] of Object.entries(TARGET))
         if (values[f as ImportField] !== undefined) base[k] = values[f as ImportField]!;
-      for (const tray of trays) {
-        const load = { tray, ...base } as unknown as TrayLoad;
-        if (!validateLoad(load)) {
-          for (const e of validateLoad.errors ?? []) {
-            const k = e.instancePath.replace(/^\//, '');
-            const f = FIELD_OF[k];
-            rowErrors.push({
-              row,
-              column: f ? colName(f) : k || '(row)',
-              message: `${e.message ?? 'is invalid'} (in SI${f && FIELD_QUANTITY[f] ? `, after conversion from ${inp.units[f] ?? defaultUnit(f)}` : ''}; value ${base[k]?.toPrecision(4) ?? '?'})`,
-            });
-          }
-          break;
-        }
-        if (!(load.vapourDensity_kg_m3 < load.liquidDensity_kg_m3)) {
-          rowErrors.push({
-            row,
-            column: colName('vapourDensity'),
-            message: `vapour density (${load.vapourDensity_kg_m3.toPrecision(4)} kg/m³) must be below the liquid density (${load.liquidDensity_kg_m3.toPrecision(4)} kg/m³)`,
-          });
-          break;
-        }
-        loads.push(load);
+      // the per-tray rules on the SI values; the tray itself was checked above
+      for (const [f, k] of Object.entries(TARGET) as [ImportField, keyof TrayLoad][]) {
+        const message = fieldFault(k, base[k]);
+        if (message) rowErrors.push({ row, column: colName(f), message: message + convertedFrom(f, base[k]) });
       }
+      const density = rowErrors.length ? null : densityFault(base as Partial<TrayLoad>);
+      if (density) rowErrors.push({ row, column: colName('vapourDensity'), message: density });
+      if (rowErrors.length === 0) for (const tray of trays) loads.push({ tray, ...base } as unknown as TrayLoad);
     }
     errors.push(...rowErrors);
   });

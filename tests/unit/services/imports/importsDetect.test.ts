@@ -6,7 +6,8 @@ import {
   splitHeader,
   unitOf,
 } from '../../../../server/services/imports/importsDetect.js';
-import { convertRows, parseNumber } from '../../../../server/services/imports/importsRows.js';
+import { convertRows } from '../../../../server/services/imports/importsRows.js';
+import { parseLoadNumber as parseNumber } from '../../../../shared/trayLoadRules.js';
 import { toSI } from '../../../../shared/units.js';
 
 describe('import header and unit detection', () => {
