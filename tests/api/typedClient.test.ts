@@ -24,6 +24,10 @@ type ReadRecords = (
   base: string,
   cookie: string,
 ) => Promise<{ sense?: string; rangeWidth?: number; failed?: number; answers: Answers }>;
+type ReadStudy = (
+  base: string,
+  cookie: string,
+) => Promise<{ studyPoints: number; limiting?: string | null; latentHeat?: number; answers: Answers }>;
 /** tests/fixtures/typedClient/client.ts (type-checked on its own, against the generated types) */
 type Exercise = (
   base: string,
@@ -108,13 +112,20 @@ describe('a client generated from the published OpenAPI document', () => {
     const runs = await rateAgain(base, engineer.email, TEST_PASSWORD);
     expect(runs.map((a) => a.status)).toEqual([200, 201, 200]);
     r.answers.push(...runs);
-    const { readRecords } = (await import(path.join(dir, 'records.ts'))) as { readRecords: ReadRecords };
+    const { readRecords, readStudy } = (await import(path.join(dir, 'records.ts'))) as {
+      readRecords: ReadRecords;
+      readStudy: ReadStudy;
+    };
     const records = await readRecords(base, await sessionCookie(ctx.ds, admin));
     expect(records.answers.map((a) => a.status)).toEqual([200, 200]);
     expect(['min', 'max']).toContain(records.sense);
     expect(records.rangeWidth).toBeGreaterThan(0);
     expect(records.failed).toBeGreaterThanOrEqual(0);
     r.answers.push(...records.answers);
+    const study = await readStudy(base, await sessionCookie(ctx.ds, engineer));
+    expect(study.studyPoints, 'a stored study (the demo seeds one) read through the typed client').toBeGreaterThan(1);
+    expect(study.latentHeat).toBeCloseTo((5000 * 3600) / 60000, 6); // kW / (kg/h) → kJ/kg
+    r.answers.push(...study.answers);
     expect(r.role).toBe('admin');
     expect(r.status).toBe('ok');
     expect(r.firstUserVersion).toBeGreaterThanOrEqual(1);
