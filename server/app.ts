@@ -13,7 +13,7 @@ import { errorHandler, notFoundHandler } from './http/errorHandler.js';
 import { buildOpenApi } from './http/openapi.js';
 import { checkAnswers as answerCheck, CONTRACT_LOCAL } from './http/responseCheck.js';
 import { clientStatic } from './http/staticClient.js';
-import type { RouteDef } from './http/route.js';
+import { formFiles, type RouteDef } from './http/route.js';
 import { validate } from './http/validation.js';
 import { logger } from './logger.js';
 import { allRoutes } from './routes/index.js';
@@ -61,9 +61,14 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
   const run = wrap(async (req, res) => {
     const params = r.params ? validate(r.params, { ...req.params }, 'params') : req.params;
     const query = r.query ? validate(r.query, { ...(req.query as object) }, 'query') : {};
-    const body = r.body ? validate(r.body, req.body ?? {}, 'body') : req.body;
+    const files = formFiles(req, r.files);
+    const body = r.body
+      ? validate(r.body, req.body ?? {}, 'body')
+      : r.form
+        ? validate(r.form, { ...(req.body as object | undefined) }, 'body')
+        : req.body;
     const session = (res.locals.session as SessionClaims | undefined) ?? null;
-    const out = await r.handler({ user: res.locals.user as SessionUser, session, body, query, params, req, res, ds });
+    const out = await r.handler({ user: res.locals.user as SessionUser, session, body, query, params, files, req, res, ds });
     if (res.headersSent) return;
     if (out === undefined) res.status(204).end();
     else res.status(res.statusCode !== 200 ? res.statusCode : (r.status ?? 200)).json(out);

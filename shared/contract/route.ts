@@ -5,6 +5,7 @@
  */
 import type { TObject, TSchema } from '@sinclair/typebox';
 import type { Permission } from '../permissions.js';
+import type { FileKeys } from './schema.js';
 
 export type Access = Permission | 'public' | 'signed-in';
 export type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -41,11 +42,14 @@ export const isFileAnswer = (r: RouteContract['response']): r is FileAnswer =>
   r !== null && Array.isArray((r as { file?: unknown }).file);
 
 type StaticOf<S> = S extends TSchema ? S['static'] : undefined;
-/** What a client sends to a route: its path parameters, query and JSON body as the contract types them. */
+/** A multipart form as a client fills it: its text fields, and a Blob (or File) for each file part. */
+export type FormOf<S> = S extends TObject ? Omit<S['static'], FileKeys<S>> & { [K in FileKeys<S>]: Blob } : undefined;
+/** What a client sends to a route: its path parameters, query and JSON body (or multipart form) as the contract types them. */
 export type RequestOf<C extends RouteContract> = {
   params?: StaticOf<C['params']>;
   query?: StaticOf<C['query']>;
   body?: StaticOf<C['body']>;
+  form?: FormOf<C['form']>;
 };
 /** The JSON answer of a route on success (undefined for files and 204). */
 export type AnswerOf<C extends RouteContract> = StaticOf<C['response']>;

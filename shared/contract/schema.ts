@@ -2,7 +2,15 @@
  * TypeBox building blocks of the API contract (shared/contract/*.ts). A schema declared here is at once
  * the ajv validation, the TypeScript type (`Static<>`) and a part of the OpenAPI document.
  */
-import { Type, type SchemaOptions, type Static, type TObject, type TOptional, type TSchema } from '@sinclair/typebox';
+import {
+  Type,
+  type SchemaOptions,
+  type Static,
+  type TObject,
+  type TOptional,
+  type TSchema,
+  type TString,
+} from '@sinclair/typebox';
 
 /** The bare uuid form (validation.ts refuses `urn:uuid:`). */
 export const Uuid = (o: SchemaOptions = {}) => Type.String({ format: 'uuid', ...o });
@@ -43,6 +51,17 @@ export type Validated<S> =
     : S extends TSchema
       ? S['static']
       : Record<string, never>;
+
+declare const FILE_PART: unique symbol;
+/** A file part of a multipart form (`form` of a contract): read by multer, not by ajv; the handler gets it in `files`. */
+export type TFilePart = TString & { readonly [FILE_PART]: true };
+export const FilePart = (o: SchemaOptions = {}): TFilePart => Type.String({ format: 'binary', ...o }) as TFilePart;
+
+/** The names of a form's file parts. */
+export type FileKeys<S> =
+  S extends TObject<infer P> ? { [K in keyof P]: P[K] extends { readonly [FILE_PART]: true } ? K : never }[keyof P] : never;
+/** The text fields of a multipart form as the handler receives them: validated, the file parts left out. */
+export type FormFields<S> = S extends TObject<infer P> ? Validated<TObject<Omit<P, FileKeys<S>>>> : Record<string, never>;
 
 /** One field error: `path` names the field (dotted, e.g. `section.weirHeight_mm`; `(root)` for the whole). */
 export const ErrorDetail = Obj({ path: Type.String(), message: Type.String() });

@@ -84,11 +84,21 @@ async function request<T>(method: string, url: string, opts: RequestOptions = {}
   return data as T;
 }
 
-/** A route by its contract (shared/contract/): parameters, query, body and answer typed by it. */
-function call<C extends RouteContract>(c: C, input: RequestOf<C> = {}, opts: RequestOptions = {}): Promise<AnswerOf<C>> {
+/** A multipart body from a contract's form: text fields first, then the files. */
+function formData(form: object): FormData {
+  const fd = new FormData();
+  const entries = Object.entries(form).filter(([, v]) => v !== undefined);
+  for (const [k, v] of entries) if (!(v instanceof Blob)) fd.append(k, String(v));
+  for (const [k, v] of entries) if (v instanceof Blob) fd.append(k, v);
+  return fd;
+}
+
+/** A route by its contract (shared/contract/): parameters, query, body (or multipart form) and answer typed by it. */
+function call<C extends RouteContract>(c: C, input: NoInfer<RequestOf<C>> = {}, opts: RequestOptions = {}): Promise<AnswerOf<C>> {
   const url = pathOf(c, (input.params ?? {}) as Record<string, string | number>);
   const query = input.query as RequestOptions['query'];
-  return request<AnswerOf<C>>(c.method.toUpperCase(), url, { ...opts, ...(query ? { query } : {}), body: input.body });
+  const body = input.form ? formData(input.form) : input.body;
+  return request<AnswerOf<C>>(c.method.toUpperCase(), url, { ...opts, ...(query ? { query } : {}), body });
 }
 
 export const api = {

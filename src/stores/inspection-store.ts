@@ -1,13 +1,13 @@
 import { defineStore } from 'pinia';
-import { ref } from 'vue';
+import { shallowRef } from 'vue';
 import { api, type RequestOptions } from '../boot/api';
+import { inspectionContract as c } from '../../shared/contract/inspections';
+import { pathOf, type FormOf } from '../../shared/contract/route';
 import type {
   AsFoundBody,
-  AsFoundResult,
   CreateInspectionBody,
   CreatePunchBody,
   InspectionRecord,
-  InspectionSummary,
   PhotoRecord,
   SaveTrayBody,
   UpdateInspectionBody,
@@ -15,46 +15,50 @@ import type {
   VoidPunchBody,
 } from '../../shared/types/inspections';
 
-/** The open inspection and its actions; every write returns the whole record, which replaces the local copy. */
-export const useInspectionStore = defineStore('inspection', () => {
-  const rec = ref<InspectionRecord | null>(null);
-  const url = (suffix = '') => `/inspections/${rec.value!.id}${suffix}`;
+/** The photo form without its file: tray, pass, finding, caption as text. */
+export type PhotoFields = Omit<FormOf<(typeof c.uploadPhoto)['form']>, 'photo'>;
 
-  const list = async (columnId?: string) =>
-    (await api.get<{ items: InspectionSummary[] }>('/inspections', { query: { columnId } })).items;
-  const create = (body: CreateInspectionBody) => api.post<InspectionRecord>('/inspections', body);
-  async function load(id: string, opts?: RequestOptions): Promise<void> {
-    if (rec.value?.id !== id) rec.value = null; // never show another inspection under this address
-    rec.value = await api.get<InspectionRecord>(`/inspections/${id}`, opts);
+/**
+ * The open inspection and its actions; every write returns the whole record, which replaces the local copy
+ * (a shallow ref: the record is only ever replaced, never changed in place).
+ */
+export const useInspectionStore = defineStore('inspection', () => {
+  const rec = shallowRef<InspectionRecord | null>(null);
+  const id = () => ({ id: rec.value!.id });
+
+  const list = async (columnId?: string) => (await api.call(c.list, { query: { columnId } })).items;
+  const create = (body: CreateInspectionBody) => api.call(c.create, { body });
+  async function load(inspectionId: string, opts?: RequestOptions): Promise<void> {
+    if (rec.value?.id !== inspectionId) rec.value = null; // never show another inspection under this address
+    rec.value = await api.call(c.get, { params: { id: inspectionId } }, opts);
   }
   async function update(body: UpdateInspectionBody): Promise<void> {
-    rec.value = await api.patch<InspectionRecord>(url(), body);
+    rec.value = await api.call(c.update, { params: id(), body });
   }
   async function saveTray(tray: number, pass: number, body: SaveTrayBody): Promise<void> {
-    rec.value = await api.put<InspectionRecord>(url(`/trays/${tray}/${pass}`), body);
+    rec.value = await api.call(c.saveTray, { params: { ...id(), tray, pass }, body });
   }
   async function addPunch(body: CreatePunchBody): Promise<void> {
-    rec.value = await api.post<InspectionRecord>(url('/punch'), body);
+    rec.value = await api.call(c.addPunch, { params: id(), body });
   }
   async function updatePunch(itemId: string, body: UpdatePunchBody): Promise<void> {
-    rec.value = await api.patch<InspectionRecord>(url(`/punch/${itemId}`), body);
+    rec.value = await api.call(c.updatePunch, { params: { ...id(), itemId }, body });
   }
   async function voidPunch(itemId: string, body: VoidPunchBody): Promise<void> {
-    rec.value = await api.post<InspectionRecord>(url(`/punch/${itemId}/void`), body);
+    rec.value = await api.call(c.voidPunch, { params: { ...id(), itemId }, body });
   }
-  async function uploadPhoto(file: File, fields: Record<string, string>): Promise<PhotoRecord> {
-    const fd = new FormData();
-    for (const [k, v] of Object.entries(fields)) fd.append(k, v);
-    fd.append('photo', file);
-    const p = await api.post<PhotoRecord>(url('/photos'), fd);
-    rec.value!.photos.push(p);
+  async function uploadPhoto(photo: File, fields: PhotoFields): Promise<PhotoRecord> {
+    const p = await api.call(c.uploadPhoto, { params: id(), form: { ...fields, photo } });
+    if (rec.value) rec.value = { ...rec.value, photos: [...rec.value.photos, p] };
     return p;
   }
   async function sign(who: 'inspector' | 'engineer', opts?: RequestOptions): Promise<void> {
-    rec.value = await api.post<InspectionRecord>(url(`/sign/${who}`), { version: rec.value!.version }, opts);
+    const route = who === 'inspector' ? c.signInspector : c.signEngineer;
+    rec.value = await api.call(route, { params: id(), body: { version: rec.value!.version } }, opts);
   }
-  const asFound = (body: AsFoundBody) => api.post<AsFoundResult>(url('/as-found'), body);
-  const photoUrl = (photoId: string, size: 'thumb' | 'original' = 'thumb') => `/api${url(`/photos/${photoId}`)}?size=${size}`;
+  const asFound = (body: AsFoundBody) => api.call(c.asFound, { params: id(), body });
+  const photoUrl = (photoId: string, size: 'thumb' | 'original' = 'thumb') =>
+    `/api${pathOf(c.photo, { ...id(), photoId })}?size=${size}`;
 
   return { rec, list, create, load, update, saveTray, addPunch, updatePunch, voidPunch, uploadPhoto, sign, asFound, photoUrl };
 });

@@ -12,8 +12,10 @@ import type { Server } from 'node:http';
 import path from 'node:path';
 import { promisify } from 'node:util';
 import openapiTS, { astToString } from 'openapi-typescript';
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { makeUser, sessionCookie, setupApp, TEST_PASSWORD, type TestContext } from '../helpers/app.js';
+import { makeInspectionColumn } from './inspection-fixture.js';
 
 const run = promisify(execFile);
 
@@ -28,6 +30,11 @@ type ReadStudy = (
   base: string,
   cookie: string,
 ) => Promise<{ studyPoints: number; limiting?: string | null; latentHeat?: number; answers: Answers }>;
+/** tests/fixtures/typedClient/inspections.ts */
+type Inspect = (
+  base: string,
+  s: { inspectorCookie: string; engineerCookie: string; columnId: string; loadCaseId: string; png: Uint8Array<ArrayBuffer> },
+) => Promise<{ failedChecks: number | null; answers: Answers }>;
 /** tests/fixtures/typedClient/client.ts (type-checked on its own, against the generated types) */
 type Exercise = (
   base: string,
@@ -126,6 +133,33 @@ describe('a client generated from the published OpenAPI document', () => {
     expect(study.studyPoints, 'a stored study (the demo seeds one) read through the typed client').toBeGreaterThan(1);
     expect(study.latentHeat).toBeCloseTo((5000 * 3600) / 60000, 6); // kW / (kg/h) → kJ/kg
     r.answers.push(...study.answers);
+    const { inspect } = (await import(path.join(dir, 'inspections.ts'))) as { inspect: Inspect };
+    const column = await makeInspectionColumn(ctx.ds, null);
+    const inspector = await makeUser(ctx.ds, 'inspector', [column.siteId]);
+    const columnEngineer = await makeUser(ctx.ds, 'process-engineer', [column.siteId]);
+    const png = await sharp({ create: { width: 32, height: 24, channels: 3, background: '#5b7083' } })
+      .png()
+      .toBuffer();
+    const inspection = await inspect(base, {
+      inspectorCookie: await sessionCookie(ctx.ds, inspector),
+      engineerCookie: await sessionCookie(ctx.ds, columnEngineer),
+      ...column,
+      png: new Uint8Array(png),
+    });
+    expect(inspection.answers.map((a) => `${a.method} ${a.status}`)).toEqual([
+      'get 200',
+      'post 201',
+      'get 200',
+      'put 200',
+      'post 201',
+      'post 200',
+      'post 201',
+      'get 200',
+      'post 201',
+    ]);
+    // GEOMETRY's weir is 50 mm: 60 and 61 mm are both outside ±1.6 mm (PIP VEFV1102, the published set)
+    expect(inspection.failedChecks).toBe(2);
+    r.answers.push(...inspection.answers);
     expect(r.role).toBe('admin');
     expect(r.status).toBe('ok');
     expect(r.firstUserVersion).toBeGreaterThanOrEqual(1);
@@ -138,5 +172,5 @@ describe('a client generated from the published OpenAPI document', () => {
       const check = ajv.compile(JSON.parse(JSON.stringify(schema).replaceAll('"#/components/', '"doc#/components/')) as object);
       expect(check(a.body), `${a.method} ${a.path} ${a.status}: ${JSON.stringify(check.errors)}`).toBe(true);
     }
-  });
+  }, 120000);
 });

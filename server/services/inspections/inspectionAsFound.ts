@@ -12,7 +12,7 @@ import { createRatingRun } from '../runs/runs.js';
 import { compareResults } from '../runs/runsCompare.js';
 import { CHECK_NAMES, type SectionGeometry } from '../../../shared/types/rating.js';
 import type { SessionUser } from '../../../shared/types/api.js';
-import type { AsFoundBody, AsFoundResult, AsFoundTrayChange, TrayMeasurements } from '../../../shared/types/inspections.js';
+import type { AsFoundRequest, AsFoundResult, AsFoundTrayChange, TrayMeasurements } from '../../../shared/types/inspections.js';
 
 /** Plugging is capped here: a fully blocked tray has no open area and cannot be rated (our choice). */
 export const MAX_BLOCKED_PERCENT = 95;
@@ -98,7 +98,7 @@ export function asFoundSectionGeometry(
   return { geometry: g, blocked };
 }
 
-export async function rateAsFound(ds: DataSource, user: SessionUser, id: string, body: AsFoundBody): Promise<AsFoundResult> {
+export async function rateAsFound(ds: DataSource, user: SessionUser, id: string, body: AsFoundRequest): Promise<AsFoundResult> {
   const state = body.state ?? 'asFound';
   return ds.transaction(async (em) => {
     const insp = await visibleInspection(em, user, id, true);
