@@ -15,7 +15,11 @@ export interface PlanFormPumpAround {
   to: number | null;
   steps: number | null;
   cp: number | null;
+  /** what is held fixed as the duty changes: the return temperature drop or the circulation */
+  hold: 'returnDrop' | 'circulation';
   returnDrop: number | null;
+  /** in the user's mass-flow unit */
+  circulation: number | null;
   drawTemperature: number | null;
 }
 
@@ -57,7 +61,9 @@ export function planFormPumpAround(p: PumpAroundRecord, units: Units): PlanFormP
     to: show(1.5 * p.baseDuty_kW),
     steps: 20,
     cp: null,
+    hold: 'returnDrop',
     returnDrop: null,
+    circulation: null,
     drawTemperature: null,
   };
 }
@@ -72,8 +78,10 @@ export function planBody(f: HeatPlanForm, units: Units): CreateHeatPlanBody {
       pumpAroundId: p.pumpAroundId,
       sweep: { fromDuty_kW: duty(p.from), toDuty_kW: duty(p.to), steps: p.steps },
       liquidHeatCapacity_kJ_kgK: p.cp,
-      // a temperature difference: kelvin as typed
-      ...(p.returnDrop !== null ? { returnTemperatureDrop_K: p.returnDrop } : {}),
+      // only the quantity held fixed goes; empty goes as null so the server names the field
+      ...(p.hold === 'circulation'
+        ? { circulation_kg_h: p.circulation === null ? null : units.enter('massFlow', p.circulation) }
+        : { returnTemperatureDrop_K: p.returnDrop }), // a temperature difference: kelvin as typed
       ...(p.drawTemperature !== null ? { drawTemperature_C: temp(p.drawTemperature) } : {}),
     })),
     latentHeat_kJ_kg: f.latentHeat,
@@ -86,4 +94,18 @@ export function planBody(f: HeatPlanForm, units: Units): CreateHeatPlanBody {
   if (f.baseCondenserDuty !== null) body.baseCondenserDuty_kW = duty(f.baseCondenserDuty);
   if (f.simulationCaseIds.length) body.simulationCaseIds = f.simulationCaseIds;
   return body as unknown as CreateHeatPlanBody;
+}
+
+/** Faults the form can see before asking the server (the held quantity, entered and above zero), by request path. */
+export function planFormFaults(f: HeatPlanForm): { path: string; message: string; pumpAround: string }[] {
+  return f.pumpArounds.flatMap((p, i) => {
+    const [field, value, what] =
+      p.hold === 'circulation'
+        ? (['circulation_kg_h', p.circulation, 'the circulation'] as const)
+        : (['returnTemperatureDrop_K', p.returnDrop, 'the return temperature drop ΔT'] as const);
+    const path = `pumpArounds.${i}.${field}`;
+    if (value === null) return [{ path, message: `is required: enter ${what} held fixed`, pumpAround: p.name }];
+    if (!(value > 0)) return [{ path, message: `${what} must be above zero`, pumpAround: p.name }];
+    return [];
+  });
 }

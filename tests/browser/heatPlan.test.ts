@@ -2,17 +2,19 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ColumnSummary } from '../../shared/types/columns.js';
 import type { Page as ApiPage } from '../../shared/types/api.js';
-import type { HeatPlanSummary } from '../../shared/types/heatPlans.js';
+import type { HeatPlanRecord, HeatPlanSummary } from '../../shared/types/heatPlans.js';
 import { FROTHLINE_URL, launch, shot, signInAs, type Browser } from '../helpers/browser.js';
 
 let b: Browser;
 let planId: string;
+let columnId: string;
 
 beforeAll(async () => {
   b = await launch();
   await signInAs(b.page, 'process-engineer');
   const cols = (await (await b.page.request.get(`${FROTHLINE_URL}/api/columns?q=T-701`)).json()) as ApiPage<ColumnSummary>;
   const t701 = cols.items.find((c) => c.tag === 'T-701')!;
+  columnId = t701.id;
   const plans = (await (
     await b.page.request.get(`${FROTHLINE_URL}/api/columns/${t701.id}/heat-plans`)
   ).json()) as HeatPlanSummary[];
@@ -89,5 +91,58 @@ describe('heat-recovery plan page in Chromium', () => {
     expect(chosen).toBe(axis[0]); // the lowest duty of the first pump-around
     await b.page.locator('[data-test=plan-point] [data-test=chart-percent] .main-svg').first().waitFor();
     await shot(b.page, 'heat-plan-clicked');
+  });
+
+  it('the new-plan form holds the circulation fixed instead of the return ΔT for a pump-around, validated', async () => {
+    const page = b.page;
+    await page.goto(`${FROTHLINE_URL}/columns/${columnId}/heat-plans/new`);
+    await page.locator('[data-test=plan-form]').waitFor();
+    await page.getByLabel('Plan name (optional)').fill('Diesel PA at a fixed circulation (browser test)');
+    await page.getByLabel('Base load case').click();
+    await page.getByRole('option').first().click();
+    await page.locator('[data-test=plan-pumparounds]').click();
+    await page.getByRole('option', { name: /^Top PA/ }).click();
+    await page.getByRole('option', { name: /^Diesel PA/ }).click();
+    await page.keyboard.press('Escape');
+    for (const i of [0, 1]) {
+      const pa = page.locator(`[data-test=plan-pa-${i}]`);
+      await pa.getByLabel('Steps').fill('4');
+      await pa.getByLabel('Liquid heat capacity (kJ/(kg·K))').fill(i ? '2.8' : '2.6');
+    }
+    await page.locator('[data-test=plan-pa-0]').getByLabel('Return temperature drop ΔT (K)').fill('85');
+    const diesel = page.locator('[data-test=plan-pa-1]');
+    await diesel.getByRole('button', { name: 'Circulation' }).click();
+    // the ΔT field gives way to the circulation field, in the user's mass-flow unit
+    expect(await diesel.getByLabel('Return temperature drop ΔT (K)').count()).toBe(0);
+    const circulation = diesel.getByLabel(/^Circulation \((kg\/h|lb\/h)\)$/);
+    const perKg = /lb\/h/.test((await diesel.innerText()).match(/Circulation \(([^)]+)\)/)?.[0] ?? '') ? 2.20462 : 1;
+    await page.getByLabel('Latent heat (kJ/kg)').fill('265');
+    await page.getByLabel(/^Useful above/).fill(perKg === 1 ? '150' : '302');
+    await page.getByRole('button', { name: 'Rate and save the plan' }).click();
+    // nothing entered: refused on the page, naming the pump-around and the field
+    expect(await page.locator('[data-test=plan-form-error]').innerText()).toMatch(
+      /Diesel PA: is required: enter the circulation held fixed/,
+    );
+    expect(await diesel.innerText()).toMatch(/is required: enter the circulation held fixed/);
+    await circulation.fill('-5');
+    await page.getByRole('button', { name: 'Rate and save the plan' }).click();
+    expect(await page.locator('[data-test=plan-form-error]').innerText()).toMatch(
+      /Diesel PA: the circulation must be above zero/,
+    );
+    await shot(page, 'heat-plan-form-circulation');
+    await circulation.fill(String(Math.round(400000 * perKg)));
+    await page.getByRole('button', { name: 'Rate and save the plan' }).click();
+    await page.waitForURL((u) => /\/heat-plans\/[0-9a-f-]{36}$/.test(u.pathname), { timeout: 60_000 });
+    const id = new URL(page.url()).pathname.split('/').at(-1)!;
+    const plan = (await (await page.request.get(`${FROTHLINE_URL}/api/heat-plans/${id}`)).json()) as HeatPlanRecord;
+    const [top, dsl] = plan.inputs.input.pumpArounds;
+    expect(top!.returnTemperatureDrop_K).toBe(85);
+    expect(top!.circulation_kg_h).toBeUndefined();
+    expect(dsl!.circulation_kg_h).toBeCloseTo(400000, -1);
+    expect(dsl!.returnTemperatureDrop_K).toBeUndefined();
+    // the circulation is held at every duty of the sweep
+    expect(new Set(plan.result.grid.map((g) => Math.round(g.heat[1]!.circulation_kg_h))).size).toBe(1);
+    await page.locator('[data-test=plan-map]').waitFor();
+    await shot(page, 'heat-plan-circulation-created');
   });
 });
