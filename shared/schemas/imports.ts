@@ -66,6 +66,20 @@ export const importCommitBody = {
     basis: { type: 'string', enum: [...LOAD_BASES] },
     fileName: { type: 'string', minLength: 1, maxLength: 255 },
     notes: { type: 'string', maxLength: 4000, 'x-text': 'multiline' },
+    /** the pump-around duties a simulation case was made at (optional; heat-recovery plans calibrate against them) */
+    pumpAroundDuties: {
+      type: 'array',
+      maxItems: 20,
+      items: {
+        type: 'object',
+        additionalProperties: false,
+        required: ['pumpAroundId', 'duty_kW'],
+        properties: {
+          pumpAroundId: { type: 'string', format: 'uuid' },
+          duty_kW: { type: 'number', minimum: 0, maximum: 1e6 },
+        },
+      },
+    },
   },
 } as const;
 
@@ -76,12 +90,14 @@ export const importPreviewQuery = {
   properties: { sheet: { type: 'string', maxLength: 100 } },
 } as const;
 
-/** POST /columns/:id/imports/check: the commit body without name, basis, file name and notes. */
+/** POST /columns/:id/imports/check: the commit body without name, basis, file name, notes and duty tags. */
 export const importCheckBody = {
   type: 'object',
   additionalProperties: false,
   required: ['mapping', 'units', 'numbering'],
   properties: Object.fromEntries(
-    Object.entries(importCommitBody.properties).filter(([k]) => !['name', 'basis', 'fileName', 'notes'].includes(k)),
+    Object.entries(importCommitBody.properties).filter(
+      ([k]) => !['name', 'basis', 'fileName', 'notes', 'pumpAroundDuties'].includes(k),
+    ),
   ),
 } as const;

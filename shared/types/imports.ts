@@ -3,7 +3,7 @@
  * errors) → commit (all-or-nothing: one bad row stores nothing).
  */
 import type { TrayNumbering } from './columns.js';
-import type { LoadBasis, StageMapEntry } from './loads.js';
+import type { LoadBasis, PumpAroundDutyTag, StageMapEntry } from './loads.js';
 import type { TrayLoad } from './rating.js';
 
 /** Fields an import column can map to. */
@@ -107,10 +107,12 @@ export interface ImportCommitBody {
   basis: LoadBasis;
   fileName: string;
   notes?: string;
+  /** the pump-around duties a simulation case was made at (optional; heat-recovery plans calibrate against them) */
+  pumpAroundDuties?: PumpAroundDutyTag[];
 }
 
-/** POST /columns/:id/imports/check: the commit body without name, basis and file name; stores nothing. */
-export type ImportCheckBody = Omit<ImportCommitBody, 'name' | 'basis' | 'fileName' | 'notes'>;
+/** POST /columns/:id/imports/check: the commit body without name, basis, file name, notes and duty tags; stores nothing. */
+export type ImportCheckBody = Omit<ImportCommitBody, 'name' | 'basis' | 'fileName' | 'notes' | 'pumpAroundDuties'>;
 
 /** Answer of the check: the converted loads (SI, stored tray numbers), the first row errors and their count. */
 export interface ImportCheckResult {

@@ -31,7 +31,7 @@ const PAS: PlanPumpAround[] = [
  * A synthetic simulation case: the base traffic moved by the model at these duties with SIM_LATENT_HEAT, the
  * zone liquid net of the circulation (the pump-around as a side cooler, as a simulator's per-stage export has it).
  */
-function synthetic(duties: number[]): TrayLoad[] {
+export function synthetic(duties: number[]): TrayLoad[] {
   const roles = trayRoles(EXAMPLE.trays, PAS, 'top-down');
   const r = shiftPlanTraffic(EXAMPLE.trays, PAS, duties, SIM_LATENT_HEAT);
   return r.trays.map((t, k) => {

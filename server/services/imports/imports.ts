@@ -11,6 +11,7 @@ import { convertRows } from './importsRows.js';
 import { keepPreview, previewRows } from './importsStash.js';
 import { insertLoadCase } from '../loads/loads.js';
 import { toLoadCaseRecord } from '../loads/loadsRead.js';
+import { dutyTagErrors } from '../heatPlans/dutyTags.js';
 import { IMPORT_LIMITS } from '../../../shared/importLimits.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type {
@@ -154,6 +155,9 @@ export async function commitImport(
 ): Promise<LoadCaseRecord> {
   return ds.transaction(async (em) => {
     const col = await visibleColumn(em, user, columnId, true);
+    const tags = body.pumpAroundDuties ?? [];
+    const tagErrors = await dutyTagErrors(em, columnId, tags, 'pumpAroundDuties');
+    if (tagErrors.length) throw new ValidationError('Invalid pump-around duties', tagErrors);
     // taken from the stash in this transaction: stored with the load case, or kept when the commit fails
     const { headers: h, rows: r, firstDataRow } = await source(em, user, columnId, body, true);
     const { loads, errors } = convertRows({
@@ -167,15 +171,21 @@ export async function commitImport(
       columnDirection: col.numbering,
     });
     if (errors.length) throw new ImportRowsError(errors);
-    const lc = await insertLoadCase(em, user, columnId, {
-      name: body.name,
-      basis: body.basis,
-      source: 'imported',
-      sourceFile: body.fileName,
-      notes: body.notes ?? '',
-      loads,
-      stageMap: body.numbering.key === 'stage' && body.numbering.stageMap?.length ? body.numbering.stageMap : null,
-    });
+    const lc = await insertLoadCase(
+      em,
+      user,
+      columnId,
+      {
+        name: body.name,
+        basis: body.basis,
+        source: 'imported',
+        sourceFile: body.fileName,
+        notes: body.notes ?? '',
+        loads,
+        stageMap: body.numbering.key === 'stage' && body.numbering.stageMap?.length ? body.numbering.stageMap : null,
+      },
+      tags,
+    );
     return toLoadCaseRecord(em, lc);
   });
 }

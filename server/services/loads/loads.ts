@@ -7,7 +7,13 @@ import { assertVersion, visibleChild, visibleColumn } from '../columns/columnsCo
 import { toLoadCaseRecord } from './loadsRead.js';
 import { loadErrors, sortLoads, stageMapErrors } from './loadsValidate.js';
 import type { SessionUser } from '../../../shared/types/api.js';
-import type { CreateLoadCaseBody, LoadCaseRecord, PutLoadsBody, UpdateLoadCaseBody } from '../../../shared/types/loads.js';
+import type {
+  CreateLoadCaseBody,
+  LoadCaseRecord,
+  PumpAroundDutyTag,
+  PutLoadsBody,
+  UpdateLoadCaseBody,
+} from '../../../shared/types/loads.js';
 
 async function assertNameFree(em: EntityManager, columnId: string, name: string, selfId?: string): Promise<void> {
   const other = await em.findOneBy(LoadCase, { columnId, name });
@@ -17,12 +23,16 @@ async function assertNameFree(em: EntityManager, columnId: string, name: string,
     ]);
 }
 
-/** Create a load case inside the caller's transaction (used by the route and by the import commit). */
+/**
+ * Create a load case inside the caller's transaction (used by the route and by the import commit, which may
+ * tag it with the pump-around duties of a simulation case, checked by the caller).
+ */
 export async function insertLoadCase(
   em: EntityManager,
   user: SessionUser,
   columnId: string,
   body: CreateLoadCaseBody,
+  pumpAroundDuties: PumpAroundDutyTag[] = [],
 ): Promise<LoadCase> {
   const col = await visibleColumn(em, user, columnId, true);
   const errors = [...loadErrors(body.loads, col.trayCount), ...stageMapErrors(body.stageMap, col.trayCount)];
@@ -39,6 +49,7 @@ export async function insertLoadCase(
       notes: body.notes ?? '',
       loads: sortLoads(body.loads),
       stageMap: body.stageMap ?? null,
+      pumpAroundDuties: pumpAroundDuties.map((d) => ({ pumpAroundId: d.pumpAroundId, duty_kW: d.duty_kW })),
       createdBy: user.id,
     }),
   );
@@ -48,6 +59,7 @@ export async function insertLoadCase(
     source: body.source,
     sourceFile: body.sourceFile ?? null,
     trays: body.loads.length,
+    ...(pumpAroundDuties.length ? { pumpAroundDuties } : {}),
   });
   return l;
 }
