@@ -71,7 +71,7 @@ describe('three pump-arounds', () => {
       expect(all.trays[k]!.vapourMassFlow_kg_h).toBe(input.trays[k]!.vapourMassFlow_kg_h);
       expect(all.trays[k]!.liquidMassFlow_kg_h).toBe(input.trays[k]!.liquidMassFlow_kg_h);
     }
-  });
+  }, 30_000);
 
   it('the grid: every duty triple, the first varying slowest, with the identities at each point', () => {
     const plan = runHeatPlan(input);
@@ -109,12 +109,12 @@ describe('three pump-arounds', () => {
       expect(planPointStatus(input, plan.suggestion.duties_kW).feasible).toBe(true);
     }
     expect(plan.marginSensitivity.length).toBeGreaterThan(1);
-  });
+  }, 30_000);
 
   it('sharing ratings gives exactly what rating every tray at every point gives', () => {
     const shared = runHeatPlan(input);
     const fresh = runHeatPlan(input, { reuseRatings: false });
     expect(JSON.stringify(fresh.points)).toBe(JSON.stringify(shared.points));
     expect(fresh.boundary).toEqual(shared.boundary);
-  });
+  }, 30_000);
 });
