@@ -62,28 +62,41 @@ export function zoneShapes(r: SlimStudyResult, p: SlimStudyPoint): Record<string
   return shapes;
 }
 
-/** A vertical marker line at a duty, labelled. */
-export function dutyLine(
-  duty: number | null,
-  text: string,
-  color: string,
+/**
+ * Vertical marker lines at duties, labelled above the plot in plain horizontal text (rotated labels inside the plot
+ * were cut at its edge): labels in duty order take turns on three rows, so neighbouring duties do not overlap.
+ */
+export function dutyLines(
+  lines: readonly { duty: number | null; text: string; color: string; solid?: boolean }[],
   units: UnitsLike,
-  at: 'start' | 'middle' | 'end' = 'end',
-): Record<string, unknown>[] {
-  if (duty === null) return [];
-  const x = units.show('duty', duty);
-  return [
-    {
+): { shapes: Record<string, unknown>[]; annotations: Record<string, unknown>[] } {
+  const shown = lines
+    .filter((l): l is typeof l & { duty: number } => l.duty !== null)
+    .map((l) => ({ ...l, x: units.show('duty', l.duty) }))
+    .sort((a, b) => a.x - b.x);
+  return {
+    shapes: shown.map((l) => ({
       type: 'line',
       yref: 'paper',
       y0: 0,
       y1: 1,
-      x0: x,
-      x1: x,
-      line: { color, width: 1.5, dash: text === 'slider' ? 'solid' : 'dash' },
-      label: { text, textangle: -90, textposition: at, font: { size: 10, color } },
-    },
-  ];
+      x0: l.x,
+      x1: l.x,
+      line: { color: l.color, width: 1.5, dash: l.solid ? 'solid' : 'dash' },
+      name: `duty: ${l.text}`,
+    })),
+    annotations: shown.map((l, i) => ({
+      x: l.x,
+      xref: 'x',
+      y: 1,
+      yref: 'paper',
+      yanchor: 'bottom',
+      yshift: 2 + 14 * (i % 3),
+      text: l.text,
+      showarrow: false,
+      font: { size: 10, color: l.color },
+    })),
+  };
 }
 
 /** Lowest liquid over the trays above the zone at each sweep point. */
