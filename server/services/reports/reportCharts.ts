@@ -100,7 +100,10 @@ export function chartSvg(c: ChartSpec): string {
   }
   for (const l of c.xLines ?? []) {
     line(X(l.x), T, X(l.x), c.height - B, 'stroke="#7a7a7a" stroke-width="0.8" stroke-dasharray="2 2"');
-    text(X(l.x) + 2, T + 8, l.label, 'start', 7, '#555');
+    // right of the line; where it would run past the plot (about 0.56 em a character), left of it one row lower,
+    // clear of the label of the line before
+    const past = X(l.x) + 2 + l.label.length * 7 * 0.56 > c.width - R;
+    text(past ? X(l.x) - 2 : X(l.x) + 2, T + (past ? 17 : 8), l.label, past ? 'end' : 'start', 7, '#555');
   }
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${c.width}" height="${c.height}" viewBox="0 0 ${c.width} ${c.height}">${parts.join('')}</svg>`;
 }

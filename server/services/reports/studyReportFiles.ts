@@ -14,6 +14,12 @@ import type { ExportFile } from './exportsFormat.js';
 const th = (t: string) => ({ text: t, style: 'th' });
 const ACTION_WORDS = { submit: 'Submitted', approve: 'Approved', return: 'Returned' } as const;
 
+/** A line where each tray section ends, labelled with the section that follows (as on the run report's chart). */
+export function sectionBoundaries(sections: readonly { name: string; fromTray: number; toTray: number }[]) {
+  const sorted = [...sections].sort((a, b) => Math.min(a.fromTray, a.toTray) - Math.min(b.fromTray, b.toTray));
+  return sorted.slice(1).map((next, i) => ({ x: Math.max(sorted[i]!.fromTray, sorted[i]!.toTray) + 0.5, label: next.name }));
+}
+
 function trafficChart(s: StudyRecord, d: StudyReportData): Content[] {
   const pts = (i: number) => d.traffic.map((r) => [Number(r[0]), Number(r[i])] as [number, number]);
   const pa = s.inputs.input.pumpAround;
@@ -29,10 +35,7 @@ function trafficChart(s: StudyRecord, d: StudyReportData): Content[] {
       { name: 'Vapour', color: '#3c6e8f', kind: 'step', points: pts(2) },
       { name: 'Liquid', color: '#d9822b', kind: 'step', points: pts(3) },
     ],
-    xLines: [
-      { x: lo - 0.5, label: 'zone' },
-      { x: hi + 0.5, label: '' },
-    ],
+    xLines: [{ x: lo - 0.5, label: 'zone' }, { x: hi + 0.5, label: '' }, ...sectionBoundaries(s.inputs.input.sections)],
   });
   return [
     {
