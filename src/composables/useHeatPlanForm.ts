@@ -68,6 +68,40 @@ export function planFormPumpAround(p: PumpAroundRecord, units: Units): PlanFormP
   };
 }
 
+/** The form filled from a stored plan's request ("new plan from these inputs"); pump-arounds no longer on the column are left out. */
+export function planFormFrom(req: CreateHeatPlanBody, pumpArounds: PumpAroundRecord[], units: Units): HeatPlanForm {
+  const show = (q: Parameters<Units['show']>[0], v: number | undefined) => (v === undefined ? null : units.show(q, v));
+  return {
+    label: '',
+    loadCaseId: req.loadCaseId,
+    pumpArounds: req.pumpArounds.flatMap((c) => {
+      const p = pumpArounds.find((x) => x.id === c.pumpAroundId);
+      if (!p) return [];
+      return [
+        {
+          pumpAroundId: p.id,
+          name: p.name,
+          from: show('duty', c.sweep.fromDuty_kW),
+          to: show('duty', c.sweep.toDuty_kW),
+          steps: c.sweep.steps,
+          cp: c.liquidHeatCapacity_kJ_kgK,
+          hold: c.circulation_kg_h !== undefined ? 'circulation' : 'returnDrop',
+          returnDrop: c.returnTemperatureDrop_K ?? null,
+          circulation: show('massFlow', c.circulation_kg_h),
+          drawTemperature: show('temperature', c.drawTemperature_C),
+        } satisfies PlanFormPumpAround,
+      ];
+    }),
+    latentHeat: req.latentHeat_kJ_kg,
+    usefulAbove: show('temperature', req.usefulAboveTemperature_C),
+    marginPercent: Math.round((req.margin ?? 0.7) * 1000) / 10,
+    thresholdPercent: Math.round((req.liquidToVapourThreshold ?? 0.8) * 1000) / 10,
+    baseCondenserDuty: show('duty', req.baseCondenserDuty_kW),
+    simulationCaseIds: req.simulationCaseIds ?? [],
+    zoneIncludesCirculation: req.zoneLiquidIncludesCirculation ?? false,
+  };
+}
+
 /** The request body in SI; an empty required number goes as null, so the server names the field. */
 export function planBody(f: HeatPlanForm, units: Units): CreateHeatPlanBody {
   const duty = (v: number | null) => (v === null ? null : units.enter('duty', v));

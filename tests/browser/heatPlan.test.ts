@@ -145,4 +145,22 @@ describe('heat-recovery plan page in Chromium', () => {
     await page.locator('[data-test=plan-map]').waitFor();
     await shot(page, 'heat-plan-circulation-created');
   });
+
+  it('“New plan from these inputs” fills the form from a stored plan', async () => {
+    const page = b.page;
+    await page.goto(`${FROTHLINE_URL}/heat-plans/${planId}`);
+    await page.getByRole('link', { name: 'New plan from these inputs' }).click();
+    await page.waitForURL((u) => u.pathname.endsWith('/heat-plans/new') && u.searchParams.get('from') === planId);
+    const top = page.locator('[data-test=plan-pa-0]');
+    await top.waitFor();
+    await page.waitForFunction(() => (document.querySelector('[data-test=plan-pa-1]') as HTMLElement | null) !== null);
+    // the demo plan: 20 steps, c_p 2.6 and ΔT 85 K on the top pump-around, latent heat 265 kJ/kg, margin 80 %
+    expect(await top.getByLabel('Steps').inputValue()).toBe('20');
+    expect(await top.getByLabel('Liquid heat capacity (kJ/(kg·K))').inputValue()).toBe('2.6');
+    expect(await top.getByLabel('Return temperature drop ΔT (K)').inputValue()).toBe('85');
+    expect(await page.getByLabel('Latent heat (kJ/kg)').inputValue()).toBe('265');
+    expect(await page.getByLabel('Margin (% of dry-out)').inputValue()).toBe('80');
+    expect(await page.getByLabel('Plan name (optional)').inputValue()).toBe('');
+    await shot(page, 'heat-plan-form-copied');
+  });
 });
