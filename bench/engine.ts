@@ -47,7 +47,7 @@ export function benchRequest(trays = 60): RatingRequest {
 }
 
 /** Runs the benchmark for about `seconds` and returns a one-line report. */
-export async function benchEngine(seconds = 2): Promise<string> {
+export function benchEngine(seconds = 2): string {
   const req = benchRequest(60);
   let sink = 0;
   for (let i = 0; i < 2000; i++) sink += rateSection(req).summary.turndown; // warm-up (JIT)
@@ -65,5 +65,5 @@ export async function benchEngine(seconds = 2): Promise<string> {
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  benchEngine().then((line) => console.log(line));
+  console.log(benchEngine());
 }

@@ -49,7 +49,7 @@ function timeIt(runs: number, fn: () => number): { median: number; min: number }
   return { median: times[Math.floor(times.length / 2)]!, min: times[0]! };
 }
 
-export async function benchHeatPlan(runs = 11): Promise<string> {
+export function benchHeatPlan(runs = 11): string {
   const input = benchPlan();
   // as a caller that keeps percent of limit per check (the stored form), and as the CLI (every full rating kept)
   const slim = timeIt(runs, () => {
@@ -65,5 +65,5 @@ export async function benchHeatPlan(runs = 11): Promise<string> {
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  benchHeatPlan().then((line) => console.log(line));
+  console.log(benchHeatPlan());
 }

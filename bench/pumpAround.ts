@@ -104,7 +104,7 @@ function timeIt(runs: number, fn: () => number): { median: number; min: number }
  * kept in its stored form as soon as it is rated, plus the key points and lines of the stored result), and
  * as the CLI runs it (every full rating object kept to the end); returns a one-line report.
  */
-export async function benchPumpAround(runs = 15): Promise<string> {
+export function benchPumpAround(runs = 15): string {
   const input = benchStudy(60, 200);
   const api = timeIt(runs, () => {
     const r = runSlimStudy(input);
@@ -119,5 +119,5 @@ export async function benchPumpAround(runs = 15): Promise<string> {
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  benchPumpAround().then((line) => console.log(line));
+  console.log(benchPumpAround());
 }

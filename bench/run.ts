@@ -8,9 +8,9 @@ import { benchHeatPlan } from './heatPlan.js';
 import { benchPumpAround } from './pumpAround.js';
 
 const benches: { name: string; run: () => Promise<string> }[] = [
-  { name: 'engine', run: () => benchEngine() },
-  { name: 'pump-around', run: () => benchPumpAround() },
-  { name: 'heat plan', run: () => benchHeatPlan() },
+  { name: 'engine', run: () => Promise.resolve(benchEngine()) },
+  { name: 'pump-around', run: () => Promise.resolve(benchPumpAround()) },
+  { name: 'heat plan', run: () => Promise.resolve(benchHeatPlan()) },
 ];
 
 // Benches that need the database or the HTTP server (API under load, import preview).

@@ -59,6 +59,13 @@ try {
   fakes = await startFakes({ dataDir: root, s3Port, smtpPort, bucket: env.S3_BUCKET, quiet: true });
   step('type check (vue-tsc, strict)', 'node_modules/.bin/vue-tsc', ['--noEmit', '-p', 'tsconfig.json']);
   step('formatting (prettier --check)', 'node_modules/.bin/prettier', ['--check', '.', '--log-level', 'warn']);
+  step('lint (eslint, type-aware, with eslint-plugin-vue)', 'node_modules/.bin/eslint', [
+    'server',
+    'shared',
+    'tests',
+    'bench',
+    'src',
+  ]);
   const migrated = step('migrations apply to an empty database', 'node_modules/.bin/tsx', ['server/db/migrate.ts']);
   const seeded = migrated && step('demo data seeds', 'node_modules/.bin/tsx', ['server/db/seed/index.ts']);
   const built = step('client builds (vite build)', 'node_modules/.bin/vite', ['build', '--logLevel', 'warn']);

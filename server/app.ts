@@ -59,14 +59,14 @@ function mountRoute(router: express.Router, ds: DataSource, r: RouteDef): void {
     res.locals.user = user;
   }, true);
   const run = wrap(async (req, res) => {
-    const params = r.params ? validate(r.params, { ...req.params }, 'params') : req.params;
+    const params = r.params ? validate<unknown>(r.params, { ...req.params }, 'params') : req.params;
     const query = r.query ? validate(r.query, { ...(req.query as object) }, 'query') : {};
     const files = formFiles(req, r.files);
     const body = r.body
-      ? validate(r.body, req.body ?? {}, 'body')
+      ? validate<unknown>(r.body, req.body ?? {}, 'body')
       : r.form
-        ? validate(r.form, { ...(req.body as object | undefined) }, 'body')
-        : req.body;
+        ? validate<unknown>(r.form, { ...(req.body as object | undefined) }, 'body')
+        : (req.body as unknown);
     const session = (res.locals.session as SessionClaims | undefined) ?? null;
     const out = await r.handler({ user: res.locals.user as SessionUser, session, body, query, params, files, req, res, ds });
     if (res.headersSent) return;

@@ -11,6 +11,7 @@ import App from './App.vue';
 import { installApi } from './boot/api';
 import { router } from './router';
 
+// eslint-disable-next-line @typescript-eslint/no-unsafe-argument -- typescript-eslint cannot type a .vue import; vue-tsc checks this line
 const app = createApp(App);
 // an empty table is not a warning: show an information icon instead of the default triangle
 const icons = { ...iconSet, table: { ...iconSet.table, warning: 'info_outline' } };

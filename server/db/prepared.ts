@@ -17,7 +17,7 @@ export async function preparedQuery<T>(
   values: unknown[],
 ): Promise<T[]> {
   const em = 'manager' in db ? db.manager : db;
-  if (em.queryRunner) return (await em.query(text, values)) as T[];
+  if (em.queryRunner) return await em.query<T[]>(text, values);
   return (await driverPool(em).query({ name, text, values })).rows as T[];
 }
 

@@ -58,7 +58,7 @@ const SOCKET_CODES = new Set([
 function chain(err: unknown): PgLike[] {
   const out: PgLike[] = [];
   const visit = (e: unknown, depth: number) => {
-    if (!e || typeof e !== 'object' || depth > 4 || out.includes(e as PgLike)) return;
+    if (!e || typeof e !== 'object' || depth > 4 || out.includes(e)) return;
     const p = e as PgLike;
     out.push(p);
     visit(p.driverError, depth + 1);

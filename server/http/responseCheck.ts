@@ -28,7 +28,7 @@ export function answerSchema(c: RouteContract | undefined, status: number): TSch
   const other = c?.otherResponses?.[status];
   if (other) return other;
   if (status >= 400 || !c) return ErrorBody;
-  if (status === (c.status ?? 200) && c.response && !isFileAnswer(c.response)) return c.response as TSchema;
+  if (status === (c.status ?? 200) && c.response && !isFileAnswer(c.response)) return c.response;
   return null;
 }
 

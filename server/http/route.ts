@@ -48,7 +48,7 @@ export interface RouteDef {
   status?: number;
   /** open to a user who must first change a temporary password (the account routes) */
   whilePasswordChangeDue?: boolean;
-  handler: (ctx: RouteContext) => Promise<unknown> | unknown;
+  handler: (ctx: RouteContext) => unknown;
   /** the route's contract; every route has one (tests/api/contract.test.ts) */
   contract?: RouteContract;
 }

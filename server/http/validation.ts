@@ -41,7 +41,7 @@ const cache = new WeakMap<object, ValidateFunction>();
 const queryCache = new WeakMap<object, ValidateFunction>();
 
 /** Validate `data` against `schema`, applying defaults; throws ValidationError naming each field. */
-export function validate<T>(schema: object, data: unknown, where: 'body' | 'query' | 'params' | string): T {
+export function validate<T>(schema: object, data: unknown, where: string): T {
   const useQuery = where === 'query' || where === 'params';
   const c = useQuery ? queryCache : cache;
   let fn = c.get(schema);

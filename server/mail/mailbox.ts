@@ -40,15 +40,17 @@ interface OutboxRow {
 
 /** Outbox state for admins: failures first, then the newest. */
 export async function listOutbox(ds: DataSource, limit = 200): Promise<OutboxList> {
-  const rows = (await ds.query(
+  const rows = await ds.query<OutboxRow[]>(
     `SELECT id, kind, recipients, subject, status, attempts, last_error, next_attempt_at, created_at, sent_at
        FROM mail_outbox ORDER BY (status = 'failed') DESC, (status = 'pending') DESC, id DESC LIMIT $1`,
     [limit],
-  )) as OutboxRow[];
-  const c = (await ds.query(`SELECT status, count(*)::int AS n FROM mail_outbox GROUP BY status`)) as {
-    status: string;
-    n: number;
-  }[];
+  );
+  const c = await ds.query<
+    {
+      status: string;
+      n: number;
+    }[]
+  >(`SELECT status, count(*)::int AS n FROM mail_outbox GROUP BY status`);
   const counts = { pending: 0, sent: 0, failed: 0 };
   for (const r of c) if (r.status in counts) counts[r.status as keyof typeof counts] = r.n;
   return {

@@ -43,9 +43,10 @@ export function rolesWith(permission: (typeof PERMISSION_MATRIX)[keyof typeof PE
  * the column (its site): a notice names the column and its results, so it goes to no one else.
  */
 export async function reviewerEmails(em: EntityManager, columnId: string): Promise<string[]> {
-  const rows = (await em.query(`SELECT id, role, email FROM users WHERE active AND role = ANY($1) ORDER BY email`, [
-    rolesWith('reviews.approve'),
-  ])) as { id: string; role: Role; email: string }[];
+  const rows = await em.query<{ id: string; role: Role; email: string }[]>(
+    `SELECT id, role, email FROM users WHERE active AND role = ANY($1) ORDER BY email`,
+    [rolesWith('reviews.approve')],
+  );
   const out: string[] = [];
   for (const r of rows) if (await canSeeColumn(em, r, columnId)) out.push(r.email);
   return out;
@@ -57,11 +58,13 @@ export async function reviewerEmails(em: EntityManager, columnId: string): Promi
  */
 export async function userEmail(em: EntityManager, userId: string | null | undefined, columnId?: string): Promise<string | null> {
   if (!userId) return null;
-  const rows = (await em.query(`SELECT id, role, email FROM users WHERE id = $1 AND active`, [userId])) as {
-    id: string;
-    role: Role;
-    email: string;
-  }[];
+  const rows = await em.query<
+    {
+      id: string;
+      role: Role;
+      email: string;
+    }[]
+  >(`SELECT id, role, email FROM users WHERE id = $1 AND active`, [userId]);
   const u = rows[0];
   if (!u || (columnId && !(await canSeeColumn(em, u, columnId)))) return null;
   return u.email;

@@ -47,13 +47,13 @@ export async function deliverPending(
   let failed = 0;
   for (let i = 0; i < limit; i++) {
     const done = await ds.transaction(async (em) => {
-      const rows = (await em.query(
+      const rows = await em.query<DueRow[]>(
         `SELECT id, kind, recipients, subject, body, attempts FROM mail_outbox
           WHERE status = 'pending' AND NOT (id = ANY($1::bigint[]))
             AND ${ids ? 'id = ANY($2::bigint[])' : 'next_attempt_at <= now()'}
           ORDER BY id LIMIT 1 FOR UPDATE SKIP LOCKED`,
         ids ? [tried, ids] : [tried],
-      )) as DueRow[];
+      );
       const row = rows[0];
       if (!row) return false;
       tried.push(String(row.id));
@@ -92,10 +92,10 @@ export async function deliverPending(
 
 /** Put a failed (or pending) notice back in the queue for immediate delivery. */
 export async function retryNotice(ds: DataSource, id: string): Promise<boolean> {
-  const r = (await ds.query(
+  const r = await ds.query<[unknown[], number] | unknown[]>(
     `UPDATE mail_outbox SET status = 'pending', next_attempt_at = now() WHERE id = $1 AND status <> 'sent' RETURNING id`,
     [id],
-  )) as [unknown[], number] | unknown[];
+  );
   const rows = Array.isArray(r[0]) ? (r[0] as unknown[]) : (r as unknown[]);
   return rows.length > 0;
 }

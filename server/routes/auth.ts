@@ -19,11 +19,12 @@ const signInLimiter: RequestHandler = rateLimit({
   message: { error: 'Too many failed sign-in attempts from this address; wait 15 minutes and try again' },
 });
 
+const emailOf = (body: unknown): string => {
+  const e = (body as { email?: unknown } | undefined)?.email;
+  return typeof e === 'string' ? e : '';
+};
 /** Per account, whatever the address: guessing one user's password from many addresses is slowed too. */
-const accountKey = (req: Request): string =>
-  `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '')
-    .trim()
-    .toLowerCase()}`;
+const accountKey = (req: Request): string => `account:${emailOf(req.body).trim().toLowerCase()}`;
 const signInAccountLimiter: RequestHandler = rateLimit({
   ...failures,
   limit: () => config.loginAccountLimit,

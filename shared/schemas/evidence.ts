@@ -4,7 +4,7 @@
  * Everything is stored in SI: elevations in m, densities in kg/m³, ΔP in Pa, temperatures in °C. Count rates
  * are kept in the file's own unit (only their ratio to the two calibration rates matters).
  */
-import { Type, type TLiteral, type TSchema, type TUnion } from '@sinclair/typebox';
+import { Type, type TSchema } from '@sinclair/typebox';
 
 export const EVIDENCE_KINDS = ['gamma-scan', 'dp-survey', 'temperature-survey'] as const;
 export const SCAN_MEASURES = ['density', 'count-rate'] as const;
@@ -15,8 +15,7 @@ const lines = (max: number) => Type.String({ maxLength: max, 'x-text': 'multilin
 const date = Type.String({ format: 'date' });
 const uuid = Type.String({ format: 'uuid' });
 const nullable = <T extends TSchema>(t: T) => Type.Union([t, Type.Null()]);
-const literals = <T extends string>(xs: readonly T[]) =>
-  Type.Union(xs.map((x) => Type.Literal(x))) as unknown as TUnion<TLiteral<T>[]>;
+const literals = <T extends string>(xs: readonly T[]) => Type.Union(xs.map((x) => Type.Literal(x)));
 /** an elevation on the scan's (or survey's) own scale [m]; columns stand well inside ±500 m of their zero */
 const elevation = Type.Number({ minimum: -500, maximum: 500 });
 

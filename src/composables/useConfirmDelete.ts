@@ -61,7 +61,7 @@ export function useConfirmDelete() {
       message: `${t.effect} Rating runs already stored keep their own copy of the ${t.kept}, so their results and reports do not change. The deletion cannot be undone.`,
       cancel: { flat: true, noCaps: true, label: 'Keep it' },
       ok: { color: 'negative', unelevated: true, noCaps: true, label: `Delete ${t.noun}` },
-    }).onOk(() => remove(t, on));
+    }).onOk(() => void remove(t, on));
   }
 
   type SectionRef = Pick<TraySectionRecord, 'id' | 'columnId' | 'name' | 'firstTray' | 'lastTray' | 'version'>;

@@ -8,7 +8,7 @@ let loading: Promise<PlotlyModule> | null = null;
 
 /** Plotly, loaded once on first use through a dynamic import so that it is its own chunk. */
 export function loadPlotly(): Promise<PlotlyModule> {
-  loading ??= import('plotly.js-dist-min').then((m) => ((m as { default?: PlotlyModule }).default ?? m) as PlotlyModule);
+  loading ??= import('plotly.js-dist-min').then((m) => (m as { default?: PlotlyModule }).default ?? m);
   return loading;
 }
 

@@ -49,7 +49,7 @@ describe('sign-in and sessions', () => {
       .post('/api/users')
       .send({ email, name: 'New Person', role: 'inspector', password: 'a-long-password' });
     expect(created.status).toBe(201);
-    const rows = (await ctx.ds.query('SELECT password_hash FROM users WHERE email = $1', [email])) as { password_hash: string }[];
+    const rows = await ctx.ds.query<{ password_hash: string }[]>('SELECT password_hash FROM users WHERE email = $1', [email]);
     const cost = Number(rows[0]!.password_hash.split('$')[2]);
     expect(cost).toBeGreaterThanOrEqual(10);
   });

@@ -11,7 +11,7 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 const auditCount = async (entityId: string): Promise<number> =>
-  Number(((await ctx.ds.query('SELECT count(*) AS n FROM audit_log WHERE entity_id = $1', [entityId])) as { n: string }[])[0]!.n);
+  Number((await ctx.ds.query<{ n: string }[]>('SELECT count(*) AS n FROM audit_log WHERE entity_id = $1', [entityId]))[0]!.n);
 
 describe('columns, sections and pump-arounds', () => {
   it('a specialist creates a column in a unit of their site; the admin route does the same; the column lists and filters', async () => {
@@ -212,9 +212,9 @@ describe('deletes', () => {
     const stored = (await spec.get(`/api/runs/${run.id}`)).body;
     expect(stored).toMatchObject({ loadCaseId: null, loadCaseName: 'L' });
     expect(stored.snapshot.sections[0].sectionId).toBe(s.id);
-    const audits = (await ctx.ds.query(`SELECT action FROM audit_log WHERE entity_id = ANY($1) AND action = 'delete'`, [
+    const audits = await ctx.ds.query<unknown[]>(`SELECT action FROM audit_log WHERE entity_id = ANY($1) AND action = 'delete'`, [
       [s.id, pa.id, lc.id],
-    ])) as unknown[];
+    ]);
     expect(audits).toHaveLength(3);
   });
 });

@@ -69,7 +69,7 @@ describe("a column's engineer", () => {
   });
 
   it('is checked when a column is created too', async () => {
-    const [unit] = (await ctx.ds.query(`SELECT id FROM process_units WHERE site_id = $1`, [fx.siteId])) as { id: string }[];
+    const [unit] = await ctx.ds.query<{ id: string }[]>(`SELECT id FROM process_units WHERE site_id = $1`, [fx.siteId]);
     const viewer = await makeUser(ctx.ds, 'viewer', [fx.siteId]);
     const res = await specialist
       .post('/api/columns')

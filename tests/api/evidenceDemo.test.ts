@@ -9,7 +9,7 @@ let items: EvidenceSummary[];
 beforeAll(async () => {
   ctx = await setupApp();
   agent = (await signedIn(ctx, 'admin')).agent;
-  const [col] = (await ctx.ds.query(`SELECT id FROM columns WHERE tag = 'T-701'`)) as { id: string }[];
+  const [col] = await ctx.ds.query<{ id: string }[]>(`SELECT id FROM columns WHERE tag = 'T-701'`);
   items = (await agent.get(`/api/columns/${col!.id}/evidence`)).body.items;
 });
 afterAll(() => ctx.close());

@@ -44,9 +44,8 @@ const header = {
 
 const count = async (): Promise<number> =>
   Number(
-    (
-      (await ctx.ds.query('SELECT count(*) AS n FROM field_evidence WHERE column_id = $1', [plant.columnId])) as { n: string }[]
-    )[0]!.n,
+    (await ctx.ds.query<{ n: string }[]>('SELECT count(*) AS n FROM field_evidence WHERE column_id = $1', [plant.columnId]))[0]!
+      .n,
   );
 const preview = (a: Agent, content: string | Buffer, name: string) =>
   a

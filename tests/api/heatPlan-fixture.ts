@@ -43,10 +43,10 @@ export function synthetic(duties: number[]): TrayLoad[] {
 
 export async function makeHeatPlanColumn(ds: DataSource): Promise<HeatPlanFixture> {
   const f = await makeStudyColumn(ds);
-  const [p] = (await ds.query(
+  const [p] = await ds.query<{ id: string }[]>(
     `INSERT INTO pump_arounds (column_id, name, draw_tray, return_tray, base_duty_kw) VALUES ($1, $2, $3, $4, $5) RETURNING id`,
     [f.columnId, LOWER_PA.name, LOWER_PA.drawTray, LOWER_PA.returnTray, LOWER_PA.baseDuty_kW],
-  )) as { id: string }[];
+  );
   const top = EXAMPLE.pumpAround.baseDuty_kW;
   const sims: string[] = [];
   for (const i of [0, 1]) {
@@ -55,10 +55,10 @@ export async function makeHeatPlanColumn(ds: DataSource): Promise<HeatPlanFixtur
       { pumpAroundId: f.pumpAroundId, duty_kW: at[0]! },
       { pumpAroundId: p!.id, duty_kW: at[1]! },
     ];
-    const [lc] = (await ds.query(
+    const [lc] = await ds.query<{ id: string }[]>(
       `INSERT INTO load_cases (column_id, name, basis, source, loads, pump_around_duties) VALUES ($1, $2, 'other', 'imported', $3, $4) RETURNING id`,
       [f.columnId, `Simulation case ${i + 1}`, JSON.stringify(synthetic(at)), JSON.stringify(duties)],
-    )) as { id: string }[];
+    );
     sims.push(lc!.id);
   }
   return { ...f, lowerPumpAroundId: p!.id, simulationCaseIds: sims };

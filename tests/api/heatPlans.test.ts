@@ -251,14 +251,16 @@ describe('a plan calibrated against simulation cases', () => {
   });
 
   it('a case without the load of every tray is refused, naming the case', async () => {
-    const lc = (await ctx.ds.query(`SELECT loads FROM load_cases WHERE id = $1`, [fx.simulationCaseIds[1]])) as {
-      loads: unknown[];
-    }[];
-    const [extra] = (await ctx.ds.query(
+    const lc = await ctx.ds.query<
+      {
+        loads: unknown[];
+      }[]
+    >(`SELECT loads FROM load_cases WHERE id = $1`, [fx.simulationCaseIds[1]]);
+    const [extra] = await ctx.ds.query<{ id: string }[]>(
       `INSERT INTO load_cases (column_id, name, basis, source, loads, pump_around_duties)
        SELECT column_id, 'Simulation case, short', basis, source, $2, pump_around_duties FROM load_cases WHERE id = $1 RETURNING id`,
       [fx.simulationCaseIds[1], JSON.stringify(lc[0]!.loads.slice(0, 10))],
-    )) as { id: string }[];
+    );
     const res = await create(author, { ...planBody(fx), simulationCaseIds: [fx.simulationCaseIds[0], extra!.id] });
     expect(res.status).toBe(400);
     expect(paths(res)).toEqual(['simulationCaseIds.1 (trays)']);
@@ -333,8 +335,7 @@ describe('the plan report and export', () => {
 describe('bad plan input is refused naming the field; nothing is stored', () => {
   const count = async () =>
     Number(
-      ((await ctx.ds.query(`SELECT count(*) FROM heat_plans WHERE column_id = $1`, [fx.columnId])) as { count: string }[])[0]!
-        .count,
+      (await ctx.ds.query<{ count: string }[]>(`SELECT count(*) FROM heat_plans WHERE column_id = $1`, [fx.columnId]))[0]!.count,
     );
 
   it('one pump-around, a missing useful temperature, more than 40 steps; 41 × 41 points is stored', async () => {

@@ -35,8 +35,7 @@ const BAD = [
 
 const count = async (): Promise<number> =>
   Number(
-    ((await ctx.ds.query('SELECT count(*) AS n FROM load_cases WHERE column_id = $1', [plant.columnId])) as { n: string }[])[0]!
-      .n,
+    (await ctx.ds.query<{ n: string }[]>('SELECT count(*) AS n FROM load_cases WHERE column_id = $1', [plant.columnId]))[0]!.n,
   );
 
 const preview = (content: string | Buffer, name: string) =>
@@ -132,7 +131,7 @@ describe('tray-profile import', () => {
     expect(ok.status).toBe(201);
     expect(ok.body).toMatchObject({ name: 'Good import', source: 'imported', sourceFile: 'fixed.csv', trayCount: 5 });
     expect(await count()).toBe(before + 1);
-    const audit = (await ctx.ds.query(`SELECT action FROM audit_log WHERE entity_id = $1`, [ok.body.id])) as { action: string }[];
+    const audit = await ctx.ds.query<{ action: string }[]>(`SELECT action FROM audit_log WHERE entity_id = $1`, [ok.body.id]);
     expect(audit).toEqual([{ action: 'create' }]);
   });
 

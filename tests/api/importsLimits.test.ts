@@ -182,7 +182,7 @@ describe('previews kept in the database', () => {
     vi.resetModules();
     const { createApp } = await import('../../server/app.js');
     const { makeDataSource } = await import('../../server/db/data-source.js');
-    const ds2 = makeDataSource(process.env.DATABASE_URL!);
+    const ds2 = makeDataSource(process.env.DATABASE_URL);
     await ds2.initialize();
     try {
       const other = request.agent(createApp({ ds: ds2, serveClient: false }));

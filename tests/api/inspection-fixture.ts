@@ -43,7 +43,7 @@ export interface InspectionFixture {
 
 export async function makeInspectionColumn(ds: DataSource, engineerId: string | null): Promise<InspectionFixture> {
   const k = randomUUID().slice(0, 6);
-  const one = async (sql: string, p: unknown[]) => ((await ds.query(sql, p)) as { id: string }[])[0]!.id;
+  const one = async (sql: string, p: unknown[]) => (await ds.query<{ id: string }[]>(sql, p))[0]!.id;
   const siteId = await one(`INSERT INTO sites (name, location) VALUES ($1, 'invented test site') RETURNING id`, [
     `Inspection test site ${k}`,
   ]);

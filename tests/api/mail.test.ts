@@ -40,10 +40,12 @@ describe('mail outbox', () => {
     const m = await waitForMail(subject);
     expect(m.to).toEqual(['someone@test.example']);
     expect(m.text).toContain('Hello');
-    const rows = (await ctx.ds.query(`SELECT status, attempts FROM mail_outbox WHERE subject = $1`, [subject])) as {
-      status: string;
-      attempts: number;
-    }[];
+    const rows = await ctx.ds.query<
+      {
+        status: string;
+        attempts: number;
+      }[]
+    >(`SELECT status, attempts FROM mail_outbox WHERE subject = $1`, [subject]);
     expect(rows[0]).toEqual({ status: 'sent', attempts: 1 });
   });
 
@@ -65,7 +67,7 @@ describe('mail outbox', () => {
       // keep the running server's background sender away from this row
       await em.query(`UPDATE mail_outbox SET next_attempt_at = now() + interval '1 hour' WHERE subject = $1`, [subject]);
     });
-    const [queued] = (await ctx.ds.query(`SELECT id FROM mail_outbox WHERE subject = $1`, [subject])) as { id: string }[];
+    const [queued] = await ctx.ds.query<{ id: string }[]>(`SELECT id FROM mail_outbox WHERE subject = $1`, [subject]);
     // a port where nothing listens: the connection is refused
     const dead = nodemailer.createTransport({
       host: '127.0.0.1',
@@ -76,14 +78,14 @@ describe('mail outbox', () => {
     });
     const r = await deliverPending(ctx.ds, { via: dead, ids: [String(queued?.id)] });
     expect(r.failed).toBe(1);
-    const rows = (await ctx.ds.query(`SELECT id, status, attempts, last_error FROM mail_outbox WHERE subject = $1`, [
-      subject,
-    ])) as {
-      id: string;
-      status: string;
-      attempts: number;
-      last_error: string;
-    }[];
+    const rows = await ctx.ds.query<
+      {
+        id: string;
+        status: string;
+        attempts: number;
+        last_error: string;
+      }[]
+    >(`SELECT id, status, attempts, last_error FROM mail_outbox WHERE subject = $1`, [subject]);
     expect(rows[0]?.status).toBe('pending');
     expect(rows[0]?.attempts).toBe(1);
     expect(rows[0]?.last_error).toMatch(/ECONNREFUSED|connect/i);

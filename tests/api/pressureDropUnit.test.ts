@@ -35,7 +35,7 @@ afterAll(() => ctx.close());
 const exportRows = async () => {
   const res = await engineer.get(`/api/runs/${run.id}/export?format=csv`);
   expect(res.status).toBe(200);
-  const rows = parse(res.text, { relax_column_count: true }) as string[][];
+  const rows: string[][] = parse(res.text, { relax_column_count: true });
   const header = rows.find((r) => r[0] === 'Tray')!;
   return { header, data: rows.filter((r) => /^\d+$/.test(r[0] ?? '')) };
 };

@@ -77,10 +77,10 @@ describe('voiding a punch item', () => {
     expect(rec.punch).toHaveLength(2); // kept on the list
     const list = (await inspector.get(`/api/inspections`)).body.items as { id: string; openPunchItems: number }[];
     expect(list.find((r) => r.id === id)!.openPunchItems).toBe(1);
-    const [a] = (await ctx.ds.query(
+    const [a] = await ctx.ds.query<{ action: string; changes: { reason: string; was: string } }[]>(
       `SELECT action, changes FROM audit_log WHERE entity = 'punch-item' AND entity_id = $1 AND action = 'void'`,
       [item(2).id],
-    )) as { action: string; changes: { reason: string; was: string } }[];
+    );
     expect(a?.changes).toEqual({ reason: 'Duplicate of item 1', was: 'open' });
   });
 

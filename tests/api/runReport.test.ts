@@ -116,9 +116,10 @@ describe('rating report PDF', () => {
   });
 
   it('the review notices end with the full address of the run', async () => {
-    const rows = (await ctx.ds.query(`SELECT kind, body FROM mail_outbox WHERE body LIKE $1 ORDER BY created_at`, [
-      `%${run.id}%`,
-    ])) as { kind: string; body: string }[];
+    const rows = await ctx.ds.query<{ kind: string; body: string }[]>(
+      `SELECT kind, body FROM mail_outbox WHERE body LIKE $1 ORDER BY created_at`,
+      [`%${run.id}%`],
+    );
     expect(rows.map((r) => r.kind)).toEqual(['run.submitted', 'run.approved']);
     for (const r of rows) expect(r.body).toMatch(new RegExp(`Open it in Frothline: ${config.appUrl}/runs/${run.id}$`));
     expect(config.appUrl).toMatch(/^https?:\/\/[^/]+(\/.*[^/])?$/);

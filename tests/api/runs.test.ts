@@ -173,13 +173,17 @@ describe('review flow', () => {
     );
     expect((await author.get(`/api/runs/${run.id}`)).body.label).toBe(run.label);
 
-    const mails = (await ctx.ds.query(`SELECT kind FROM mail_outbox WHERE body LIKE $1 ORDER BY id`, [`%${run.label}%`])) as {
-      kind: string;
-    }[];
+    const mails = await ctx.ds.query<
+      {
+        kind: string;
+      }[]
+    >(`SELECT kind FROM mail_outbox WHERE body LIKE $1 ORDER BY id`, [`%${run.label}%`]);
     expect(mails.map((m) => m.kind)).toEqual(['run.submitted', 'run.returned', 'run.submitted', 'run.approved']);
-    const audits = (await ctx.ds.query(`SELECT action FROM audit_log WHERE entity_id = $1 ORDER BY id`, [run.id])) as {
-      action: string;
-    }[];
+    const audits = await ctx.ds.query<
+      {
+        action: string;
+      }[]
+    >(`SELECT action FROM audit_log WHERE entity_id = $1 ORDER BY id`, [run.id]);
     expect(audits.map((a) => a.action)).toEqual(['create', 'submit', 'return', 'submit', 'approve']);
   });
 

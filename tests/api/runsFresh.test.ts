@@ -110,15 +110,17 @@ describe('runs created at the same moment', () => {
     const ids = answers.map((a) => a.body.id as string);
     expect(new Set(ids).size).toBe(labels.length);
     expect(answers.map((a) => a.body.label)).toEqual(labels);
-    const stored = (await ctx.ds.query(`SELECT id, label FROM rating_runs WHERE id = ANY($1::uuid[])`, [ids])) as {
-      id: string;
-      label: string;
-    }[];
+    const stored = await ctx.ds.query<
+      {
+        id: string;
+        label: string;
+      }[]
+    >(`SELECT id, label FROM rating_runs WHERE id = ANY($1::uuid[])`, [ids]);
     expect(new Map(stored.map((r) => [r.id, r.label]))).toEqual(new Map(ids.map((id, i) => [id, labels[i]])));
-    const audits = (await ctx.ds.query(
+    const audits = await ctx.ds.query<{ entity_id: string; user_id: string }[]>(
       `SELECT entity_id, user_id FROM audit_log WHERE entity = 'rating-run' AND action = 'create' AND entity_id = ANY($1::text[])`,
       [ids],
-    )) as { entity_id: string; user_id: string }[];
+    );
     expect(audits.map((a) => a.entity_id).sort()).toEqual([...ids].sort());
     expect(new Set(audits.map((a) => a.user_id))).toEqual(new Set([e.user.id]));
     const one = (await e.agent.get(`/api/runs/${ids[5]}`)).body;
@@ -137,10 +139,10 @@ describe('runs created at the same moment', () => {
     // the leaving user's run reaches the insert on the cached read, fails its guard there and is then refused
     const answers = await Promise.all(['s1', 'l1', 's2', 's3'].map((l) => post(l[0] === 'l' ? leaving.agent : staying, l)));
     expect(answers.map((a) => a.status)).toEqual([201, 404, 201, 201]);
-    const labels = (await ctx.ds.query(`SELECT label FROM rating_runs WHERE column_id = $1 AND label = ANY($2::text[])`, [
-      plant.columnId,
-      ['s1', 'l1', 's2', 's3'],
-    ])) as { label: string }[];
+    const labels = await ctx.ds.query<{ label: string }[]>(
+      `SELECT label FROM rating_runs WHERE column_id = $1 AND label = ANY($2::text[])`,
+      [plant.columnId, ['s1', 'l1', 's2', 's3']],
+    );
     expect(labels.map((r) => r.label).sort()).toEqual(['s1', 's2', 's3']);
   });
 });

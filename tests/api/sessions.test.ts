@@ -74,10 +74,10 @@ describe('absolute session lifetime', () => {
   it('a sign-in opens a session that ends SESSION_MAX_HOURS later', async () => {
     const u = await makeUser(ctx.ds, 'viewer');
     await signIn(u.email);
-    const [row] = (await ctx.ds.query(
+    const [row] = await ctx.ds.query<{ s: string }[]>(
       `SELECT extract(epoch FROM expires_at - created_at) AS s FROM user_sessions WHERE user_id = $1`,
       [u.id],
-    )) as { s: string }[];
+    );
     expect(Number(row!.s)).toBeCloseTo(config.sessionMaxHours * 3600, -1);
   });
 

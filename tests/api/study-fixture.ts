@@ -19,16 +19,18 @@ export interface StudyFixture {
 
 export async function makeStudyColumn(ds: DataSource): Promise<StudyFixture> {
   const tag = randomUUID().slice(0, 6);
-  const [site] = (await ds.query(`INSERT INTO sites (name, location) VALUES ($1, 'invented test site') RETURNING id`, [
-    `Study test site ${tag}`,
-  ])) as { id: string }[];
-  const [unit] = (await ds.query(`INSERT INTO process_units (site_id, name) VALUES ($1, 'Test unit') RETURNING id`, [
-    site!.id,
-  ])) as { id: string }[];
-  const [col] = (await ds.query(
+  const [site] = await ds.query<{ id: string }[]>(
+    `INSERT INTO sites (name, location) VALUES ($1, 'invented test site') RETURNING id`,
+    [`Study test site ${tag}`],
+  );
+  const [unit] = await ds.query<{ id: string }[]>(
+    `INSERT INTO process_units (site_id, name) VALUES ($1, 'Test unit') RETURNING id`,
+    [site!.id],
+  );
+  const [col] = await ds.query<{ id: string }[]>(
     `INSERT INTO columns (unit_id, tag, service, numbering, tray_count) VALUES ($1, $2, 'invented test column', 'top-down', 16) RETURNING id`,
     [unit!.id, `C-410-${tag}`],
-  )) as { id: string }[];
+  );
   for (const s of EXAMPLE.sections) {
     const { name, fromTray, toTray, ...geometry } = s;
     await ds.query(
@@ -37,14 +39,14 @@ export async function makeStudyColumn(ds: DataSource): Promise<StudyFixture> {
     );
   }
   const pa = EXAMPLE.pumpAround;
-  const [p] = (await ds.query(
+  const [p] = await ds.query<{ id: string }[]>(
     `INSERT INTO pump_arounds (column_id, name, draw_tray, return_tray, base_duty_kw) VALUES ($1, $2, $3, $4, $5) RETURNING id`,
     [col!.id, pa.name, pa.drawTray, pa.returnTray, pa.baseDuty_kW],
-  )) as { id: string }[];
-  const [lc] = (await ds.query(
+  );
+  const [lc] = await ds.query<{ id: string }[]>(
     `INSERT INTO load_cases (column_id, name, basis, source, loads) VALUES ($1, 'Base case', 'normal', 'typed', $2) RETURNING id`,
     [col!.id, JSON.stringify(EXAMPLE.trays)],
-  )) as { id: string }[];
+  );
   return { siteId: site!.id, columnId: col!.id, loadCaseId: lc!.id, pumpAroundId: p!.id };
 }
 

@@ -103,9 +103,11 @@ describe('visibility and roles', () => {
 describe('review: draft → submitted → returned → submitted → approved (read-only), with notices', () => {
   let s: StudyRecord;
   const outbox = async (kind: string) =>
-    (await ctx.ds.query(`SELECT recipients FROM mail_outbox WHERE kind = $1 AND body LIKE $2`, [kind, `%/studies/${s.id}%`])) as {
-      recipients: string[];
-    }[];
+    await ctx.ds.query<
+      {
+        recipients: string[];
+      }[]
+    >(`SELECT recipients FROM mail_outbox WHERE kind = $1 AND body LIKE $2`, [kind, `%/studies/${s.id}%`]);
 
   beforeAll(async () => {
     s = (await create(author, exampleBody(fx))).body as StudyRecord;

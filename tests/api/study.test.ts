@@ -97,9 +97,10 @@ describe('POST /columns/:id/studies stores a pump-around duty study', () => {
     expect(t.status).toHaveLength(study.result.checkNames.length);
     expect(study.result.checkNames).toContain(t.controllingCheck);
     expect(JSON.stringify(study.result)).not.toMatch(/"details"|"warnings"/);
-    const rows = (await ctx.ds.query(`SELECT pg_column_size(results) AS bytes FROM pump_around_studies WHERE id = $1`, [
-      study.id,
-    ])) as { bytes: number }[];
+    const rows = await ctx.ds.query<{ bytes: number }[]>(
+      `SELECT pg_column_size(results) AS bytes FROM pump_around_studies WHERE id = $1`,
+      [study.id],
+    );
     expect(rows[0]!.bytes).toBeLessThan(200_000);
     expect(study.result.keyPoints.map((k) => k.kind)).toEqual(['base', 'limiting', 'recommended']);
     expect(study.result.minimumLiquidLines.map((l) => l.tray)).toEqual([1, 2, 3, 4, 5, 6]);

@@ -101,7 +101,7 @@ describe('a client generated from the published OpenAPI document', () => {
     const tsc = path.join(root, 'node_modules/typescript/bin/tsc');
     const out = await run(process.execPath, [tsc, '-p', path.join(dir, 'tsconfig.json')]).then(
       () => '',
-      (e: { stdout?: string }) => e.stdout ?? String(e),
+      (e: Error & { stdout?: string }) => e.stdout ?? String(e),
     );
     expect(out, 'tsc on the generated types and the client').toBe('');
   }, 120000);
@@ -110,7 +110,7 @@ describe('a client generated from the published OpenAPI document', () => {
     const admin = await makeUser(ctx.ds, 'admin');
     const { exercise, rateAgain } = (await import(path.join(dir, 'client.ts'))) as { exercise: Exercise; rateAgain: RateAgain };
     const r = await exercise(base, admin.email, TEST_PASSWORD);
-    const sites = (await ctx.ds.query('SELECT id FROM sites')) as { id: string }[];
+    const sites = await ctx.ds.query<{ id: string }[]>('SELECT id FROM sites');
     const engineer = await makeUser(
       ctx.ds,
       'process-engineer',

@@ -143,7 +143,7 @@ describe('pump-around study page in Chromium', () => {
     await b.page.waitForURL(/\/studies\/new/);
     const lambda = b.page.getByLabel('Latent heat λ (kJ/kg)');
     await b.page.waitForFunction(
-      () => (document.querySelector('input[aria-label="Latent heat λ (kJ/kg)"]') as HTMLInputElement | null)?.value !== '',
+      () => document.querySelector<HTMLInputElement>('input[aria-label="Latent heat λ (kJ/kg)"]')?.value !== '',
     );
     const value = await lambda.inputValue();
     await lambda.fill('');

@@ -44,7 +44,7 @@ export function decodeJson<T>(b: Buffer): T {
 /** TypeORM transformer for the rating_runs.snapshot column (bytea). */
 export const snapshotTransformer: ValueTransformer = {
   to: (v: unknown) => (v == null ? v : encodeJson(v)),
-  from: (b: Buffer | null) => (b ? decodeJson(b) : b),
+  from: (b: Buffer | null): unknown => (b ? decodeJson(b) : b),
 };
 
 /** TypeORM transformer for a bytea column holding any JSON value as FRJ1 (heat_plans.results). */

@@ -21,7 +21,7 @@ export class RunResultsByName1764750000000 implements MigrationInterface {
   async up(q: QueryRunner): Promise<void> {
     await reencode(q, 'results', `substring(results FROM 1 FOR 4) <> '\\x${FRB4.toString('hex')}'::bytea`, (id, b) => {
       const r = decodeResultsBeforeFrb4(b);
-      const bytes = encodeFrb4(r as unknown as Record<string, unknown>);
+      const bytes = encodeFrb4(r);
       if (!isDeepStrictEqual(decodeFrb4(bytes), r)) throw new Error(`run ${id}: its results do not read back equal in FRB4`);
       return bytes;
     });

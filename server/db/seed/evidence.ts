@@ -26,10 +26,10 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.len
 export async function seedEvidence(em: EntityManager, column: TowerColumn, users: User[]): Promise<void> {
   const inspector = toSessionUser(users.find((u) => u.role === 'inspector') ?? users[0]!);
   const engineer = toSessionUser(users.find((u) => u.role === 'process-engineer') ?? users[0]!);
-  const [run] = (await em.query(
+  const [run] = await em.query<{ id: string }[]>(
     `SELECT id FROM rating_runs WHERE column_id = $1 AND load_case_name = 'Summer normal' ORDER BY created_at LIMIT 1`,
     [column.id],
-  )) as { id: string }[];
+  );
   const { snapshot } = await em.findOneOrFail(RatingRun, { where: { id: run!.id }, select: { id: true, snapshot: true } });
   const sections: StudySection[] = DEMO_SECTIONS.map((s) => ({
     ...s.geometry,

@@ -32,16 +32,16 @@ const DEMO = {
 
 export async function seedHeatPlan(em: EntityManager, columnId: string, users: User[]): Promise<HeatPlan | null> {
   const author = users.find((u) => u.role === 'process-engineer');
-  const [column] = (await em.query(`SELECT numbering FROM columns WHERE id = $1`, [columnId])) as { numbering: string }[];
+  const [column] = await em.query<{ numbering: string }[]>(`SELECT numbering FROM columns WHERE id = $1`, [columnId]);
   const order = column?.numbering === 'bottom-up' ? 'DESC' : 'ASC';
-  const pas = (await em.query(
+  const pas = await em.query<{ id: string; duty: number }[]>(
     `SELECT id, base_duty_kw::float8 AS duty FROM pump_arounds WHERE column_id = $1 ORDER BY return_tray ${order} LIMIT 2`,
     [columnId],
-  )) as { id: string; duty: number }[];
-  const [lc] = (await em.query(
+  );
+  const [lc] = await em.query<{ id: string }[]>(
     `SELECT id FROM load_cases WHERE column_id = $1 ORDER BY (basis = 'normal') DESC, created_at LIMIT 1`,
     [columnId],
-  )) as { id: string }[];
+  );
   if (!author || pas.length < 2 || !lc) return null;
   const sweep = (duty: number) => ({
     fromDuty_kW: Math.round((0.5 * duty) / 100) * 100,

@@ -21,25 +21,29 @@ const DEMO_RETURN_DROP_K = 110;
 
 export async function seedStudy(em: EntityManager, columnId: string, users: User[]): Promise<PumpAroundStudy | null> {
   const author = users.find((u) => u.role === 'process-engineer');
-  const [column] = (await em.query(`SELECT numbering FROM columns WHERE id = $1`, [columnId])) as {
-    numbering: 'top-down' | 'bottom-up';
-  }[];
+  const [column] = await em.query<
+    {
+      numbering: 'top-down' | 'bottom-up';
+    }[]
+  >(`SELECT numbering FROM columns WHERE id = $1`, [columnId]);
   // the top pump-around: the highest return tray in the column
   const order = column?.numbering === 'bottom-up' ? 'DESC' : 'ASC';
-  const [pa] = (await em.query(
+  const [pa] = await em.query<
+    {
+      id: string;
+      name: string;
+      draw_tray: number;
+      return_tray: number;
+      base_duty_kw: number;
+    }[]
+  >(
     `SELECT id, name, draw_tray, return_tray, base_duty_kw FROM pump_arounds WHERE column_id = $1 ORDER BY return_tray ${order} LIMIT 1`,
     [columnId],
-  )) as {
-    id: string;
-    name: string;
-    draw_tray: number;
-    return_tray: number;
-    base_duty_kw: number;
-  }[];
-  const [lc] = (await em.query(
+  );
+  const [lc] = await em.query<{ id: string; loads: TrayLoad[] }[]>(
     `SELECT id, loads FROM load_cases WHERE column_id = $1 ORDER BY (basis = 'normal') DESC, created_at LIMIT 1`,
     [columnId],
-  )) as { id: string; loads: TrayLoad[] }[];
+  );
   if (!author || !column || !pa || !lc) return null;
   const spec: PumpAroundSpec = {
     name: pa.name,

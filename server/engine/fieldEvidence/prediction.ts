@@ -43,7 +43,7 @@ export function predictTrays(
   const prepared = new Map<StudySection, PreparedSection>();
   const out = new Map<number, TrayFrothPrediction>();
   for (const load of loads) {
-    const s = sectionForTray(sections as StudySection[], load.tray);
+    const s = sectionForTray(sections, load.tray);
     if (!s) continue;
     let p = prepared.get(s);
     if (!p) prepared.set(s, (p = prepareSection(s, methods)));

@@ -42,7 +42,7 @@ export function runTemperatureSurvey(input: TemperatureSurveyInput): Temperature
   if (compared.length >= 3) {
     const span = (xs: number[]): number => Math.max(...xs) - Math.min(...xs);
     const measuredSpan = span(compared.map((r) => r.measured_C));
-    const predictedSpan = span(compared.map((r) => r.predicted_C!));
+    const predictedSpan = span(compared.map((r) => r.predicted_C));
     if (predictedSpan > tol && measuredSpan < FLAT_PROFILE_FRACTION * predictedSpan)
       notes.push(
         `The measured profile is flatter than the case (span ${f1(measuredSpan)} K against ${f1(predictedSpan)} K over the same trays): with off-specification product, a flattened profile is a sign of flooding or lost separation reported in the troubleshooting literature.`,

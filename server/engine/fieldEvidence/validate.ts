@@ -91,10 +91,10 @@ export function columnFaults(
   const last = Math.max(...all);
   if (last - first + 1 !== all.length)
     add(faults, '/sections', `the sections must cover one contiguous tray range; trays ${first}–${last} have gaps`);
-  if (!sectionForTray(sections as StudySection[], datumTray))
+  if (!sectionForTray(sections, datumTray))
     add(faults, '/datum/tray', `tray ${datumTray} is outside the column's sections (trays ${first}–${last})`);
   trays?.forEach((t, i) => {
-    if (!sectionForTray(sections as StudySection[], t.tray))
+    if (!sectionForTray(sections, t.tray))
       faults.push({
         path: `/trays/${i}/tray`,
         message: `tray ${t.tray}, tray: is not inside any section (sections cover trays ${first}–${last})`,

@@ -24,10 +24,10 @@ export function siteFilterSql(user: Viewer, siteIdExpr: string, paramIndex: numb
 
 export async function canSeeColumn(db: DataSource | EntityManager, user: Viewer, columnId: string): Promise<boolean> {
   const f = siteFilterSql(user, 'u.site_id', 2);
-  const rows = (await db.query(`SELECT 1 FROM columns c JOIN process_units u ON u.id = c.unit_id WHERE c.id = $1 AND ${f.sql}`, [
-    columnId,
-    ...f.params,
-  ])) as unknown[];
+  const rows = await db.query<unknown[]>(
+    `SELECT 1 FROM columns c JOIN process_units u ON u.id = c.unit_id WHERE c.id = $1 AND ${f.sql}`,
+    [columnId, ...f.params],
+  );
   return rows.length > 0;
 }
 

@@ -38,10 +38,10 @@ export async function revokeUserSessions(
   userId: string,
   exceptSessionId: string | null = null,
 ): Promise<number> {
-  const [, n] = (await em.query(
+  const [, n] = await em.query<[unknown, number]>(
     `UPDATE user_sessions SET revoked_at = now() WHERE user_id = $1 AND revoked_at IS NULL AND ($2::uuid IS NULL OR id <> $2::uuid)`,
     [userId, exceptSessionId],
-  )) as [unknown, number];
+  );
   forgetSessionUsers();
   return n;
 }

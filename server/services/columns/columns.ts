@@ -28,7 +28,7 @@ const unitRecord = (u: ProcessUnit): UnitRecord => ({ id: u.id, siteId: u.siteId
 
 export async function listSites(ds: DataSource, user: SessionUser): Promise<SiteRecord[]> {
   const f = siteFilterSql(user, 's.id', 1);
-  const rows = (await ds.query(`SELECT s.id FROM sites s WHERE ${f.sql} ORDER BY s.name`, f.params)) as { id: string }[];
+  const rows = await ds.query<{ id: string }[]>(`SELECT s.id FROM sites s WHERE ${f.sql} ORDER BY s.name`, f.params);
   if (rows.length === 0) return [];
   const sites = await ds.getRepository(Site).find({ order: { name: 'ASC' } });
   const ids = new Set(rows.map((r) => r.id));
@@ -37,7 +37,7 @@ export async function listSites(ds: DataSource, user: SessionUser): Promise<Site
 
 async function assertSiteVisible(em: EntityManager | DataSource, user: SessionUser, siteId: string): Promise<void> {
   const f = siteFilterSql(user, 's.id', 2);
-  const rows = (await em.query(`SELECT 1 FROM sites s WHERE s.id = $1 AND ${f.sql}`, [siteId, ...f.params])) as unknown[];
+  const rows = await em.query<unknown[]>(`SELECT 1 FROM sites s WHERE s.id = $1 AND ${f.sql}`, [siteId, ...f.params]);
   if (rows.length === 0) throw new NotFoundError('Site');
 }
 
@@ -117,13 +117,13 @@ export async function createColumn(ds: DataSource, user: SessionUser, body: Crea
 
 /** Highest tray number used by the column's sections, pump-arounds and load cases (0 when none). */
 async function highestUsedTray(em: EntityManager, id: string): Promise<number> {
-  const rows = (await em.query(
+  const rows = await em.query<{ m: number | null }[]>(
     `SELECT greatest(
        (SELECT max(last_tray) FROM tray_sections WHERE column_id = $1),
        (SELECT max(greatest(draw_tray, return_tray)) FROM pump_arounds WHERE column_id = $1),
        (SELECT max((l->>'tray')::int) FROM load_cases lc, jsonb_array_elements(lc.loads) l WHERE lc.column_id = $1)) AS m`,
     [id],
-  )) as { m: number | null }[];
+  );
   return rows[0]?.m ?? 0;
 }
 

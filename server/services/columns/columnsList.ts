@@ -42,7 +42,7 @@ export async function listVisibleColumns(
     search += ` AND u.id = $${params.length}`;
   }
   params.push(q.pageSize, (q.page - 1) * q.pageSize);
-  const rows = (await ds.query(
+  const rows = await ds.query<Row[]>(
     `SELECT c.id, c.tag, c.service, c.numbering, c.tray_count, s.id AS site_id, s.name AS site_name,
             u.id AS unit_id, u.name AS unit_name, c.engineer_id, c.version, c.updated_at,
             count(*) OVER () AS total
@@ -51,7 +51,7 @@ export async function listVisibleColumns(
       ORDER BY s.name, u.name, c.tag
       LIMIT $${params.length - 1} OFFSET $${params.length}`,
     params,
-  )) as Row[];
+  );
   return {
     items: rows.map((r) => ({
       id: r.id,

@@ -107,14 +107,11 @@ async function checkLinks(
 ): Promise<void> {
   const errs: ErrorDetail[] = [];
   if (runId) {
-    const r = (await em.query(`SELECT 1 FROM rating_runs WHERE id = $1 AND column_id = $2`, [runId, columnId])) as unknown[];
+    const r = await em.query<unknown[]>(`SELECT 1 FROM rating_runs WHERE id = $1 AND column_id = $2`, [runId, columnId]);
     if (!r.length) errs.push({ path: 'runId', message: 'is not a rating run of this column' });
   }
   if (inspectionId) {
-    const r = (await em.query(`SELECT 1 FROM inspections WHERE id = $1 AND column_id = $2`, [
-      inspectionId,
-      columnId,
-    ])) as unknown[];
+    const r = await em.query<unknown[]>(`SELECT 1 FROM inspections WHERE id = $1 AND column_id = $2`, [inspectionId, columnId]);
     if (!r.length) errs.push({ path: 'inspectionId', message: 'is not an inspection of this column' });
   }
   if (errs.length) throw new ValidationError('Invalid link', errs);
@@ -130,9 +127,11 @@ export async function insertEvidence(
 ): Promise<FieldEvidence> {
   const col = await visibleColumn(em, user, columnId, true);
   const data = checkData(body.kind, body.data);
-  const names = (await em.query(`SELECT name FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`, [columnId])) as {
-    name: string;
-  }[];
+  const names = await em.query<
+    {
+      name: string;
+    }[]
+  >(`SELECT name FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`, [columnId]);
   const faults = dataFaults(
     body.kind,
     data,

@@ -12,10 +12,12 @@ function itemCount(ev: FieldEvidence): number {
 async function authorNames(em: EntityManager, ids: (string | null)[]): Promise<Map<string, string>> {
   const wanted = [...new Set(ids.filter((x): x is string => !!x))];
   if (!wanted.length) return new Map();
-  const rows = (await em.query(`SELECT id, name FROM users WHERE id = ANY($1::uuid[])`, [wanted])) as {
-    id: string;
-    name: string;
-  }[];
+  const rows = await em.query<
+    {
+      id: string;
+      name: string;
+    }[]
+  >(`SELECT id, name FROM users WHERE id = ANY($1::uuid[])`, [wanted]);
   return new Map(rows.map((r) => [r.id, r.name]));
 }
 
@@ -48,17 +50,20 @@ export async function toEvidenceRecord(em: EntityManager, ev: FieldEvidence): Pr
   const authors = await authorNames(em, [ev.authorId]);
   const run = ev.runId
     ? (
-        (await em.query(`SELECT label, load_case_name FROM rating_runs WHERE id = $1`, [ev.runId])) as {
-          label: string;
-          load_case_name: string;
-        }[]
+        await em.query<
+          {
+            label: string;
+            load_case_name: string;
+          }[]
+        >(`SELECT label, load_case_name FROM rating_runs WHERE id = $1`, [ev.runId])
       )[0]
     : undefined;
   const insp = ev.inspectionId
     ? (
-        (await em.query(`SELECT turnaround, to_char(start_date, 'YYYY-MM-DD') AS start FROM inspections WHERE id = $1`, [
-          ev.inspectionId,
-        ])) as { turnaround: string; start: string }[]
+        await em.query<{ turnaround: string; start: string }[]>(
+          `SELECT turnaround, to_char(start_date, 'YYYY-MM-DD') AS start FROM inspections WHERE id = $1`,
+          [ev.inspectionId],
+        )
       )[0]
     : undefined;
   return {

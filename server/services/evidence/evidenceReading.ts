@@ -37,10 +37,12 @@ const median = (xs: number[]): number | null => {
 
 /** The column's sections, its numbering and tray count, and (when a run is chosen) the run's loads and methods. */
 export async function readingBasis(em: EntityManager, columnId: string, runId: string | null): Promise<ReadingBasis> {
-  const [col] = (await em.query(`SELECT numbering, tray_count FROM columns WHERE id = $1`, [columnId])) as {
-    numbering: 'top-down' | 'bottom-up';
-    tray_count: number;
-  }[];
+  const [col] = await em.query<
+    {
+      numbering: 'top-down' | 'bottom-up';
+      tray_count: number;
+    }[]
+  >(`SELECT numbering, tray_count FROM columns WHERE id = $1`, [columnId]);
   const base = { numbering: col!.numbering, trayCount: col!.tray_count };
   if (runId) {
     const run = await em.findOne(RatingRun, {
@@ -58,10 +60,10 @@ export async function readingBasis(em: EntityManager, columnId: string, runId: s
       methods: s.methods,
     };
   }
-  const rows = (await em.query(
+  const rows = await em.query<SectionRow[]>(
     `SELECT name, first_tray, last_tray, geometry FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`,
     [columnId],
-  )) as SectionRow[];
+  );
   const sections: StudySection[] = rows.map((r) => ({
     ...r.geometry,
     name: r.name,

@@ -44,18 +44,18 @@ export async function loadPlanParts(
   columnId: string,
   body: CreateHeatPlanBody,
 ): Promise<PlanParts> {
-  const [column] = (await db.query(`SELECT id, tag, numbering FROM columns WHERE id = $1`, [columnId])) as PlanParts['column'][];
-  const sections = (await db.query(
+  const [column] = await db.query<PlanParts['column'][]>(`SELECT id, tag, numbering FROM columns WHERE id = $1`, [columnId]);
+  const sections = await db.query<PlanParts['sections']>(
     `SELECT name, first_tray AS "firstTray", last_tray AS "lastTray", geometry FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`,
     [columnId],
-  )) as PlanParts['sections'];
+  );
   const paIds = body.pumpArounds.map((p) => p.pumpAroundId);
-  const pas = (await db.query(
+  const pas = await db.query<PaRow[]>(
     `SELECT id, name, draw_tray AS "drawTray", return_tray AS "returnTray", base_duty_kw::float8 AS "baseDuty_kW" FROM pump_arounds WHERE column_id = $1 AND id = ANY($2::uuid[])`,
     [columnId, paIds],
-  )) as PaRow[];
+  );
   const simIds = body.simulationCaseIds ?? [];
-  const cases = (await db.query(CASE_SQL, [columnId, [body.loadCaseId, ...simIds]])) as CaseRow[];
+  const cases = await db.query<CaseRow[]>(CASE_SQL, [columnId, [body.loadCaseId, ...simIds]]);
   const errors: ErrorDetail[] = [];
   const base = cases.find((c) => c.id === body.loadCaseId);
   if (!base) errors.push({ path: 'loadCaseId', message: 'is not a load case of this column' });

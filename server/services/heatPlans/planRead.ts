@@ -55,13 +55,13 @@ function toSummary(r: PlanRow): HeatPlanSummary {
 
 export async function listHeatPlans(ds: DataSource, user: SessionUser, columnId: string): Promise<HeatPlanSummary[]> {
   await assertColumnVisible(ds, user, columnId);
-  const rows = (await ds.query(`${SUMMARY_SQL} WHERE p.column_id = $1 ORDER BY p.created_at DESC`, [columnId])) as PlanRow[];
+  const rows = await ds.query<PlanRow[]>(`${SUMMARY_SQL} WHERE p.column_id = $1 ORDER BY p.created_at DESC`, [columnId]);
   return rows.map(toSummary);
 }
 
 /** The plan's row with review state (no results); 404 when it does not exist or its column is not visible. */
 async function visiblePlanRow(db: DataSource | EntityManager, user: SessionUser, id: string): Promise<PlanRow> {
-  const [r] = (await db.query(`${SUMMARY_SQL} WHERE p.id = $1`, [id])) as PlanRow[];
+  const [r] = await db.query<PlanRow[]>(`${SUMMARY_SQL} WHERE p.id = $1`, [id]);
   if (!r || !(await canSeeColumn(db, user, r.column_id))) throw new NotFoundError('Heat-recovery plan');
   return r;
 }

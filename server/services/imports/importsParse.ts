@@ -113,7 +113,7 @@ function cellText(v: ExcelJS.CellValue): string {
   if (typeof v === 'number' || typeof v === 'boolean') return String(v);
   if (typeof v === 'string') return v.trim();
   if (v instanceof Date) return v.toISOString();
-  if ('result' in v) return cellText((v as ExcelJS.CellFormulaValue).result as ExcelJS.CellValue);
+  if ('result' in v) return cellText((v as ExcelJS.CellFormulaValue).result);
   if ('richText' in v)
     return v.richText
       .map((r) => r.text)

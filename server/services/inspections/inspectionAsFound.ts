@@ -60,7 +60,7 @@ export function asFoundSectionGeometry(
 ): { geometry: SectionGeometry; blocked: number } {
   const pick = (xs: (number | null)[], worst: (a: number[]) => number): number | null => {
     const v = xs.filter((x): x is number => x !== null);
-    return v.length ? (combine === 'worst' ? worst(v) : (mean(v) as number)) : null;
+    return v.length ? (combine === 'worst' ? worst(v) : mean(v)) : null;
   };
   const weir =
     pick(

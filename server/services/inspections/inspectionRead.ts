@@ -39,10 +39,10 @@ export function designFor(sections: SectionRow[], tray: number): TrayDesign {
 }
 
 export async function columnSections(em: EntityManager, columnId: string): Promise<SectionRow[]> {
-  return (await em.query(
+  return await em.query<SectionRow[]>(
     `SELECT id, first_tray, last_tray, geometry FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`,
     [columnId],
-  )) as SectionRow[];
+  );
 }
 
 /** The sections' spans and pass counts, as shared/passes.ts reads them. */
@@ -71,10 +71,12 @@ export function trayRecord(t: InspectionTray, design: TrayDesign, insp: Inspecti
 async function names(em: EntityManager, ids: (string | null)[]): Promise<Map<string, string>> {
   const list = [...new Set(ids.filter((x): x is string => !!x))];
   if (!list.length) return new Map();
-  const rows = (await em.query(`SELECT id, name FROM users WHERE id = ANY($1::uuid[])`, [list])) as {
-    id: string;
-    name: string;
-  }[];
+  const rows = await em.query<
+    {
+      id: string;
+      name: string;
+    }[]
+  >(`SELECT id, name FROM users WHERE id = ANY($1::uuid[])`, [list]);
   return new Map(rows.map((r) => [r.id, r.name]));
 }
 
@@ -117,11 +119,13 @@ export function photoRecord(p: InspectionPhoto, n: Map<string, string>): PhotoRe
 }
 
 export async function toInspectionRecord(em: EntityManager, insp: Inspection): Promise<InspectionRecord> {
-  const [col] = (await em.query(`SELECT tag, engineer_id, tray_count FROM columns WHERE id = $1`, [insp.columnId])) as {
-    tag: string;
-    engineer_id: string | null;
-    tray_count: number;
-  }[];
+  const [col] = await em.query<
+    {
+      tag: string;
+      engineer_id: string | null;
+      tray_count: number;
+    }[]
+  >(`SELECT tag, engineer_id, tray_count FROM columns WHERE id = $1`, [insp.columnId]);
   const sections = await columnSections(em, insp.columnId);
   const trays = await em.find(InspectionTray, { where: { inspectionId: insp.id }, order: { tray: 'ASC', pass: 'ASC' } });
   const punch = await em.find(PunchItemEntity, { where: { inspectionId: insp.id }, order: { itemNo: 'ASC' } });

@@ -77,7 +77,7 @@ export async function getInspection(ds: DataSource, user: SessionUser, id: strin
 
 export async function listInspections(ds: DataSource, user: SessionUser, columnId?: string): Promise<InspectionSummary[]> {
   const f = siteFilterSql(user, 'u.site_id', columnId ? 2 : 1);
-  const rows = (await ds.query(
+  const rows = await ds.query<Record<string, unknown>[]>(
     `SELECT i.id, i.column_id, c.tag, i.turnaround, to_char(i.start_date, 'YYYY-MM-DD') AS start_date,
             to_char(i.end_date, 'YYYY-MM-DD') AS end_date, i.inspector_id, us.name AS inspector_name, i.status,
             i.version, i.updated_at,
@@ -88,7 +88,7 @@ export async function listInspections(ds: DataSource, user: SessionUser, columnI
       WHERE ${columnId ? 'i.column_id = $1 AND ' : ''}${f.sql}
       ORDER BY i.start_date DESC, i.created_at DESC LIMIT 500`,
     [...(columnId ? [columnId] : []), ...f.params],
-  )) as Record<string, unknown>[];
+  );
   return rows.map((r) => ({
     id: r.id as string,
     columnId: r.column_id as string,
@@ -151,7 +151,7 @@ export async function saveTray(
   return ds.transaction(async (em) => {
     const insp = await visibleInspection(em, user, id, true);
     assertDraft(insp);
-    const [col] = (await em.query(`SELECT tray_count FROM columns WHERE id = $1`, [insp.columnId])) as { tray_count: number }[];
+    const [col] = await em.query<{ tray_count: number }[]>(`SELECT tray_count FROM columns WHERE id = $1`, [insp.columnId]);
     const bad = trayOutOfRange(tray, col?.tray_count ?? 0);
     if (bad) throw new ValidationError('Invalid tray', [{ path: 'tray', message: bad }]);
     await assertPass(em, insp.columnId, tray, pass);

@@ -161,7 +161,7 @@ function trayTable(run: RunRecord, sys: SessionUser['unitSystem']): Content[] {
     keys.length
       ? {
           ol: keys.map((k) => {
-            const trays = [...new Set(notes.get(k)!)];
+            const trays = [...new Set(notes.get(k))];
             const first = example.get(k)!;
             const rest = first.slice(warningHead(first).length + 1).trim();
             if (trays.length === 1) return `Tray ${trays[0]}: ${first}`;

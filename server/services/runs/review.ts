@@ -44,11 +44,11 @@ async function notify(em: EntityManager, run: RatingRun, action: Action, user: S
 
 /** Write only the mutable columns (TypeORM's save() would diff the large snapshot and results); bumps the version. */
 async function saveReviewState(em: EntityManager, run: RatingRun): Promise<RatingRun> {
-  const rows = (await em.query(
+  const rows = await em.query<[{ version: number; updated_at: Date }[], number]>(
     `UPDATE rating_runs SET label = $2, status = $3, reviews = $4, review_comment = $5, reviewer_id = $6, version = version + 1,
        updated_at = now() WHERE id = $1 RETURNING version, updated_at`,
     [run.id, run.label, run.status, JSON.stringify(run.reviews), run.reviewComment, run.reviewerId],
-  )) as [{ version: number; updated_at: Date }[], number];
+  );
   const row = rows[0][0]!;
   run.version = row.version;
   run.updatedAt = row.updated_at;

@@ -80,10 +80,10 @@ const fromRow = (r: SummaryRow): RunSummary => ({
 
 /** The column page's runs: ratings only (runs of ratings as found are listed from their inspection). */
 export async function listRunSummaries(em: EntityManager, columnId: string): Promise<RunSummary[]> {
-  const rows = (await em.query(
+  const rows = await em.query<SummaryRow[]>(
     `${SUMMARY_SQL} WHERE r.column_id = $1 AND r.kind = 'rating' ORDER BY r.created_at DESC LIMIT 200`,
     [columnId],
-  )) as SummaryRow[];
+  );
   return rows.map(fromRow);
 }
 
@@ -115,16 +115,16 @@ export async function listRuns(
   const dir = q.descending ? 'DESC' : 'ASC';
   const order = `${ORDER_OF[q.sortBy]} ${dir} NULLS LAST, r.created_at DESC, r.id`;
   const page = [...params, q.pageSize, (q.page - 1) * q.pageSize];
-  const rows = (await ds.query(
+  const rows = await ds.query<SummaryRow[]>(
     `SELECT * FROM (${SUMMARY_SQL.replace('SELECT r.id,', 'SELECT count(*) OVER () AS total, r.id,')}
        JOIN columns c ON c.id = r.column_id JOIN process_units u ON u.id = c.unit_id
       WHERE ${where} ORDER BY ${order} LIMIT $${page.length - 1} OFFSET $${page.length}) x`,
     page,
-  )) as SummaryRow[];
+  );
   // a page past the end has no row to carry the total: count on its own
   const total = rows[0]?.total
     ? Number(rows[0].total)
-    : Number(((await ds.query(`SELECT count(*)::int AS n FROM ${from}`, params)) as { n: number }[])[0]?.n ?? 0);
+    : Number((await ds.query<{ n: number }[]>(`SELECT count(*)::int AS n FROM ${from}`, params))[0]?.n ?? 0);
   return { items: rows.map(fromRow), total, page: q.page, pageSize: q.pageSize };
 }
 

@@ -93,7 +93,7 @@ const MAX_MEMOS_PER_INPUTS = 16;
 
 export function runInputsMemo(inputs: RunInputs, key: string): RunInputsMemo {
   let byKey = memos.get(inputs);
-  if (!byKey) memos.set(inputs, (byKey = new Map()));
+  if (!byKey) memos.set(inputs, (byKey = new Map<string, RunInputsMemo>()));
   let m = byKey.get(key);
   if (!m) {
     if (byKey.size >= MAX_MEMOS_PER_INPUTS) byKey.delete(byKey.keys().next().value as string);

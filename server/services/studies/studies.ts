@@ -154,19 +154,21 @@ function toSummary(r: StudyRow): StudySummary {
 
 export async function listStudies(ds: DataSource, user: SessionUser, columnId: string): Promise<StudySummary[]> {
   await assertColumnVisible(ds, user, columnId);
-  const rows = (await ds.query(`${SUMMARY_SQL} WHERE s.column_id = $1 ORDER BY s.created_at DESC`, [columnId])) as StudyRow[];
+  const rows = await ds.query<StudyRow[]>(`${SUMMARY_SQL} WHERE s.column_id = $1 ORDER BY s.created_at DESC`, [columnId]);
   return rows.map(toSummary);
 }
 
 /** The study with its snapshot and result; 404 when it does not exist or its column is not visible. */
 export async function getStudy(db: DataSource | EntityManager, user: SessionUser, id: string): Promise<StudyRecord> {
-  const rows = (await db.query(`${SUMMARY_SQL} WHERE s.id = $1`, [id])) as StudyRow[];
+  const rows = await db.query<StudyRow[]>(`${SUMMARY_SQL} WHERE s.id = $1`, [id]);
   const r = rows[0];
   if (!r || !(await canSeeColumn(db, user, r.column_id))) throw new NotFoundError('Study');
-  const [full] = (await db.query(`SELECT inputs, results FROM pump_around_studies WHERE id = $1`, [id])) as {
-    inputs: StudyRecord['inputs'];
-    results: StudyRecord['result'];
-  }[];
+  const [full] = await db.query<
+    {
+      inputs: StudyRecord['inputs'];
+      results: StudyRecord['result'];
+    }[]
+  >(`SELECT inputs, results FROM pump_around_studies WHERE id = $1`, [id]);
   return {
     ...toSummary(r),
     columnTag: r.column_tag,

@@ -25,19 +25,19 @@ export async function loadStudyParts(
   loadCaseId: string,
   pumpAroundId: string,
 ): Promise<StudyParts> {
-  const [column] = (await db.query(`SELECT id, tag, numbering FROM columns WHERE id = $1`, [columnId])) as StudyParts['column'][];
-  const sections = (await db.query(
+  const [column] = await db.query<StudyParts['column'][]>(`SELECT id, tag, numbering FROM columns WHERE id = $1`, [columnId]);
+  const sections = await db.query<StudyParts['sections']>(
     `SELECT name, first_tray AS "firstTray", last_tray AS "lastTray", geometry FROM tray_sections WHERE column_id = $1 ORDER BY first_tray`,
     [columnId],
-  )) as StudyParts['sections'];
-  const [loadCase] = (await db.query(`SELECT id, name, loads FROM load_cases WHERE id = $1 AND column_id = $2`, [
-    loadCaseId,
-    columnId,
-  ])) as StudyParts['loadCase'][];
-  const [pumpAround] = (await db.query(
+  );
+  const [loadCase] = await db.query<StudyParts['loadCase'][]>(
+    `SELECT id, name, loads FROM load_cases WHERE id = $1 AND column_id = $2`,
+    [loadCaseId, columnId],
+  );
+  const [pumpAround] = await db.query<StudyParts['pumpAround'][]>(
     `SELECT id, name, draw_tray AS "drawTray", return_tray AS "returnTray", base_duty_kw::float8 AS "baseDuty_kW" FROM pump_arounds WHERE id = $1 AND column_id = $2`,
     [pumpAroundId, columnId],
-  )) as StudyParts['pumpAround'][];
+  );
   const errors = [];
   if (!loadCase) errors.push({ path: 'loadCaseId', message: 'is not a load case of this column' });
   if (!pumpAround) errors.push({ path: 'pumpAroundId', message: 'is not a pump-around of this column' });

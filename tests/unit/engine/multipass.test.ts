@@ -217,7 +217,7 @@ describe('four-pass layout', () => {
     const s = fourPass([0.2, 0.3, 0.3, 0.2]);
     const w = operatingWindow(s, load(3), undefined, { points: 3 });
     const line = w.curves.find((c) => c.limit === 'maxWeirLoading')!;
-    const at = rateTray(s, load(3, line.liquid_kg_h[0]!));
+    const at = rateTray(s, load(3, line.liquid_kg_h[0]));
     expect(at.checks.weirLoading.value).toBeCloseTo(at.checks.weirLoading.limit, 6);
   });
 });

@@ -12,7 +12,7 @@ const table: Table = {
 };
 
 describe('CSV export neutralises formulas', () => {
-  const rows = parse(toCsv(table).toString('utf8'), { relax_column_count: true }) as string[][];
+  const rows: string[][] = parse(toCsv(table).toString('utf8'), { relax_column_count: true });
 
   it('text cells starting with = + - @ TAB or CR (and full-width forms) get a leading apostrophe', () => {
     const cells = rows.slice(2, 2 + hostile.length).map((r) => r[1]);
