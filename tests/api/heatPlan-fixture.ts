@@ -69,9 +69,9 @@ export const UPPER_PA = { name: 'Upper PA (invented)', drawTray: 5, returnTray: 
 
 /** Add UPPER_PA to a fixture column; its id. */
 export async function addUpperPumpAround(ds: DataSource, columnId: string): Promise<string> {
-  const [p] = (await ds.query(
+  const [p] = await ds.query<{ id: string }[]>(
     `INSERT INTO pump_arounds (column_id, name, draw_tray, return_tray, base_duty_kw) VALUES ($1, $2, $3, $4, $5) RETURNING id`,
     [columnId, UPPER_PA.name, UPPER_PA.drawTray, UPPER_PA.returnTray, UPPER_PA.baseDuty_kW],
-  )) as { id: string }[];
+  );
   return p!.id;
 }

@@ -232,9 +232,11 @@ describe('a plan calibrated against simulation cases', () => {
     expect(mid.fraction).toBeCloseTo(0.5, 9);
     expect(g[index([4160, 3200])]!.loads?.source).toBe('model');
     // the point's trays are the case's stored loads (vapour as stored; zone liquid plus the circulation)
-    const [stored] = (await ctx.ds.query(`SELECT loads FROM load_cases WHERE id = $1`, [fx.simulationCaseIds[0]])) as {
-      loads: { tray: number; vapourMassFlow_kg_h: number }[];
-    }[];
+    const [stored] = await ctx.ds.query<
+      {
+        loads: { tray: number; vapourMassFlow_kg_h: number }[];
+      }[]
+    >(`SELECT loads FROM load_cases WHERE id = $1`, [fx.simulationCaseIds[0]]);
     const pt = (await author.get(`/api/heat-plans/${plan.id}/points/${index([4160, 5200])}`)).body as SlimPlanPoint;
     expect(pt.loads?.source).toBe('case');
     for (const t of pt.trays)

@@ -24,7 +24,7 @@ interface Probe {
 }
 
 const one = async (sql: string): Promise<Record<string, string>[]> =>
-  (await ctx.ds.query(`${sql} LIMIT 2`)) as Record<string, string>[];
+  await ctx.ds.query<Record<string, string>[]>(`${sql} LIMIT 2`);
 
 /**
  * How to find items for each GET route that has path parameters (or reads one column's items by query).
@@ -114,19 +114,21 @@ async function visible(viewer: Viewer, p: Probe): Promise<boolean> {
   if (p.columnId) return canSeeColumn(ctx.ds, viewer, p.columnId);
   const f = siteFilterSql(viewer, 's.id', 2);
   return (
-    ((await ctx.ds.query(`SELECT 1 FROM sites s WHERE s.id = $1 AND ${f.sql}`, [p.siteId, ...f.params])) as unknown[]).length > 0
+    (await ctx.ds.query<unknown[]>(`SELECT 1 FROM sites s WHERE s.id = $1 AND ${f.sql}`, [p.siteId, ...f.params])).length > 0
   );
 }
 
 beforeAll(async () => {
   ctx = await setupApp();
-  const [emptySite] = (await ctx.ds.query(
+  const [emptySite] = await ctx.ds.query<{ id: string }[]>(
     `INSERT INTO sites (name, location) VALUES ('Isolation test site ' || gen_random_uuid(), 'nowhere') RETURNING id`,
-  )) as { id: string }[];
+  );
   const demoSites = (
-    (await ctx.ds.query(`SELECT DISTINCT u.site_id FROM columns c JOIN process_units u ON u.id = c.unit_id`)) as {
-      site_id: string;
-    }[]
+    await ctx.ds.query<
+      {
+        site_id: string;
+      }[]
+    >(`SELECT DISTINCT u.site_id FROM columns c JOIN process_units u ON u.id = c.unit_id`)
   ).map((r) => r.site_id);
   expect(demoSites.length, 'the seeded demo data has columns').toBeGreaterThan(0);
   for (const [name, role, sites] of [
@@ -200,12 +202,12 @@ describe('lists hold only what the helper lets the user see', () => {
   }
 
   it('an inspection photo of the demo site is a 404 for the outsider, before any file is read', async () => {
-    const [insp] = (await ctx.ds.query(`SELECT id FROM inspections LIMIT 1`)) as { id: string }[];
-    const [photo] = (await ctx.ds.query(
+    const [insp] = await ctx.ds.query<{ id: string }[]>(`SELECT id FROM inspections LIMIT 1`);
+    const [photo] = await ctx.ds.query<{ id: string }[]>(
       `INSERT INTO inspection_photos (inspection_id, content_type, bytes, object_key, thumb_key)
        VALUES ($1, 'image/jpeg', 1, 'isolation-test/none.jpg', 'isolation-test/none-thumb.jpg') RETURNING id`,
       [insp!.id],
-    )) as { id: string }[];
+    );
     try {
       const res = await users.outsider.agent.get(`/api/inspections/${insp!.id}/photos/${photo!.id}`);
       expect(res.status).toBe(404);

@@ -19,11 +19,11 @@ export const engineerRoleNames = (): string =>
 /** Why a user cannot be the engineer of a column on this site, or null when they can. */
 export async function engineerProblem(em: EntityManager, userId: string, siteId: string): Promise<string | null> {
   if (!UUID.test(userId)) return 'is not a user id';
-  const [u] = (await em.query(
+  const [u] = await em.query<{ name: string; role: Role; active: boolean; member: boolean }[]>(
     `SELECT u.name, u.role, u.active, ${memberSiteSql('$2::uuid', 'u.id')} AS member
        FROM users u WHERE u.id = $1`,
     [userId, siteId],
-  )) as { name: string; role: Role; active: boolean; member: boolean }[];
+  );
   if (!u) return 'no user has this id';
   if (!u.active) return `${u.name} is deactivated`;
   if (!can(u.role, COLUMN_ENGINEER_PERMISSION))

@@ -188,7 +188,7 @@ export async function evidencePdf(
 ): Promise<{ pdf: Buffer; filename: string }> {
   const rec = await getEvidence(ds, user, id);
   const reading = await readEvidence(ds, user, id, runId);
-  const [col] = (await ds.query(`SELECT tag FROM columns WHERE id = $1`, [rec.columnId])) as { tag: string }[];
+  const [col] = await ds.query<{ tag: string }[]>(`SELECT tag FROM columns WHERE id = $1`, [rec.columnId]);
   const pdf = await renderPdf(evidenceReportDoc(rec, reading, col!.tag, user.unitSystem), user.unitSystem);
   return { pdf, filename: pdfFileName('evidence', col!.tag, rec.title) };
 }

@@ -30,10 +30,10 @@ async function columnInfo(
   em: EntityManager,
   columnId: string,
 ): Promise<{ tag: string; engineerId: string | null; siteId: string }> {
-  const [c] = (await em.query(
+  const [c] = await em.query<{ tag: string; engineer_id: string | null; site_id: string }[]>(
     `SELECT c.tag, c.engineer_id, u.site_id FROM columns c JOIN process_units u ON u.id = c.unit_id WHERE c.id = $1`,
     [columnId],
-  )) as { tag: string; engineer_id: string | null; site_id: string }[];
+  );
   return { tag: c?.tag ?? '', engineerId: c?.engineer_id ?? null, siteId: c?.site_id ?? '' };
 }
 
@@ -43,10 +43,10 @@ async function engineerEmails(em: EntityManager, engineerId: string | null, site
     const e = await userEmail(em, engineerId);
     if (e) return [e];
   }
-  const rows = (await em.query(
+  const rows = await em.query<{ email: string }[]>(
     `SELECT u.email FROM users u WHERE ${memberSiteSql('$1::uuid', 'u.id')} AND u.active AND u.role = ANY($2)`,
     [siteId, rolesWith(COLUMN_ENGINEER_PERMISSION)],
-  )) as { email: string }[];
+  );
   return rows.map((r) => r.email);
 }
 
@@ -58,15 +58,17 @@ export async function signAsInspector(ds: DataSource, user: SessionUser, id: str
       throw new ForbiddenError('Only the inspector named on this inspection may sign it');
     if (insp.status !== 'draft') throw new ConflictError(`This inspection is already ${insp.status}`);
     assertVersion('inspection', insp.version, version);
-    const [trays] = (await em.query(`SELECT count(*)::int AS n FROM inspection_trays WHERE inspection_id = $1`, [id])) as {
-      n: number;
-    }[];
+    const [trays] = await em.query<
+      {
+        n: number;
+      }[]
+    >(`SELECT count(*)::int AS n FROM inspection_trays WHERE inspection_id = $1`, [id]);
     if (!trays?.n)
       throw new ConflictError('Record at least one tray before signing', [{ path: 'trays', message: 'none recorded' }]);
-    const open = (await em.query(
+    const open = await em.query<{ item_no: number }[]>(
       `SELECT item_no FROM punch_items WHERE inspection_id = $1 AND status = 'open' AND priority = 'before-box-up' ORDER BY item_no`,
       [id],
-    )) as { item_no: number }[];
+    );
     if (open.length)
       throw new ConflictError(`Close the before-box-up punch items first: ${open.map((o) => `#${o.item_no}`).join(', ')}`, [
         { path: 'punch', message: `${open.length} before-box-up item(s) open` },

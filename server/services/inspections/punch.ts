@@ -24,9 +24,10 @@ export async function addPunchItem(
     const insp = await visibleInspection(em, user, id, true);
     assertDraft(insp);
     await assertPass(em, insp.columnId, body.tray ?? null, body.pass ?? null);
-    const [m] = (await em.query(`SELECT coalesce(max(item_no), 0)::int AS n FROM punch_items WHERE inspection_id = $1`, [
-      id,
-    ])) as { n: number }[];
+    const [m] = await em.query<{ n: number }[]>(
+      `SELECT coalesce(max(item_no), 0)::int AS n FROM punch_items WHERE inspection_id = $1`,
+      [id],
+    );
     const item = await em.save(
       PunchItemEntity,
       em.create(PunchItemEntity, {
