@@ -32,9 +32,9 @@ beforeAll(async () => {
   const first = await agent.post('/api/runs').send({ columnId: fx.columnId, loadCaseId: fx.loadCaseId, label: 'Run 000' });
   expect(first.status, JSON.stringify(first.body)).toBe(201);
   const cols = (
-    (await ctx.ds.query(
+    await ctx.ds.query<{ column_name: string }[]>(
       `SELECT column_name FROM information_schema.columns WHERE table_name = 'rating_runs' AND column_name NOT IN ('id', 'label', 'created_at', 'summary')`,
-    )) as { column_name: string }[]
+    )
   ).map((c) => c.column_name);
   // run g: label 'Run ggg', g minutes older than the first, highest percent of limit 10 + g
   await ctx.ds.query(

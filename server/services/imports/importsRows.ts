@@ -109,7 +109,7 @@ export function convertRows(inp: ConvertInput): { loads: TrayLoad[]; errors: Imp
         const message = fieldFault(k, base[k]);
         if (message) rowErrors.push({ row, column: colName(f), message: message + convertedFrom(f, base[k]) });
       }
-      const density = rowErrors.length ? null : densityFault(base as Partial<TrayLoad>);
+      const density = rowErrors.length ? null : densityFault(base);
       if (density) rowErrors.push({ row, column: colName('vapourDensity'), message: density });
       if (rowErrors.length === 0) for (const tray of trays) loads.push({ tray, ...base } as unknown as TrayLoad);
     }
