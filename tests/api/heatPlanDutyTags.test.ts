@@ -112,8 +112,7 @@ describe('duty tags given on import', () => {
       });
     const cases = async () =>
       Number(
-        ((await ctx.ds.query(`SELECT count(*) AS n FROM load_cases WHERE column_id = $1`, [fx.columnId])) as { n: string }[])[0]!
-          .n,
+        (await ctx.ds.query<{ n: string }[]>(`SELECT count(*) AS n FROM load_cases WHERE column_id = $1`, [fx.columnId]))[0]!.n,
       );
     const before = await cases();
     // another column's pump-around: refused naming the field, nothing stored, the preview kept for another try

@@ -20,7 +20,7 @@ export async function dutyTagErrors(
 ): Promise<ErrorDetail[]> {
   if (!duties.length) return [];
   const own = new Set(
-    ((await em.query(`SELECT id FROM pump_arounds WHERE column_id = $1`, [columnId])) as { id: string }[]).map((r) => r.id),
+    (await em.query<{ id: string }[]>(`SELECT id FROM pump_arounds WHERE column_id = $1`, [columnId])).map((r) => r.id),
   );
   const seen = new Set<string>();
   return duties.flatMap((d, i) => {
