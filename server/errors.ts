@@ -12,6 +12,11 @@ export class DomainError extends Error {
   ) {
     super(message);
   }
+
+  /** The answer's JSON body; a subclass adds the fields its routes' contracts declare (`otherResponses`). */
+  body(): { error: string; details?: ErrorDetail[] } {
+    return this.details ? { error: this.message, details: this.details } : { error: this.message };
+  }
 }
 export class ValidationError extends DomainError {
   constructor(message: string, details?: ErrorDetail[]) {

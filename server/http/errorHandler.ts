@@ -68,7 +68,7 @@ function send(res: Response, f: HttpFault): void {
  */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof DomainError) {
-    res.status(err.status).json(err.details ? { error: err.message, details: err.details } : { error: err.message });
+    res.status(err.status).json(err.body());
     return;
   }
   const fault = uploadFault(err) ?? libraryFault(err) ?? databaseFault(err);

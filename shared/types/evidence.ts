@@ -1,11 +1,10 @@
 /**
- * Field evidence (issue 16): the request shapes come from the TypeBox schemas in shared/schemas/evidence.ts;
- * the answers are declared here. SI throughout (m, kg/m³, Pa, °C).
+ * Field evidence (issue 16): the request shapes come from the TypeBox schemas in shared/schemas/evidence.ts,
+ * the answers from the routes' contract (shared/contract/evidence.ts). SI throughout (m, kg/m³, Pa, °C).
  */
 import type { Static } from '@sinclair/typebox';
 import type * as S from '../schemas/evidence.js';
 import type { ImportRowError } from './imports.js';
-import type { GammaScanResult, PressureDropSurveyResult, TemperatureSurveyResult, TrayElevation } from './fieldEvidence.js';
 import type { StudySection } from './pumpAround.js';
 import type { MethodOptions, TrayLoad } from './rating.js';
 
@@ -22,6 +21,8 @@ export type DpSurveyData = Static<typeof S.dpSurveyDataSchema>;
 export type TemperatureReading = Static<typeof S.temperatureReadingSchema>;
 export type TemperatureSurveyData = Static<typeof S.temperatureSurveyDataSchema>;
 export type CreateEvidenceBody = Static<typeof S.createEvidenceBody>;
+/** What the route checks of a new record: the header and the kind (the service checks `data` per kind). */
+export type CreateEvidenceEnvelope = Static<typeof S.createEvidenceEnvelope>;
 export type UpdateEvidenceBody = Static<typeof S.updateEvidenceBody>;
 export type ScanImportMapping = Static<typeof S.scanImportMapping>;
 export type ScanImportUnits = Static<typeof S.scanImportUnits>;
@@ -33,36 +34,7 @@ export interface EvidenceDataByKind {
   'temperature-survey': TemperatureSurveyData;
 }
 
-/** A stored record as listed (no data). */
-export interface EvidenceSummary {
-  id: string;
-  columnId: string;
-  kind: EvidenceKind;
-  title: string;
-  takenOn: string;
-  operatingCase: string;
-  runId: string | null;
-  inspectionId: string | null;
-  inspectionTiming: InspectionTiming | null;
-  authorName: string | null;
-  /** scan lines, ΔP readings or temperature readings */
-  itemCount: number;
-  createdAt: string;
-}
-
-/** A stored record with its data; `runLabel`/`inspectionLabel` name the linked records (null when unlinked or gone). */
-export type EvidenceRecord = {
-  [K in EvidenceKind]: EvidenceSummary & {
-    kind: K;
-    data: EvidenceDataByKind[K];
-    notes: string;
-    sourceFile: string | null;
-    runLabel: string | null;
-    inspectionLabel: string | null;
-    updatedAt: string;
-    version: number;
-  };
-}[EvidenceKind];
+export type { EvidenceReading, EvidenceRecord, EvidenceSummary } from '../contract/evidence.js';
 
 /** Preview of a scan file: what was detected, the points read (SI), and every row error. */
 export interface ScanImportPreview {
@@ -92,26 +64,4 @@ export interface ReadingBasis {
   sections: StudySection[];
   loads: TrayLoad[] | null;
   methods: MethodOptions | null;
-}
-
-type Faults = { path: string; message: string }[];
-
-/**
- * A record read against the column and a rating run: a gamma scan tray by tray and line by line (against the
- * run's prediction when one is chosen), a ΔP survey against the predicted tray ΔP, a temperature survey against
- * the load case's temperatures. Where something cannot be read, `errors` says why (paths name the record's fields).
- */
-export interface EvidenceReading {
-  evidenceId: string;
-  kind: EvidenceKind;
-  runId: string | null;
-  runLabel: string | null;
-  numbering: 'top-down' | 'bottom-up';
-  trayCount: number;
-  datum: EvidenceDatum | null;
-  /** every tray deck of the sections on the evidence's scale (datum and nudge applied), top first */
-  decks: TrayElevation[];
-  lines: { label: string; result: GammaScanResult | null; errors: Faults }[];
-  pressureDrop: { result: PressureDropSurveyResult | null; errors: Faults } | null;
-  temperature: { result: TemperatureSurveyResult | null; errors: Faults } | null;
 }

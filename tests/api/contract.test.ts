@@ -45,14 +45,7 @@ const NOT_YET_CONVERTED = new Set<string>([
   'POST /columns/:id/imports',
   'POST /columns/:id/imports/check',
   'POST /columns/:id/imports/commit',
-  'GET /columns/:id/evidence',
-  'POST /columns/:id/evidence',
-  'GET /evidence/:id',
-  'GET /evidence/:id/reading',
-  'PATCH /evidence/:id',
-  'DELETE /evidence/:id',
   'POST /columns/:id/evidence/scan-imports',
-  'POST /columns/:id/evidence/scan-imports/commit',
 ]);
 
 let ctx: TestContext;
@@ -132,7 +125,10 @@ describe('every route has a contract', () => {
       expect(op, key(c)).toBeDefined();
       const success = String(c.status ?? (c.response === null ? 204 : 200));
       if (c.response !== null) expect(Object.keys(op!.responses[success]?.content ?? {}), key(c)).not.toEqual([]);
-      expect(op!.responses['400']?.content?.['application/json']?.schema, key(c)).toEqual({ $ref: '#/components/schemas/Error' });
+      const bad = c.otherResponses?.[400];
+      expect(op!.responses['400']?.content?.['application/json']?.schema, key(c)).toEqual(
+        bad ? JSON.parse(JSON.stringify(bad)) : { $ref: '#/components/schemas/Error' },
+      );
       if (c.body) expect(Object.keys(op!.requestBody?.content ?? {}), key(c)).toEqual(['application/json']);
       if (c.form) expect(Object.keys(op!.requestBody?.content ?? {}), key(c)).toEqual(['multipart/form-data']);
     }

@@ -29,7 +29,7 @@ type ReadRecords = (
 type ReadStudy = (
   base: string,
   cookie: string,
-) => Promise<{ studyPoints: number; limiting?: string | null; latentHeat?: number; answers: Answers }>;
+) => Promise<{ studyPoints: number; limiting?: string | null; latentHeat?: number; evidenceKind?: string; answers: Answers }>;
 /** tests/fixtures/typedClient/inspections.ts */
 type Inspect = (
   base: string,
@@ -132,6 +132,7 @@ describe('a client generated from the published OpenAPI document', () => {
     const study = await readStudy(base, await sessionCookie(ctx.ds, engineer));
     expect(study.studyPoints, 'a stored study (the demo seeds one) read through the typed client').toBeGreaterThan(1);
     expect(study.latentHeat).toBeCloseTo((5000 * 3600) / 60000, 6); // kW / (kg/h) → kJ/kg
+    expect(study.evidenceKind, 'a field-evidence record (the demo seeds some) read through the typed client').toBeDefined();
     r.answers.push(...study.answers);
     const { inspect } = (await import(path.join(dir, 'inspections.ts'))) as { inspect: Inspect };
     const column = await makeInspectionColumn(ctx.ds, null);

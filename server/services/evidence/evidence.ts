@@ -12,7 +12,7 @@ import { toEvidenceRecord, toEvidenceSummary } from './evidenceRead.js';
 import { EVIDENCE_DATA_SCHEMAS } from '../../../shared/schemas/evidence.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type {
-  CreateEvidenceBody,
+  CreateEvidenceEnvelope,
   EvidenceDataByKind,
   EvidenceKind,
   EvidenceRecord,
@@ -122,7 +122,7 @@ export async function insertEvidence(
   em: EntityManager,
   user: SessionUser,
   columnId: string,
-  body: CreateEvidenceBody,
+  body: CreateEvidenceEnvelope,
   sourceFile: string | null = null,
 ): Promise<FieldEvidence> {
   const col = await visibleColumn(em, user, columnId, true);
@@ -166,7 +166,7 @@ export async function createEvidence(
   ds: DataSource,
   user: SessionUser,
   columnId: string,
-  body: CreateEvidenceBody,
+  body: CreateEvidenceEnvelope,
 ): Promise<EvidenceRecord> {
   return ds.transaction(async (em) => toEvidenceRecord(em, await insertEvidence(em, user, columnId, body)));
 }

@@ -23,7 +23,7 @@ import type {
 } from '../../../shared/types/imports.js';
 import type { LoadCaseRecord } from '../../../shared/types/loads.js';
 
-/** A commit refused for row errors: the route answers 400 with the row errors (the first ones listed). */
+/** A commit refused for row errors: answered 400 with the row errors (the first ones listed) and their count. */
 export class ImportRowsError extends ValidationError {
   public readonly rowErrors: ImportRowError[];
   public readonly errorCount: number;
@@ -35,6 +35,11 @@ export class ImportRowsError extends ValidationError {
     );
     this.rowErrors = rowErrors;
     this.errorCount = all.length;
+  }
+
+  /** the first row errors and how many there are, beside the error and its details (ImportRowsErrorBodySchema) */
+  override body() {
+    return { ...super.body(), rowErrors: this.rowErrors, errorCount: this.errorCount };
   }
 }
 
