@@ -1,4 +1,4 @@
-import { createColumnBody } from '../../shared/schemas/columns';
+import { TRAY_NUMBER } from '../../shared/contract/sections';
 
 /** Choices and input rules shared by the column create and edit forms (bounds from the API schema). */
 export const NUMBERING_OPTIONS = [
@@ -6,7 +6,7 @@ export const NUMBERING_OPTIONS = [
   { label: 'Bottom-up (tray 1 at the bottom)', value: 'bottom-up' },
 ];
 
-const { minimum, maximum } = createColumnBody.properties.trayCount;
+const { minimum, maximum } = TRAY_NUMBER;
 
 export const trayCountRules = [
   (v: number | string) => (v !== '' && v !== null && Number.isFinite(Number(v))) || 'Number of trays is required',

@@ -1,6 +1,8 @@
 import { Dialog, Notify } from 'quasar';
 import { api, ApiError, describeApiError } from '../boot/api';
 import { useColumnStore } from '../stores/column-store';
+import { loadCaseContract } from '../../shared/contract/loads';
+import { sectionContract } from '../../shared/contract/sections';
 import type { TraySectionRecord } from '../../shared/types/columns';
 import type { LoadCaseSummary } from '../../shared/types/loads';
 
@@ -12,7 +14,8 @@ export interface DeleteHandlers {
 
 interface Target {
   noun: string;
-  url: string;
+  /** the DELETE route (?version=N) */
+  route: typeof sectionContract.delete | typeof loadCaseContract.delete;
   id: string;
   name: string;
   version: number;
@@ -34,7 +37,7 @@ export function useConfirmDelete() {
 
   async function remove(t: Target, on: DeleteHandlers): Promise<void> {
     try {
-      await api.del<void>(t.url, { query: { version: t.version }, quiet: true });
+      await api.call(t.route, { params: { id: t.id }, query: { version: t.version } }, { quiet: true });
       Notify.create({ type: 'positive', message: `${t.noun[0]!.toUpperCase()}${t.noun.slice(1)} “${t.name}” deleted` });
     } catch (e) {
       if (!(e instanceof ApiError)) throw e;
@@ -69,7 +72,7 @@ export function useConfirmDelete() {
     confirm(
       {
         noun: 'tray section',
-        url: `/sections/${s.id}`,
+        route: sectionContract.delete,
         id: s.id,
         name: s.name,
         version: s.version,
@@ -86,7 +89,7 @@ export function useConfirmDelete() {
     confirm(
       {
         noun: 'load case',
-        url: `/load-cases/${lc.id}`,
+        route: loadCaseContract.delete,
         id: lc.id,
         name: lc.name,
         version: lc.version,

@@ -1,19 +1,22 @@
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
 import { api, type RequestOptions } from '../boot/api';
+import { columnContract } from '../../shared/contract/columns';
+import { loadCaseContract } from '../../shared/contract/loads';
+import { pumpAroundContract, sectionContract } from '../../shared/contract/sections';
 import type {
   ColumnDetail,
   CreateColumnBody,
   PumpAroundBody,
-  PumpAroundRecord,
   SectionBody,
-  TraySectionRecord,
   UpdateColumnBody,
   UpdatePumpAroundBody,
   UpdateSectionBody,
 } from '../../shared/types/columns';
 import type { CreateLoadCaseBody, LoadCaseRecord, PutLoadsBody } from '../../shared/types/loads';
 import type { ImportCommitBody, ImportPreview } from '../../shared/types/imports';
+
+const QUIET = { quiet: true } as const;
 
 /** The open column and the calls that edit what hangs off it (sections, load cases, imports). */
 export const useColumnStore = defineStore('column', () => {
@@ -23,7 +26,7 @@ export const useColumnStore = defineStore('column', () => {
   async function load(id: string, opts?: RequestOptions): Promise<ColumnDetail> {
     loading.value = true;
     try {
-      column.value = await api.get<ColumnDetail>(`/columns/${id}`, opts);
+      column.value = await api.call(columnContract.get, { params: { id } }, opts);
       return column.value;
     } finally {
       loading.value = false;
@@ -35,28 +38,28 @@ export const useColumnStore = defineStore('column', () => {
 
   /** Administrators create columns through the plant set-up route; specialists through /columns (same body). */
   const createColumn = (body: CreateColumnBody, asAdmin: boolean) =>
-    api.post<ColumnDetail>(asAdmin ? '/admin/columns' : '/columns', body, { quiet: true });
+    api.call(asAdmin ? columnContract.adminCreate : columnContract.create, { body }, QUIET);
   async function updateColumn(id: string, body: UpdateColumnBody): Promise<ColumnDetail> {
-    column.value = await api.put<ColumnDetail>(`/columns/${id}`, body, { quiet: true });
+    column.value = await api.call(columnContract.update, { params: { id }, body }, QUIET);
     return column.value;
   }
 
   const createPumpAround = (columnId: string, body: PumpAroundBody) =>
-    api.post<PumpAroundRecord>(`/columns/${columnId}/pump-arounds`, body, { quiet: true });
+    api.call(pumpAroundContract.create, { params: { id: columnId }, body }, QUIET);
   const updatePumpAround = (id: string, body: UpdatePumpAroundBody) =>
-    api.put<PumpAroundRecord>(`/pump-arounds/${id}`, body, { quiet: true });
+    api.call(pumpAroundContract.update, { params: { id }, body }, QUIET);
   const deletePumpAround = (id: string, version: number) =>
-    api.del<void>(`/pump-arounds/${id}`, { query: { version }, quiet: true });
+    api.call(pumpAroundContract.delete, { params: { id }, query: { version } }, QUIET);
 
   const createSection = (columnId: string, body: SectionBody) =>
-    api.post<TraySectionRecord>(`/columns/${columnId}/sections`, body, { quiet: true });
+    api.call(sectionContract.create, { params: { id: columnId }, body }, QUIET);
   const updateSection = (id: string, body: UpdateSectionBody) =>
-    api.put<TraySectionRecord>(`/sections/${id}`, body, { quiet: true });
+    api.call(sectionContract.update, { params: { id }, body }, QUIET);
 
-  const loadCase = (id: string, opts?: RequestOptions) => api.get<LoadCaseRecord>(`/load-cases/${id}`, opts);
+  const loadCase = (id: string, opts?: RequestOptions) => api.call(loadCaseContract.get, { params: { id } }, opts);
   const createLoadCase = (columnId: string, body: CreateLoadCaseBody) =>
-    api.post<LoadCaseRecord>(`/columns/${columnId}/load-cases`, body, { quiet: true });
-  const putLoads = (id: string, body: PutLoadsBody) => api.put<LoadCaseRecord>(`/load-cases/${id}/loads`, body, { quiet: true });
+    api.call(loadCaseContract.create, { params: { id: columnId }, body }, QUIET);
+  const putLoads = (id: string, body: PutLoadsBody) => api.call(loadCaseContract.putLoads, { params: { id }, body }, QUIET);
 
   function previewImport(columnId: string, file: File, sheet?: string): Promise<ImportPreview> {
     const form = new FormData();

@@ -17,16 +17,16 @@ import type {
   CreateColumnBody,
   CreateSiteBody,
   CreateUnitBody,
-  SiteRecord,
+  SiteSummary,
   TrayMark,
   UnitRecord,
   UpdateColumnBody,
 } from '../../../shared/types/columns.js';
 
-const siteRecord = (s: Site): SiteRecord => ({ id: s.id, name: s.name, location: s.location, version: s.version });
+const siteRecord = (s: Site): SiteSummary => ({ id: s.id, name: s.name, location: s.location, version: s.version });
 const unitRecord = (u: ProcessUnit): UnitRecord => ({ id: u.id, siteId: u.siteId, name: u.name, version: u.version });
 
-export async function listSites(ds: DataSource, user: SessionUser): Promise<SiteRecord[]> {
+export async function listSites(ds: DataSource, user: SessionUser): Promise<SiteSummary[]> {
   const f = siteFilterSql(user, 's.id', 1);
   const rows = await ds.query<{ id: string }[]>(`SELECT s.id FROM sites s WHERE ${f.sql} ORDER BY s.name`, f.params);
   if (rows.length === 0) return [];
@@ -47,7 +47,7 @@ export async function listUnits(ds: DataSource, user: SessionUser, siteId: strin
   return units.map(unitRecord);
 }
 
-export async function createSite(ds: DataSource, user: SessionUser, body: CreateSiteBody): Promise<SiteRecord> {
+export async function createSite(ds: DataSource, user: SessionUser, body: CreateSiteBody): Promise<SiteSummary> {
   return ds.transaction(async (em) => {
     if (await em.findOneBy(Site, { name: body.name }))
       throw new ConflictError('A site with this name already exists', [{ path: 'name', message: 'is already taken' }]);
