@@ -35,6 +35,18 @@ type Inspect = (
   base: string,
   s: { inspectorCookie: string; engineerCookie: string; columnId: string; loadCaseId: string; png: Uint8Array<ArrayBuffer> },
 ) => Promise<{ failedChecks: number | null; answers: Answers }>;
+/** tests/fixtures/typedClient/plant.ts */
+type PlantTour = (
+  base: string,
+  cookie: string,
+) => Promise<{
+  numbering: string;
+  engineerId: string | null;
+  firstTrays: number[];
+  vapour?: number;
+  stalePaths?: string[];
+  answers: Answers;
+}>;
 /** tests/fixtures/typedClient/client.ts (type-checked on its own, against the generated types) */
 type Exercise = (
   base: string,
@@ -161,6 +173,15 @@ describe('a client generated from the published OpenAPI document', () => {
     // GEOMETRY's weir is 50 mm: 60 and 61 mm are both outside ±1.6 mm (PIP VEFV1102, the published set)
     expect(inspection.failedChecks).toBe(2);
     r.answers.push(...inspection.answers);
+    // a process engineer of every site: the stale load-case edit needs loads.edit
+    const { plantTour } = (await import(path.join(dir, 'plant.ts'))) as { plantTour: PlantTour };
+    const tour = await plantTour(base, await sessionCookie(ctx.ds, engineer));
+    expect(tour.answers.map((a) => a.status)).toEqual([200, 200, 200, 200, 200, 200, 200, 409]);
+    expect(['top-down', 'bottom-up']).toContain(tour.numbering);
+    expect(tour.firstTrays.length).toBeGreaterThan(0);
+    expect(tour.vapour).toBeGreaterThan(0);
+    expect(tour.stalePaths).toEqual(['version']);
+    r.answers.push(...tour.answers);
     expect(r.role).toBe('admin');
     expect(r.status).toBe('ok');
     expect(r.firstUserVersion).toBeGreaterThanOrEqual(1);
