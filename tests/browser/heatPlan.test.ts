@@ -153,7 +153,7 @@ describe('heat-recovery plan page in Chromium', () => {
     await page.waitForURL((u) => u.pathname.endsWith('/heat-plans/new') && u.searchParams.get('from') === planId);
     const top = page.locator('[data-test=plan-pa-0]');
     await top.waitFor();
-    await page.waitForFunction(() => (document.querySelector('[data-test=plan-pa-1]') as HTMLElement | null) !== null);
+    await page.waitForFunction(() => document.querySelector<HTMLElement>('[data-test=plan-pa-1]') !== null);
     // the demo plan: 20 steps, c_p 2.6 and ΔT 85 K on the top pump-around, latent heat 265 kJ/kg, margin 80 %
     expect(await top.getByLabel('Steps').inputValue()).toBe('20');
     expect(await top.getByLabel('Liquid heat capacity (kJ/(kg·K))').inputValue()).toBe('2.6');
