@@ -1,6 +1,7 @@
 import type { CheckStatus, TrayState } from '../../shared/types/rating';
 import type { ReviewStatus } from '../../shared/types/runs';
 import { quantityOfEngineUnit, type QuantityId } from '../../shared/units';
+import { palette } from '../theme/palette';
 
 export { CHECK_LABELS, CHECK_SHORT, REVIEW_LABELS, STATUS_LABELS, TRAY_STATE_LABELS } from '../../shared/labels';
 
@@ -9,7 +10,12 @@ export const statusClass = (s: CheckStatus | TrayState): string => `fl-status-${
 /** Quasar colour per status for chips and bars. */
 export const STATUS_COLORS: Record<CheckStatus, string> = { ok: 'primary', near: 'secondary', over: 'negative', na: 'grey-6' };
 /** Hex colours per status for charts (same as app.scss). */
-export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#b26a12', over: '#b3261e', na: '#8a8a8a' };
+export const STATUS_HEX: Record<CheckStatus, string> = {
+  ok: palette.primary,
+  near: palette.near,
+  over: palette.negative,
+  na: palette.muted,
+};
 
 export const REVIEW_COLORS: Record<ReviewStatus, string> = {
   draft: 'grey-7',

@@ -1,6 +1,7 @@
 import { onBeforeUnmount, shallowRef, type Ref } from 'vue';
 
 import type { PlotData, PlotLayout } from 'plotly.js-dist-min';
+import { palette } from '../theme/palette';
 
 type PlotlyModule = typeof import('plotly.js-dist-min');
 export type { PlotData, PlotLayout };
@@ -37,9 +38,9 @@ export function usePlotly(el: Ref<HTMLElement | null>) {
 }
 
 const BASE_LAYOUT = {
-  font: { family: 'Noto Sans, system-ui, sans-serif', size: 12, color: '#0f2226' },
+  font: { family: 'Noto Sans, system-ui, sans-serif', size: 12, color: palette.dark },
   paper_bgcolor: 'rgba(0,0,0,0)',
-  plot_bgcolor: '#fffdf8',
+  plot_bgcolor: palette.paper,
   margin: { l: 60, r: 20, t: 30, b: 50 },
   legend: { orientation: 'h', y: -0.2 },
 };

@@ -2,6 +2,7 @@
 import type { PlotData } from './usePlotly';
 import type { SlimStudyPoint, SlimStudyResult } from '../../shared/types/studies';
 import type { QuantityId } from '../../shared/units';
+import { palette } from '../theme/palette';
 
 export interface UnitsLike {
   show: (q: QuantityId, si: number) => number;
@@ -55,10 +56,23 @@ export function zoneShapes(r: SlimStudyResult, p: SlimStudyPoint): Record<string
       fillcolor: 'rgba(217,130,43,0.12)',
       line: { width: 0 },
       layer: 'below',
-      label: { text: 'pump-around zone', textposition: 'middle right', xanchor: 'right', font: { size: 11, color: '#8c4a2f' } },
+      label: {
+        text: 'pump-around zone',
+        textposition: 'middle right',
+        xanchor: 'right',
+        font: { size: 11, color: palette.rust },
+      },
     });
   for (const t of p.dryTrays)
-    shapes.push({ type: 'line', xref: 'paper', x0: 0, x1: 1, y0: t, y1: t, line: { color: '#b3261e', width: 2, dash: 'dot' } });
+    shapes.push({
+      type: 'line',
+      xref: 'paper',
+      x0: 0,
+      x1: 1,
+      y0: t,
+      y1: t,
+      line: { color: palette.negative, width: 2, dash: 'dot' },
+    });
   return shapes;
 }
 

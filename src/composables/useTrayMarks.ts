@@ -1,3 +1,4 @@
+import { palette } from '../theme/palette';
 /**
  * Lines drawn across the per-tray charts where a tray section ends and where a pump-around draws and
  * returns: half a tray from the tray itself, so each line sits between two trays.
@@ -39,8 +40,8 @@ export function studyMarks(input: {
 }
 
 const STYLE = {
-  section: { color: '#707a80', dash: 'dot' },
-  'pump-around': { color: '#8c4f7a', dash: 'dash' },
+  section: { color: palette.slate, dash: 'dot' },
+  'pump-around': { color: palette.plum, dash: 'dash' },
 } as const;
 
 /** Plotly shapes and labels for the marks, across the whole plot width (trays on the y axis). */
