@@ -43,8 +43,3 @@ export class ConflictError extends DomainError {
     super(409, message, details);
   }
 }
-export class PayloadTooLargeError extends DomainError {
-  constructor(message: string) {
-    super(413, message);
-  }
-}

@@ -20,15 +20,6 @@ export const SCAN_FINDING_LABELS: Record<ScanFinding, string> = {
   'high-froth': 'High froth',
 };
 
-/** What each finding may mean, in a few words (the reading never proves the cause). */
-export const SCAN_FINDING_HINTS: Record<ScanFinding, string> = {
-  normal: 'froth and clear vapour space as expected',
-  flooded: 'vapour space filled with froth',
-  'missing-tray': 'no liquid where a tray should be: missing, collapsed or dislodged tray, or a dry tray',
-  'low-liquid': 'little froth: dry, dumping or weeping tray',
-  'high-froth': 'froth well above the expected height: foaming or approach to flood',
-};
-
 /** Tray number in the column's numbering and, in brackets, counted the other way ("12 (9 from the bottom)"). */
 export function trayBothWays(tray: number, trayCount: number, numbering: 'top-down' | 'bottom-up'): string {
   const other = trayCount + 1 - tray;

@@ -3,7 +3,7 @@
  * the basis of each correlation, and sources without drafting notes. Defined once; the pages, the
  * exports, the methods list and the PDFs use them, so no internal id reaches a user.
  */
-import type { CheckName, CheckStatus, FoamingClass, JetFloodMethod, TrayState, TrayType } from './types/rating.js';
+import type { CheckName, CheckStatus, FoamingClass, TrayState, TrayType } from './types/rating.js';
 import type { GeometryProvenance } from './types/columns.js';
 import type { MethodInfo } from './types/methods.js';
 import type { ReviewStatus } from './types/runs.js';
@@ -63,8 +63,6 @@ export const REVIEW_LABELS: Record<ReviewStatus, string> = {
   approved: 'Approved',
   returned: 'Returned',
 };
-
-export const JET_FLOOD_METHOD_LABELS: Record<JetFloodMethod, string> = { fair: 'Fair', 'kister-haas': 'Kister & Haas' };
 
 /** "at most" for limits a value must stay below, "at least" for those it must reach. */
 export const SENSE_WORDS: Record<'max' | 'min', string> = { max: 'at most', min: 'at least' };

@@ -36,11 +36,6 @@ export function trayState(t: TrayLike): TrayState {
   return state;
 }
 
-/** False when the check does not apply to the tray (shown as not applicable, or left out). */
-export function checkApplies(c: Pick<CheckResult, 'status'>): boolean {
-  return c.status !== 'na';
-}
-
 /** Tray numbers as runs: [1, 2, 3, 7, 9, 10] → "1–3, 7, 9–10". */
 export function trayRuns(trays: readonly number[]): string {
   const sorted = [...trays].sort((a, b) => a - b);

@@ -182,7 +182,6 @@ export const evidenceReadingQuery = Type.Object({ runId: Type.Optional(uuid) }, 
 export const deleteEvidenceQuery = Type.Object({ version: Type.Integer({ minimum: 1 }) }, { additionalProperties: false });
 
 /** Scan import: the fields of a file column, its units, and the header of the gamma scan to store. */
-export const SCAN_IMPORT_FIELDS = ['elevation', 'density', 'countRate', 'line'] as const;
 export const scanImportMapping = Type.Object(
   {
     elevation: Type.Integer({ minimum: 0, maximum: 199 }),

@@ -3,4 +3,3 @@
  * The schemas themselves are the contracts' (shared/contract/loads.ts, runs.ts).
  */
 export { StageMapSchema as stageMapSchema } from '../contract/loads.js';
-export { ExportQuerySchema as exportQuery } from '../contract/runs.js';

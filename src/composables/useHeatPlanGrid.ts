@@ -6,16 +6,6 @@ export function gridIndex(axes: number[][], at: number[]): number {
   return at.reduce((acc, i, k) => acc * axes[k]!.length + i, 0);
 }
 
-export function gridPosition(axes: number[][], index: number): number[] {
-  const out = new Array<number>(axes.length);
-  for (let k = axes.length - 1; k >= 0; k--) {
-    const n = axes[k]!.length;
-    out[k] = index % n;
-    index = Math.floor(index / n);
-  }
-  return out;
-}
-
 /** Position of the grid node nearest to a set of duties (each axis on its own). */
 export function nearestPosition(axes: number[][], duties: number[]): number[] {
   return axes.map((ax, k) => {

@@ -78,5 +78,3 @@ export const palette = {
   diagramLoop: '#1565c0',
   diagramInk: '#263238',
 } as const;
-
-export type PaletteColour = keyof typeof palette;
