@@ -1,18 +1,15 @@
 import multer from 'multer';
 import { config } from '../config.js';
-import { defineRoutes, implement, type RouteDef } from '../http/route.js';
+import { implement } from '../http/route.js';
 import { createEvidence, deleteEvidence, getEvidence, listEvidence, updateEvidence } from '../services/evidence/evidence.js';
 import { evidencePdf } from '../services/evidence/evidencePdf.js';
 import { readEvidence } from '../services/evidence/evidenceReading.js';
 import { commitScanImport, previewScanImport } from '../services/evidence/scanImport.js';
 import { evidenceContract as c } from '../../shared/contract/evidence.js';
-import { uuidParams } from '../../shared/schemas/common.js';
-import { scanImportPreviewQuery } from '../../shared/schemas/evidence.js';
 
-type Id = { id: string };
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: config.importMaxBytes, files: 1 } });
 
-export const evidenceRoutes: RouteDef[] = [
+export const evidenceRoutes = [
   implement(c.list)({
     handler: async ({ ds, user, params, query }) => ({ items: await listEvidence(ds, user, params.id, query.kind) }),
   }),
@@ -25,20 +22,10 @@ export const evidenceRoutes: RouteDef[] = [
       await deleteEvidence(ds, user, params.id, query.version);
     },
   }),
-  ...defineRoutes([
-    {
-      method: 'post',
-      path: '/columns/:id/evidence/scan-imports',
-      access: 'evidence.record',
-      summary:
-        'Upload a gamma scan (multipart field "file", CSV or XLSX; ?sheet=) and get a preview: columns, units, points, row errors',
-      params: uuidParams,
-      query: scanImportPreviewQuery,
-      before: [upload.single('file')],
-      handler: async ({ ds, user, params, query, req }) =>
-        previewScanImport(ds, user, (params as Id).id, req.file, (query as { sheet?: string }).sheet),
-    },
-  ]),
+  implement(c.scanPreview)({
+    before: [upload.single('file')],
+    handler: async ({ ds, user, params, query, files }) => previewScanImport(ds, user, params.id, files.file, query.sheet),
+  }),
   implement(c.scanCommit)({
     handler: async ({ ds, user, params, body }) => commitScanImport(ds, user, params.id, body),
   }),

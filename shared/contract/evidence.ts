@@ -11,6 +11,11 @@ import {
   gammaScanDataSchema,
   INSPECTION_TIMINGS,
   scanImportCommitBody,
+  scanImportMapping,
+  scanImportPreviewQuery,
+  scanImportUnits,
+  scanPointSchema,
+  SCAN_MEASURES,
   temperatureSurveyDataSchema,
   updateEvidenceBody,
 } from '../schemas/evidence.js';
@@ -20,6 +25,7 @@ import {
   temperatureSurveyResultSchema,
   trayElevationSchema,
 } from '../schemas/fieldEvidence.js';
+import { ImportFileForm, previewFields } from './imports.js';
 import { ImportRowsErrorBodySchema } from './importRows.js';
 import { fileAnswer, route } from './route.js';
 import { ErrorDetail, IdParams, ItemsOf, Nullable, Obj, StringEnum, Timestamp, Uuid } from './schema.js';
@@ -89,6 +95,16 @@ export const EvidenceReadingSchema = Obj({
 });
 export type EvidenceReading = Static<typeof EvidenceReadingSchema>;
 
+/** Preview of a scan file: what was detected, the points read (SI), and every row error. */
+export const ScanImportPreviewSchema = Obj({
+  ...previewFields,
+  mapping: scanImportMapping,
+  units: scanImportUnits,
+  /** the lines found (one when the file has no line column), each with its points in SI */
+  lines: Type.Array(Obj({ label: Type.String(), measure: StringEnum(SCAN_MEASURES), points: Type.Array(scanPointSchema) })),
+});
+export type ScanImportPreview = Static<typeof ScanImportPreviewSchema>;
+
 export const evidenceContract = {
   list: route({
     method: 'get',
@@ -145,6 +161,17 @@ export const evidenceContract = {
     query: deleteEvidenceQuery,
     status: 204,
     response: null,
+  }),
+  scanPreview: route({
+    method: 'post',
+    path: '/columns/:id/evidence/scan-imports',
+    access: 'evidence.record',
+    summary:
+      'Upload a gamma scan (multipart field "file", CSV or XLSX; ?sheet=) and get a preview: columns, units, points, row errors',
+    params: IdParams,
+    query: scanImportPreviewQuery,
+    form: ImportFileForm,
+    response: ScanImportPreviewSchema,
   }),
   scanCommit: route({
     method: 'post',

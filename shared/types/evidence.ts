@@ -4,7 +4,6 @@
  */
 import type { Static } from '@sinclair/typebox';
 import type * as S from '../schemas/evidence.js';
-import type { ImportRowError } from './imports.js';
 import type { StudySection } from './pumpAround.js';
 import type { MethodOptions, TrayLoad } from './rating.js';
 
@@ -34,26 +33,7 @@ export interface EvidenceDataByKind {
   'temperature-survey': TemperatureSurveyData;
 }
 
-export type { EvidenceReading, EvidenceRecord, EvidenceSummary } from '../contract/evidence.js';
-
-/** Preview of a scan file: what was detected, the points read (SI), and every row error. */
-export interface ScanImportPreview {
-  token: string;
-  fileName: string;
-  format: 'csv' | 'xlsx';
-  sheet: string | null;
-  headerRow: number;
-  headers: string[];
-  rowCount: number;
-  cutAfterRow: number | null;
-  mapping: ScanImportMapping;
-  units: ScanImportUnits;
-  /** the lines found (one when the file has no line column), each with its points in SI */
-  lines: { label: string; measure: ScanMeasure; points: ScanPoint[] }[];
-  errors: ImportRowError[];
-  errorCount: number;
-  notes: string[];
-}
+export type { EvidenceReading, EvidenceRecord, EvidenceSummary, ScanImportPreview } from '../contract/evidence.js';
 
 /** What a reading is made from: the column's (or the chosen run's) sections and, with a run, its loads. */
 export interface ReadingBasis {

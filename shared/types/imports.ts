@@ -4,7 +4,6 @@
  */
 import type { TrayNumbering } from './columns.js';
 import type { LoadBasis, PumpAroundDutyTag, StageMapEntry } from './loads.js';
-import type { TrayLoad } from './rating.js';
 
 /** Fields an import column can map to. */
 export const IMPORT_FIELDS = [
@@ -56,41 +55,8 @@ export interface ImportNumbering {
   stageMap?: StageMapEntry[];
 }
 
-export interface ImportRowError {
-  /** 1-based row number in the file (as a spreadsheet shows it) */
-  row: number;
-  /** header text of the file column, or the field name when the column is missing */
-  column: string;
-  message: string;
-}
-
-export interface ImportPreview {
-  /** pass back to check and commit instead of re-sending the rows; valid for 30 minutes, same user and column */
-  token: string;
-  fileName: string;
-  format: 'csv' | 'xlsx';
-  sheet: string | null;
-  /** 1-based row of the detected header */
-  headerRow: number;
-  headers: string[];
-  /** the first data rows as read (cells as text, long ones clipped), after the header: IMPORT_LIMITS.previewRows */
-  rows: string[][];
-  /** data rows read (the token keeps them all) */
-  rowCount: number;
-  /** set when the file was cut at the row limit: the last row read (the file continues after it) */
-  cutAfterRow: number | null;
-  mapping: ImportMapping;
-  units: ImportUnits;
-  numbering: ImportNumbering;
-  /** loads converted to SI with stored tray numbers (rows with errors left out) */
-  loads: TrayLoad[];
-  /** the first row errors (IMPORT_LIMITS.listedErrors) */
-  errors: ImportRowError[];
-  /** how many row errors there are */
-  errorCount: number;
-  /** notes on reading and detection (rows cut, unmapped columns, assumed units, guessed direction) */
-  notes: string[];
-}
+export type { ImportCheckResult, ImportPreview } from '../contract/imports.js';
+export type { ImportRowError } from '../contract/importRows.js';
 
 /** POST /columns/:id/imports/commit */
 export interface ImportCommitBody {
@@ -113,10 +79,3 @@ export interface ImportCommitBody {
 
 /** POST /columns/:id/imports/check: the commit body without name, basis, file name, notes and duty tags; stores nothing. */
 export type ImportCheckBody = Omit<ImportCommitBody, 'name' | 'basis' | 'fileName' | 'notes' | 'pumpAroundDuties'>;
-
-/** Answer of the check: the converted loads (SI, stored tray numbers), the first row errors and their count. */
-export interface ImportCheckResult {
-  loads: TrayLoad[];
-  errors: ImportRowError[];
-  errorCount: number;
-}

@@ -2,15 +2,9 @@ import { computed, ref, watch, type Ref } from 'vue';
 import { api, ApiError, describeApiError } from '../boot/api';
 import { useColumnStore } from '../stores/column-store';
 import { stageMapErrors } from '../../shared/stageMap';
-import type {
-  ImportCheckResult,
-  ImportMapping,
-  ImportNumbering,
-  ImportPreview,
-  ImportRowError,
-  ImportUnits,
-} from '../../shared/types/imports';
+import type { ImportMapping, ImportNumbering, ImportPreview, ImportRowError, ImportUnits } from '../../shared/types/imports';
 import type { TrayLoad } from '../../shared/types/rating';
+import { importContract } from '../../shared/contract/imports';
 
 export interface ImportChoices {
   mapping: ImportMapping;
@@ -72,9 +66,9 @@ export function useImportCheck(
     }
     checking.value = true;
     try {
-      const r = await api.post<ImportCheckResult>(
-        `/columns/${columnId}/imports/check`,
-        { token: p.token, ...c },
+      const r = await api.call(
+        importContract.check,
+        { params: { id: columnId }, body: { token: p.token, ...c } },
         { quiet: true },
       );
       if (n !== seq) return;

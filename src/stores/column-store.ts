@@ -13,8 +13,9 @@ import type {
   UpdatePumpAroundBody,
   UpdateSectionBody,
 } from '../../shared/types/columns';
-import type { CreateLoadCaseBody, LoadCaseRecord, PutLoadsBody } from '../../shared/types/loads';
-import type { ImportCommitBody, ImportPreview } from '../../shared/types/imports';
+import type { CreateLoadCaseBody, PutLoadsBody } from '../../shared/types/loads';
+import type { ImportCommitBody } from '../../shared/types/imports';
+import { importContract } from '../../shared/contract/imports';
 
 const QUIET = { quiet: true } as const;
 
@@ -61,13 +62,10 @@ export const useColumnStore = defineStore('column', () => {
     api.call(loadCaseContract.create, { params: { id: columnId }, body }, QUIET);
   const putLoads = (id: string, body: PutLoadsBody) => api.call(loadCaseContract.putLoads, { params: { id }, body }, QUIET);
 
-  function previewImport(columnId: string, file: File, sheet?: string): Promise<ImportPreview> {
-    const form = new FormData();
-    form.append('file', file);
-    return api.post<ImportPreview>(`/columns/${columnId}/imports`, form, { quiet: true, query: { sheet } });
-  }
+  const previewImport = (columnId: string, file: File, sheet?: string) =>
+    api.call(importContract.preview, { params: { id: columnId }, query: { sheet }, form: { file } }, { quiet: true });
   const commitImport = (columnId: string, body: ImportCommitBody) =>
-    api.post<LoadCaseRecord>(`/columns/${columnId}/imports/commit`, body, { quiet: true });
+    api.call(importContract.commit, { params: { id: columnId }, body }, { quiet: true });
 
   return {
     column,
