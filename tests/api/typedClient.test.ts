@@ -30,6 +30,12 @@ type ReadStudy = (
   base: string,
   cookie: string,
 ) => Promise<{ studyPoints: number; limiting?: string | null; latentHeat?: number; evidenceKind?: string; answers: Answers }>;
+type CheckImport = (
+  base: string,
+  cookie: string,
+  columnId: string,
+  csv: string,
+) => Promise<{ trays: number[]; previewTrays?: number[]; answers: Answers }>;
 /** tests/fixtures/typedClient/inspections.ts */
 type Inspect = (
   base: string,
@@ -131,9 +137,10 @@ describe('a client generated from the published OpenAPI document', () => {
     const runs = await rateAgain(base, engineer.email, TEST_PASSWORD);
     expect(runs.map((a) => a.status)).toEqual([200, 201, 200]);
     r.answers.push(...runs);
-    const { readRecords, readStudy } = (await import(path.join(dir, 'records.ts'))) as {
+    const { readRecords, readStudy, checkImport } = (await import(path.join(dir, 'records.ts'))) as {
       readRecords: ReadRecords;
       readStudy: ReadStudy;
+      checkImport: CheckImport;
     };
     const records = await readRecords(base, await sessionCookie(ctx.ds, admin));
     expect(records.answers.map((a) => a.status)).toEqual([200, 200]);
@@ -146,6 +153,22 @@ describe('a client generated from the published OpenAPI document', () => {
     expect(study.latentHeat).toBeCloseTo((5000 * 3600) / 60000, 6); // kW / (kg/h) → kJ/kg
     expect(study.evidenceKind, 'a field-evidence record (the demo seeds some) read through the typed client').toBeDefined();
     r.answers.push(...study.answers);
+    const csv = [
+      'Tray,Vapour flow (kg/h),Liquid flow (kg/h),Vapour density (kg/m3),Liquid density (kg/m3),Surface tension (mN/m)',
+    ]
+      .concat(['1,40000,60000,3.1,720,18', '2,40500,60500,3.1,719,18', '3,41000,61000,3.0,718,17.8'])
+      .join('\n');
+    // the oldest column (the demo's): other test files add and remove columns of their own meanwhile
+    const columnId = (await ctx.ds.query('SELECT id, tray_count FROM columns ORDER BY created_at, tag LIMIT 1')) as {
+      id: string;
+      tray_count: number;
+    }[];
+    const imported = await checkImport(base, await sessionCookie(ctx.ds, engineer), columnId[0]!.id, csv);
+    expect(imported.answers.map((a) => a.status)).toEqual([200, 200]);
+    // the check reverses the numbering: tray t becomes trayCount + 1 - t
+    const n = columnId[0]!.tray_count;
+    expect(imported.trays.sort((a, b) => a - b)).toEqual(imported.previewTrays!.map((t) => n + 1 - t).sort((a, b) => a - b));
+    r.answers.push(...imported.answers);
     const { inspect } = (await import(path.join(dir, 'inspections.ts'))) as { inspect: Inspect };
     const column = await makeInspectionColumn(ctx.ds, null);
     const inspector = await makeUser(ctx.ds, 'inspector', [column.siteId]);
