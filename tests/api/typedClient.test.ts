@@ -159,10 +159,9 @@ describe('a client generated from the published OpenAPI document', () => {
       .concat(['1,40000,60000,3.1,720,18', '2,40500,60500,3.1,719,18', '3,41000,61000,3.0,718,17.8'])
       .join('\n');
     // the oldest column (the demo's): other test files add and remove columns of their own meanwhile
-    const columnId = (await ctx.ds.query('SELECT id, tray_count FROM columns ORDER BY created_at, tag LIMIT 1')) as {
-      id: string;
-      tray_count: number;
-    }[];
+    const columnId = await ctx.ds.query<{ id: string; tray_count: number }[]>(
+      'SELECT id, tray_count FROM columns ORDER BY created_at, tag LIMIT 1',
+    );
     const imported = await checkImport(base, await sessionCookie(ctx.ds, engineer), columnId[0]!.id, csv);
     expect(imported.answers.map((a) => a.status)).toEqual([200, 200]);
     // the check reverses the numbering: tray t becomes trayCount + 1 - t
