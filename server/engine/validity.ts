@@ -28,10 +28,17 @@ export const WARNING_CODES = {
   passLayoutMismatch: 'pass-layout-mismatch',
 } as const;
 
+/** Three significant figures for messages; exponent form outside 0.001–10,000 (toPrecision only where rounding is close to a tie). */
 export function formatNumber(x: number): string {
   if (x === 0) return '0';
   const a = Math.abs(x);
-  return a >= 1e4 || a < 1e-3 ? x.toExponential(2) : String(Number(x.toPrecision(3)));
+  if (a >= 1e4 || a < 1e-3) return x.toExponential(2);
+  // scaled rounding is cheaper than toPrecision (warnings are built on hot paths); near a tie it defers to it
+  const e = Math.floor(Math.log10(a));
+  const step = 10 ** Math.abs(e - 2); // an exact integer power of ten
+  const scaled = e >= 2 ? x / step : x * step;
+  if (Math.abs(Math.abs(scaled % 1) - 0.5) < 1e-6) return String(Number(x.toPrecision(3)));
+  return String(e >= 2 ? Math.round(scaled) * step : Math.round(scaled) / step);
 }
 
 /** True when value lies in [min, max] of the method's range for `input` (or no range is stored). */
