@@ -1,23 +1,20 @@
 /**
- * Contracts of the tray-profile import (CSV/XLSX): upload → preview → check → commit. The request schemas are
- * the JSON schemas of shared/schemas/imports.ts, typed by the payload types of shared/types/imports.ts.
+ * Contracts of the tray-profile import (CSV/XLSX): upload → preview → check → commit. The request payloads are
+ * declared in shared/contract/importPayloads.ts.
  */
 import { Type, type Static } from '@sinclair/typebox';
 import {
-  importCheckBody,
-  importCommitBody,
-  importMappingSchema,
-  importNumberingSchema,
-  importUnitsSchema,
-} from '../schemas/imports.js';
-import type { ImportCheckBody, ImportCommitBody, ImportMapping, ImportNumbering, ImportUnits } from '../types/imports.js';
+  ImportCheckBodySchema,
+  ImportCommitBodySchema,
+  ImportMappingSchema,
+  ImportNumberingSchema,
+  ImportUnitsSchema,
+} from './importPayloads.js';
 import { TrayLoadSchema } from './rating.js';
 import { ImportRowErrorSchema, ImportRowsErrorBodySchema } from './importRows.js';
 import { LoadCaseRecordSchema } from './loads.js';
 import { route, type RouteContract } from './route.js';
 import { FilePart, IdParams, Nullable, Obj, StringEnum } from './schema.js';
-
-const json = <T>(schema: object) => Type.Unsafe<T>(schema);
 
 /** The uploaded file: one part named "file", CSV or XLSX (size limit IMPORT_MAX_BYTES). */
 export const ImportFileForm = Obj({ file: FilePart({ description: 'CSV or XLSX' }) });
@@ -46,17 +43,13 @@ export const previewFields = {
   notes: Type.Array(Type.String()),
 };
 
-const MappingSchema = json<ImportMapping>(importMappingSchema);
-const UnitsSchema = json<ImportUnits>(importUnitsSchema);
-const NumberingSchema = json<ImportNumbering>(importNumberingSchema);
-
 export const ImportPreviewSchema = Obj({
   ...previewFields,
   /** the first data rows as read (cells as text, long ones clipped), after the header: IMPORT_LIMITS.previewRows */
   rows: Type.Array(Type.Array(Type.String())),
-  mapping: MappingSchema,
-  units: UnitsSchema,
-  numbering: NumberingSchema,
+  mapping: ImportMappingSchema,
+  units: ImportUnitsSchema,
+  numbering: ImportNumberingSchema,
   /** loads converted to SI with stored tray numbers (rows with errors left out) */
   loads: Type.Array(TrayLoadSchema),
 });
@@ -89,7 +82,7 @@ export const importContract = {
     summary:
       'Re-check the previewed rows with a changed mapping, units or numbering: converted loads and every row error; stores nothing',
     params: IdParams,
-    body: json<ImportCheckBody>(importCheckBody),
+    body: ImportCheckBodySchema,
     response: ImportCheckResultSchema,
   }),
   commit: route({
@@ -99,7 +92,7 @@ export const importContract = {
     summary:
       'Store the confirmed import as a new load case, all or nothing (any row error → 400 with the first rowErrors and errorCount, nothing stored)',
     params: IdParams,
-    body: json<ImportCommitBody>(importCommitBody),
+    body: ImportCommitBodySchema,
     status: 201,
     response: LoadCaseRecordSchema,
     otherResponses: { 400: ImportRowsErrorBodySchema },
