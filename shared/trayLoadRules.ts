@@ -60,6 +60,9 @@ export function densityFault(load: Partial<TrayLoad>): string | null {
 export const trayOutsideColumn = (tray: number, trayCount: number): string | null =>
   tray < 1 || tray > trayCount ? `tray ${tray} is outside the column (trays 1–${trayCount})` : null;
 
+/** A tray given a second time; `firstRow` is the 1-based row (of the grid, the file or the request's trays) that gave it first. */
+export const trayGivenTwice = (tray: number, firstRow: number): string => `tray ${tray} appears twice (also in row ${firstRow})`;
+
 /**
  * Every fault of a list of per-tray rows (fields absent where not given): each field against its bounds,
  * vapour lighter than liquid, then, across rows, the tray inside the column (when trayCount is given) and
@@ -89,8 +92,7 @@ export function trayLoadFaults(
     const outside = opts.trayCount !== undefined ? trayOutsideColumn(load.tray, opts.trayCount) : null;
     if (outside) faults.push({ index, field: 'tray', message: outside });
     const first = firstRowOf.get(load.tray);
-    if (first !== undefined)
-      faults.push({ index, field: 'tray', message: `tray ${load.tray} appears twice (also in row ${first + 1})` });
+    if (first !== undefined) faults.push({ index, field: 'tray', message: trayGivenTwice(load.tray, first + 1) });
     else firstRowOf.set(load.tray, index);
   });
   return faults;

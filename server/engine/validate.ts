@@ -5,7 +5,7 @@
 import { Ajv, type ErrorObject } from 'ajv';
 import { engineFieldError, fieldInEntry } from '../../shared/contract/fieldErrors.js';
 import { ratingRequestSchema } from '../../shared/schemas/ratingRequest.js';
-import { densityFault } from '../../shared/trayLoadRules.js';
+import { densityFault, trayGivenTwice } from '../../shared/trayLoadRules.js';
 import type { RatingRequest, SectionGeometry } from '../../shared/types/rating.js';
 
 export interface FieldError {
@@ -69,7 +69,7 @@ export function physicsErrors(req: RatingRequest): FieldError[] {
     const density = densityFault(t);
     if (density) add(`${p}/vapourDensity_kg_m3`, density);
     const first = seen.get(t.tray);
-    if (first !== undefined) add(`${p}/tray`, `tray number ${t.tray} appears twice (also at trays[${first}])`);
+    if (first !== undefined) add(`${p}/tray`, trayGivenTwice(t.tray, first + 1));
     else seen.set(t.tray, i);
   });
   return errors;

@@ -4,7 +4,7 @@
  * (shared/trayLoadRules.ts, as the grid and the loads API word them): bounds, vapour density below liquid
  * density, tray range and duplicates.
  */
-import { fieldFault, densityFault, parseLoadNumber, trayOutsideColumn } from '../../../shared/trayLoadRules.js';
+import { fieldFault, densityFault, parseLoadNumber, trayGivenTwice, trayOutsideColumn } from '../../../shared/trayLoadRules.js';
 import { toSI } from '../../../shared/units.js';
 import { FIELD_QUANTITY, defaultUnit } from './importsDetect.js';
 import type { TrayNumbering } from '../../../shared/types/columns.js';
@@ -96,8 +96,7 @@ export function convertRows(inp: ConvertInput): { loads: TrayLoad[]; errors: Imp
         continue;
       }
       const prev = firstRowOfTray.get(tray);
-      if (prev !== undefined)
-        rowErrors.push({ row, column: colName(key), message: `tray ${tray} appears twice (also in row ${prev})` });
+      if (prev !== undefined) rowErrors.push({ row, column: colName(key), message: trayGivenTwice(tray, prev) });
       else firstRowOfTray.set(tray, row);
     }
     if (rowErrors.length === 0) {

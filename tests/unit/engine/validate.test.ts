@@ -76,7 +76,8 @@ describe('validateRatingRequest', () => {
   it('duplicate tray numbers and missing fields are named', () => {
     const req = inventedRequest();
     req.trays[1]!.tray = 11;
-    expect(errorsOf(req)[0]).toMatchObject({ path: '/trays/1/tray' });
+    // the wording of the load grid, the loads API and the import (shared/trayLoadRules.ts)
+    expect(errorsOf(req)[0]).toEqual({ path: '/trays/1/tray', message: 'tray 11, tray: tray 11 appears twice (also in row 1)' });
     const missing = inventedRequest() as unknown as { trays: Record<string, unknown>[] };
     delete missing.trays[0]!.surfaceTension_mN_m;
     expect(errorsOf(missing)).toContainEqual({
