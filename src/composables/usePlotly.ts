@@ -1,7 +1,7 @@
 import { onBeforeUnmount, shallowRef, type Ref } from 'vue';
 
 import type { PlotData, PlotLayout } from 'plotly.js-dist-min';
-import { palette } from '../theme/palette';
+import { palette } from '../../shared/palette';
 
 type PlotlyModule = typeof import('plotly.js-dist-min');
 export type { PlotData, PlotLayout };

@@ -2,7 +2,7 @@
 import type { PlotData } from './usePlotly';
 import type { SlimStudyPoint, SlimStudyResult } from '../../shared/types/studies';
 import type { QuantityId } from '../../shared/units';
-import { palette } from '../theme/palette';
+import { palette } from '../../shared/palette';
 
 export interface UnitsLike {
   show: (q: QuantityId, si: number) => number;

@@ -1,4 +1,4 @@
-import { palette } from '../theme/palette';
+import { palette } from '../../shared/palette';
 /**
  * Lines drawn across the per-tray charts where a tray section ends and where a pump-around draws and
  * returns: half a tray from the tray itself, so each line sits between two trays.

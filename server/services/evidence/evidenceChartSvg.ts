@@ -5,6 +5,7 @@
  */
 import { niceTicks } from '../reports/reportCharts.js';
 import { SCAN_FINDING_LABELS, trayBothWaysShort } from '../../../shared/evidenceLabels.js';
+import { palette } from '../../../shared/palette.js';
 import type { EvidenceReading } from '../../../shared/types/evidence.js';
 import type { GammaScanResult } from '../../../shared/types/fieldEvidence.js';
 
@@ -36,20 +37,29 @@ export function scanChartSvg(r: EvidenceReading, res: GammaScanResult, u: ScanCh
   for (const d of r.decks) {
     const z = u.z(d.deckElevation_m);
     if (z < z0 || z > z1) continue;
-    p.push(`<line x1="${L}" y1="${Y(z)}" x2="${width - R}" y2="${Y(z)}" stroke="#8a8170" stroke-width="0.5"/>`);
+    p.push(`<line x1="${L}" y1="${Y(z)}" x2="${width - R}" y2="${Y(z)}" stroke="${palette.taupe}" stroke-width="0.5"/>`);
     // the PDF font has no arrows; the axis title says which way the second number counts
     text(L - 3, Y(z) + 2.5, trayBothWaysShort(d.tray, r.trayCount, r.numbering).replace(/[↑↓]$/u, ''), 'end', 6.5, '#444');
   }
   for (const t of res.trays.filter((x) => x.finding !== 'normal')) {
     const mid = u.z(t.deckElevation_m + t.traySpacing_mm / 2000);
-    text(width - R + 3, Y(Math.min(mid, z1)) + 2.5, `${SCAN_FINDING_LABELS[t.finding]} (T${t.tray})`, 'start', 7, '#b3261e');
+    text(
+      width - R + 3,
+      Y(Math.min(mid, z1)) + 2.5,
+      `${SCAN_FINDING_LABELS[t.finding]} (T${t.tray})`,
+      'start',
+      7,
+      palette.negative,
+    );
   }
   const th = X(u.rho(res.threshold.density_kg_m3));
-  p.push(`<line x1="${th}" y1="${T}" x2="${th}" y2="${height - B}" stroke="#d9822b" stroke-width="0.8" stroke-dasharray="4 3"/>`);
+  p.push(
+    `<line x1="${th}" y1="${T}" x2="${th}" y2="${height - B}" stroke="${palette.secondary}" stroke-width="0.8" stroke-dasharray="4 3"/>`,
+  );
   const d = res.profile.map(
     (q, i) => `${i ? 'L' : 'M'}${X(u.rho(q.density_kg_m3)).toFixed(1)} ${Y(u.z(q.elevation_m)).toFixed(1)}`,
   );
-  p.push(`<path d="${d.join(' ')}" fill="none" stroke="#0f2226" stroke-width="0.9"/>`);
+  p.push(`<path d="${d.join(' ')}" fill="none" stroke="${palette.dark}" stroke-width="0.9"/>`);
   p.push(`<line x1="${L}" y1="${T}" x2="${L}" y2="${height - B}" stroke="#555" stroke-width="0.8"/>`);
   p.push(`<line x1="${L}" y1="${height - B}" x2="${width - R}" y2="${height - B}" stroke="#555" stroke-width="0.8"/>`);
   text((L + width - R) / 2, height - 6, `Density (${u.rhoLabel}); dashed: density read at`, 'middle', 7.5, '#222');

@@ -9,13 +9,14 @@ import type { ExportFile } from './exportsFormat.js';
 import { getHeatPlan } from '../heatPlans/planRead.js';
 import { planReportData, type PlanReportData } from './heatPlanReport.js';
 import { REVIEW_LABELS } from '../../../shared/labels.js';
+import { palette } from '../../../shared/palette.js';
 import { toDisplay, unitLabel } from '../../../shared/units.js';
 import type { SessionUser, UnitSystem } from '../../../shared/types/api.js';
 import type { HeatPlanRecord } from '../../../shared/types/heatPlans.js';
 
 const th = (t: string) => ({ text: t, style: 'th' });
 const ACTION_WORDS = { submit: 'Submitted', approve: 'Approved', return: 'Returned' } as const;
-const COLOURS = ['#b3261e', '#8c4f7a', '#3c6e8f', '#a0692e', '#5c5c3d', '#2f8f9d', '#6f8f72'];
+const COLOURS = [palette.negative, palette.plum, palette.info, palette.bronze, palette.olive, palette.lagoon, palette.accent];
 
 /** Duty 1 × duty 2: the limit points by tray and check, the current operation and the suggestion. */
 function mapChart(p: HeatPlanRecord, sys: UnitSystem): Content[] {
@@ -34,14 +35,14 @@ function mapChart(p: HeatPlanRecord, sys: UnitSystem): Content[] {
   }));
   series.push({
     name: 'current operation',
-    color: '#0f2226',
+    color: palette.dark,
     kind: 'marker',
     points: [[d(r.baseDuties_kW[0]!), d(r.baseDuties_kW[1]!)]],
   });
   if (r.suggestion)
     series.push({
       name: 'suggestion',
-      color: '#d9822b',
+      color: palette.secondary,
       kind: 'marker',
       points: [[d(r.suggestion.duties_kW[0]!), d(r.suggestion.duties_kW[1]!)]],
     });

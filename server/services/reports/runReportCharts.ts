@@ -2,13 +2,22 @@
 import { chartSvg, legendSvg } from './reportCharts.js';
 import type { Content } from './pdfEngine.js';
 import { STATUS_LABELS } from '../../../shared/labels.js';
+import { STATUS_COLOURS, palette } from '../../../shared/palette.js';
 import { formatQuantity, unitLabel } from '../../../shared/units.js';
 import type { CheckStatus } from '../../../shared/types/rating.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { RunRecord, RunWindow } from '../../../shared/types/runs.js';
 
-export const STATUS_HEX: Record<CheckStatus, string> = { ok: '#16505c', near: '#b26a12', over: '#b3261e', na: '#8a8a8a' };
-const CURVE_HEX = ['#b3261e', '#e07a6f', '#8c4f7a', '#3c6e8f', '#2f8f9d', '#d9822b', '#6f8f72', '#5c5c3d'];
+const CURVE_COLOURS = [
+  palette.negative,
+  palette.rose,
+  palette.plum,
+  palette.info,
+  palette.lagoon,
+  palette.secondary,
+  palette.accent,
+  palette.olive,
+];
 
 export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser['unitSystem']): Content[] {
   const trays = run.results.trays;
@@ -22,13 +31,13 @@ export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser[
     series: [
       {
         name: 'controlling',
-        color: STATUS_HEX.ok,
+        color: STATUS_COLOURS.ok,
         kind: 'bar',
         points: trays.map((t) => [t.tray, t.checks[t.controllingCheck]?.percentOfLimit ?? 0]),
-        colors: trays.map((t) => STATUS_HEX[t.checks[t.controllingCheck]?.status ?? 'ok']),
+        colors: trays.map((t) => STATUS_COLOURS[t.checks[t.controllingCheck]?.status ?? 'ok']),
       },
     ],
-    yLines: [{ y: 100, label: 'limit', color: STATUS_HEX.over }],
+    yLines: [{ y: 100, label: 'limit', color: STATUS_COLOURS.over }],
     xLines: run.results.sections.slice(1).map((s) => ({ x: Math.min(s.firstTray, s.lastTray) - 0.5, label: s.name })),
   });
   const out: Content[] = [
@@ -41,7 +50,7 @@ export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser[
           svg: legendSvg(
             (['ok', 'near', 'over'] as CheckStatus[]).map((s) => ({
               name: `${STATUS_LABELS[s]}${s === 'near' ? ' to' : ''} the limit`,
-              color: STATUS_HEX[s],
+              color: STATUS_COLOURS[s],
             })),
             400,
           ),
@@ -62,7 +71,7 @@ export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser[
     series: [
       ...curves.map((c, i) => ({
         name: c.label,
-        color: CURVE_HEX[i % CURVE_HEX.length]!,
+        color: CURVE_COLOURS[i % CURVE_COLOURS.length]!,
         points: c.liquid_kg_h.map((x, k) => [Number(m(x)), Number(m(c.vapour_kg_h[k]!))] as [number, number]),
       })),
       {
@@ -79,7 +88,7 @@ export function runCharts(run: RunRecord, w: RunWindow | null, sys: SessionUser[
     {
       svg: legendSvg(
         [
-          ...curves.map((c, i) => ({ name: c.label, color: CURVE_HEX[i % CURVE_HEX.length]! })),
+          ...curves.map((c, i) => ({ name: c.label, color: CURVE_COLOURS[i % CURVE_COLOURS.length]! })),
           { name: `operating point of tray ${w.window.tray}`, color: '#111111' },
         ],
         620,

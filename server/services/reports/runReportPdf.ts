@@ -7,7 +7,8 @@
 import type { DataSource } from 'typeorm';
 import { ENGINE_VERSION, METHOD_METADATA, METHOD_USES } from '../../engine/index.js';
 import { RATING_CAUTIONS } from '../../routes/methods.js';
-import { STATUS_HEX, runCharts } from './runReportCharts.js';
+import { runCharts } from './runReportCharts.js';
+import { STATUS_COLOURS } from '../../../shared/palette.js';
 import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from './pdfEngine.js';
 import { getRun, runWindow } from '../runs/runsRead.js';
 import {
@@ -92,7 +93,7 @@ function sectionTable(run: RunRecord, sys: SessionUser['unitSystem'], dp: Pressu
         `${shown.value}${unit}`,
         c ? `${SENSE_WORDS[c.sense]} ${shown.limit}${unit}` : '—',
         `${formatPercentOfLimit(e.percentOfLimit)} %`,
-        { text: STATUS_LABELS[e.status], color: STATUS_HEX[e.status] },
+        { text: STATUS_LABELS[e.status], color: STATUS_COLOURS[e.status] },
       ]);
     }
   return { table: { headerRows: 1, widths: ['*', 'auto', '*', 'auto', 'auto', 'auto', 'auto', 'auto'], body }, fontSize: 7.5 };
@@ -130,10 +131,10 @@ function trayTable(run: RunRecord, sys: SessionUser['unitSystem']): Content[] {
       formatQuantity('massFlow', load.get(t.tray)?.liquidMassFlow_kg_h, sys),
       ...CHECK_NAMES.map((c) => {
         const k = t.checks[c]; // absent from runs rated before the engine had the check
-        if (!k || k.status === 'na') return { text: '—', alignment: 'right', color: STATUS_HEX.na };
+        if (!k || k.status === 'na') return { text: '—', alignment: 'right', color: STATUS_COLOURS.na };
         return {
           text: formatPercentOfLimit(k.percentOfLimit),
-          color: STATUS_HEX[k.status],
+          color: STATUS_COLOURS[k.status],
           bold: k.status === 'over',
           alignment: 'right',
         };
@@ -199,7 +200,7 @@ export function valveTable(run: RunRecord, sys: SessionUser['unitSystem']): Cont
     const state = d.holeVelocity_m_s < uA ? 'closed' : d.holeVelocity_m_s < uB ? 'partly open' : 'all open';
     body.push([
       String(t.tray),
-      { text: formatQuantity('velocity', d.holeVelocity_m_s, sys), color: STATUS_HEX[t.checks.weeping?.status ?? 'ok'] },
+      { text: formatQuantity('velocity', d.holeVelocity_m_s, sys), color: STATUS_COLOURS[t.checks.weeping?.status ?? 'ok'] },
       formatQuantity('velocity', uA, sys),
       formatQuantity('velocity', uB, sys),
       state,

@@ -7,6 +7,7 @@ import { pdfDateTime, pdfFileName, renderPdf, type Content, type PdfParts } from
 import { getStudy } from '../studies/studies.js';
 import { studyReportData, type StudyReportData } from './studyReport.js';
 import { REVIEW_LABELS } from '../../../shared/labels.js';
+import { palette } from '../../../shared/palette.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type { StudyRecord } from '../../../shared/types/studies.js';
 import type { ExportFile } from './exportsFormat.js';
@@ -32,8 +33,8 @@ function trafficChart(s: StudyRecord, d: StudyReportData): Content[] {
     xIntegers: true,
     yMin: 0,
     series: [
-      { name: 'Vapour', color: '#3c6e8f', kind: 'step', points: pts(2) },
-      { name: 'Liquid', color: '#d9822b', kind: 'step', points: pts(3) },
+      { name: 'Vapour', color: palette.info, kind: 'step', points: pts(2) },
+      { name: 'Liquid', color: palette.secondary, kind: 'step', points: pts(3) },
     ],
     xLines: [{ x: lo - 0.5, label: 'zone' }, { x: hi + 0.5, label: '' }, ...sectionBoundaries(s.inputs.input.sections)],
   });
@@ -46,8 +47,8 @@ function trafficChart(s: StudyRecord, d: StudyReportData): Content[] {
         {
           svg: legendSvg(
             [
-              { name: 'Vapour', color: '#3c6e8f' },
-              { name: 'Liquid', color: '#d9822b' },
+              { name: 'Vapour', color: palette.info },
+              { name: 'Liquid', color: palette.secondary },
             ],
             300,
           ),

@@ -1,10 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-import { palette } from '../../../src/theme/palette';
+import { palette } from '../../../shared/palette';
 
 const SCSS = 'src/css/quasar.variables.scss';
-const PALETTE = 'src/theme/palette.ts';
 const HEX = /(?<![&\w])#(?:[0-9a-f]{8}|[0-9a-f]{6}|[0-9a-f]{3,4})\b/gi;
 
 /** `$name: #hex;` lines of the SCSS variables, keyed by name. */
@@ -34,8 +33,16 @@ describe('brand colours live in quasar.variables.scss', () => {
 
   it('no other client file writes a colour as a hex literal', () => {
     const found = sourceFiles('src')
-      .filter((f) => f !== path.normalize(SCSS) && f !== path.normalize(PALETTE))
+      .filter((f) => f !== path.normalize(SCSS))
       .flatMap((f) => [...readFileSync(f, 'utf8').matchAll(HEX)].map((m) => `${f}: ${m[0]}`));
+    expect(found).toEqual([]);
+  });
+
+  it("the server (PDF charts and tables) writes none of the palette's colours as a hex literal: it imports shared/palette.ts", () => {
+    const values = new Set<string>(Object.values(palette).map((v) => v.toLowerCase()));
+    const found = sourceFiles('server').flatMap((f) =>
+      [...readFileSync(f, 'utf8').matchAll(HEX)].filter((m) => values.has(m[0].toLowerCase())).map((m) => `${f}: ${m[0]}`),
+    );
     expect(found).toEqual([]);
   });
 });

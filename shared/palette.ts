@@ -1,8 +1,11 @@
 /**
- * Colour values for code that needs them (Plotly charts, SVG attributes), named as in
- * src/css/quasar.variables.scss, where the colours are defined; tests/unit/theme/palette.test.ts keeps the two
- * equal. Style blocks use the SCSS variables ($near, $cream …) instead.
+ * Colour values for code that needs them (the client's Plotly charts and SVG attributes, the server's PDF
+ * charts and tables), named as in src/css/quasar.variables.scss, where the colours are defined;
+ * tests/unit/theme/palette.test.ts keeps the two equal. The client's style blocks use the SCSS variables
+ * ($near, $cream …) instead.
  */
+import type { CheckStatus } from './types/rating.js';
+
 export const palette = {
   // Quasar's brand colours (also CSS variables: --q-primary …)
   primary: '#16505c',
@@ -78,3 +81,11 @@ export const palette = {
   diagramLoop: '#1565c0',
   diagramInk: '#263238',
 } as const;
+
+/** The colour of a check status, as the pages show it (ok = primary, over = negative). */
+export const STATUS_COLOURS: Record<CheckStatus, string> = {
+  ok: palette.primary,
+  near: palette.near,
+  over: palette.negative,
+  na: palette.muted,
+};
