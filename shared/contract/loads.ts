@@ -5,15 +5,14 @@
  */
 import { Type, type Static } from '@sinclair/typebox';
 import { PumpAroundDutyTagSchema } from './heatPlans.js';
+import { LoadBasisSchema } from './loadBasis.js';
 import { TrayLoadSchema } from './rating.js';
 import { fileAnswer, route } from './route.js';
 import { EXPORT_TYPES, ExportQuerySchema } from './runs.js';
 import { IdParams, ItemsOf, Nullable, Obj, StringEnum, Timestamp, Uuid } from './schema.js';
 import { Name, Version, VersionQuery } from './sections.js';
 
-export const LOAD_BASES = ['normal', 'maximum', 'minimum', 'alternative-feed', 'pump-around-study', 'other'] as const;
-export const LoadBasisSchema = StringEnum(LOAD_BASES);
-export type LoadBasis = Static<typeof LoadBasisSchema>;
+export { LOAD_BASES, LoadBasisSchema, type LoadBasis } from './loadBasis.js';
 
 export const LOAD_SOURCES = ['typed', 'pasted', 'imported'] as const;
 export const LoadSourceSchema = StringEnum(LOAD_SOURCES);

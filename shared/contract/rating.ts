@@ -4,7 +4,7 @@
  * that type (`Type.Unsafe<T>`), and every API test checks real answers against it. A number the engine
  * could not make finite goes out as JSON null, so result numbers are declared `number | null` on the wire.
  */
-import { Type, type TSchema } from '@sinclair/typebox';
+import { Type, type ObjectOptions, type TSchema } from '@sinclair/typebox';
 import {
   CHECK_NAMES,
   type CheckResult,
@@ -12,7 +12,9 @@ import {
   type MethodOptions,
   type OperatingWindow,
   type SectionGeometry,
+  type CheckName,
   type SectionSummary,
+  type TrayDetails,
   type TrayLoad,
 } from '../types/rating.js';
 import { methodOptionsSchema, sectionGeometrySchema, trayLoadSchema } from '../schemas/ratingRequest.js';
@@ -20,6 +22,11 @@ import { Obj, StringEnum } from './schema.js';
 
 /** The JSON form of T, described by `schema`. */
 const Wire = <T>(schema: TSchema | object) => Type.Unsafe<T>(JSON.parse(JSON.stringify(schema)) as object);
+
+/** An object with one property per check name, each `schema` (typed by the check names). */
+export function byCheckName<T extends TSchema>(schema: T, o: ObjectOptions = {}) {
+  return Type.Object(Object.fromEntries(CHECK_NAMES.map((n) => [n, schema])) as Record<CheckName, T>, o);
+}
 
 /** A result number: JSON null when the engine could not make it finite. */
 export const ResultNumber = () => Type.Unsafe<number>({ type: ['number', 'null'] });
@@ -48,12 +55,10 @@ export const EngineWarningSchema = Wire<EngineWarning>(
 );
 
 /** Per-tray intermediate figures, by name (a tray's `details`). */
-export const TrayDetailsSchema = Type.Record(Type.String(), ResultNumber());
+export const TrayDetailsSchema = Type.Unsafe<TrayDetails>(Type.Record(Type.String(), ResultNumber()));
 
 /** A tray's checks by name: a check added since a run was stored is absent from it. */
-export const ChecksSchema = Type.Object(Object.fromEntries(CHECK_NAMES.map((n) => [n, Type.Optional(CheckResultSchema)])), {
-  additionalProperties: CheckResultSchema,
-});
+export const ChecksSchema = byCheckName(Type.Optional(CheckResultSchema), { additionalProperties: CheckResultSchema });
 
 export const SectionSummarySchema = Wire<SectionSummary>(
   Obj({

@@ -1,7 +1,8 @@
 /** Contracts of rating runs: create, list, read, compare, window, export, report and review. */
 import { Type, type Static } from '@sinclair/typebox';
-import { CHECK_NAMES } from '../types/rating.js';
+import { LoadBasisSchema } from './loadBasis.js';
 import {
+  byCheckName,
   CheckNameSchema,
   CheckStatusSchema,
   ChecksSchema,
@@ -15,6 +16,7 @@ import {
   TrayLoadSchema,
 } from './rating.js';
 import { fileAnswer, route } from './route.js';
+import { GeometryProvenanceSchema } from './sections.js';
 import { Defaulted, IdParams, Nullable, Obj, PageOf, pageFields, StringEnum, Timestamp, Uuid } from './schema.js';
 
 export const REVIEW_STATUSES = ['draft', 'submitted', 'approved', 'returned'] as const;
@@ -52,54 +54,63 @@ export const ReviewEntrySchema = Obj({
 });
 export type ReviewEntry = Static<typeof ReviewEntrySchema>;
 
-const RunSnapshotSchema = Obj({
+export const RunSnapshotSectionSchema = Obj({
+  sectionId: Uuid(),
+  name: Type.String(),
+  firstTray: Type.Integer(),
+  lastTray: Type.Integer(),
+  provenance: GeometryProvenanceSchema,
+  provenanceDate: Nullable(Type.String()),
+  geometry: SectionGeometrySchema,
+  /** true when the geometry came from a geometryOverride (as-found measurements) */
+  overridden: Type.Boolean(),
+});
+
+/** A run's immutable input: column, load case, the sections and loads rated, method options, engine version. */
+export const RunSnapshotSchema = Obj({
   column: Obj({
     id: Uuid(),
     tag: Type.String(),
     numbering: StringEnum(['top-down', 'bottom-up'] as const),
     trayCount: Type.Integer(),
   }),
-  loadCase: Obj({ id: Uuid(), name: Type.String(), basis: Type.String(), version: Type.Integer() }),
-  sections: Type.Array(
-    Obj({
-      sectionId: Uuid(),
-      name: Type.String(),
-      firstTray: Type.Integer(),
-      lastTray: Type.Integer(),
-      provenance: StringEnum(['design', 'as-left', 'as-found'] as const),
-      provenanceDate: Nullable(Type.String()),
-      geometry: SectionGeometrySchema,
-      overridden: Type.Boolean(),
-    }),
-  ),
+  loadCase: Obj({ id: Uuid(), name: Type.String(), basis: LoadBasisSchema, version: Type.Integer() }),
+  sections: Type.Array(RunSnapshotSectionSchema),
+  /** the loads that were rated (trays covered by a snapshot section), ordered by tray */
   loads: Type.Array(TrayLoadSchema),
   methods: MethodOptionsSchema,
   engineVersion: Type.String(),
 });
 
-/** section ids inside stored results are kept as stored (runs of early versions carry other ids) */
-const RunResultsSchema = Obj({
+/**
+ * A stored tray result. Its checks are those the engine computed when the run was rated: a check added
+ * since is absent from older runs (stored runs decode by name, DEVELOPERS.md "Stored runs").
+ * Section ids inside stored results are kept as stored (runs of early versions carry other ids).
+ */
+export const RunTrayResultSchema = Obj({
+  tray: Type.Integer(),
+  sectionId: Type.String(),
+  checks: ChecksSchema,
+  details: TrayDetailsSchema,
+  controllingCheck: CheckNameSchema,
+  warnings: Type.Array(EngineWarningSchema),
+});
+
+export const RunSectionResultSchema = Obj({
+  sectionId: Type.String(),
+  name: Type.String(),
+  firstTray: Type.Integer(),
+  lastTray: Type.Integer(),
+  summary: SectionSummarySchema,
+  warnings: Type.Array(EngineWarningSchema),
+});
+
+export const RunResultsSchema = Obj({
   engineVersion: Type.String(),
-  trays: Type.Array(
-    Obj({
-      tray: Type.Integer(),
-      sectionId: Type.String(),
-      checks: ChecksSchema,
-      details: TrayDetailsSchema,
-      controllingCheck: CheckNameSchema,
-      warnings: Type.Array(EngineWarningSchema),
-    }),
-  ),
-  sections: Type.Array(
-    Obj({
-      sectionId: Type.String(),
-      name: Type.String(),
-      firstTray: Type.Integer(),
-      lastTray: Type.Integer(),
-      summary: SectionSummarySchema,
-      warnings: Type.Array(EngineWarningSchema),
-    }),
-  ),
+  /** every rated tray, ordered by tray number */
+  trays: Type.Array(RunTrayResultSchema),
+  sections: Type.Array(RunSectionResultSchema),
+  /** trays with loads but no section covering them (not rated) */
   uncoveredTrays: Type.Array(Type.Integer()),
   controllingCheck: CheckNameSchema,
   controllingTray: Type.Integer(),
@@ -120,23 +131,36 @@ export const RunRecordSchema = Obj({
 export const RunWindowSchema = Obj({ runId: Uuid(), sectionId: Uuid(), load: TrayLoadSchema, window: OperatingWindowSchema });
 
 const diffNumber = () => Type.Unsafe<number | null>({ type: ['number', 'null'] });
+/** b − a in percent of limit, null when a tray is missing from one run */
 const CheckDiffSchema = Obj({ a: diffNumber(), b: diffNumber(), delta: diffNumber() });
+export const TrayDiffSchema = Obj({
+  tray: Type.Integer(),
+  controllingA: Nullable(CheckNameSchema),
+  controllingB: Nullable(CheckNameSchema),
+  controllingChanged: Type.Boolean(),
+  statusA: Nullable(CheckStatusSchema),
+  statusB: Nullable(CheckStatusSchema),
+  /** percentOfLimit of every check in both runs */
+  checks: byCheckName(CheckDiffSchema, { additionalProperties: false }),
+});
 export const RunComparisonSchema = Obj({
   a: RunSummarySchema,
   b: RunSummarySchema,
-  trays: Type.Array(
-    Obj({
-      tray: Type.Integer(),
-      controllingA: Nullable(CheckNameSchema),
-      controllingB: Nullable(CheckNameSchema),
-      controllingChanged: Type.Boolean(),
-      statusA: Nullable(CheckStatusSchema),
-      statusB: Nullable(CheckStatusSchema),
-      checks: Obj(Object.fromEntries(CHECK_NAMES.map((n) => [n, CheckDiffSchema]))),
-    }),
-  ),
+  trays: Type.Array(TrayDiffSchema),
+  /** trays whose controlling check differs between the runs */
   controllingChanged: Type.Array(Type.Integer()),
 });
+
+export type RunSnapshotSection = Static<typeof RunSnapshotSectionSchema>;
+export type RunSnapshot = Static<typeof RunSnapshotSchema>;
+export type RunTrayResult = Static<typeof RunTrayResultSchema>;
+export type RunSectionResult = Static<typeof RunSectionResultSchema>;
+export type RunResults = Static<typeof RunResultsSchema>;
+export type RunRecord = Static<typeof RunRecordSchema>;
+export type RunWindow = Static<typeof RunWindowSchema>;
+export type CheckDiff = Static<typeof CheckDiffSchema>;
+export type TrayDiff = Static<typeof TrayDiffSchema>;
+export type RunComparison = Static<typeof RunComparisonSchema>;
 
 const uuid = Uuid();
 export const CreateRunBodySchema = Obj({
