@@ -101,11 +101,5 @@ function call<C extends RouteContract>(c: C, input: NoInfer<RequestOf<C>> = {}, 
   return request<AnswerOf<C>>(c.method.toUpperCase(), url, { ...opts, ...(query ? { query } : {}), body });
 }
 
-export const api = {
-  call,
-  get: <T>(url: string, opts?: RequestOptions) => request<T>('GET', url, opts),
-  post: <T>(url: string, body?: unknown, opts?: RequestOptions) => request<T>('POST', url, { ...opts, body }),
-  put: <T>(url: string, body?: unknown, opts?: RequestOptions) => request<T>('PUT', url, { ...opts, body }),
-  patch: <T>(url: string, body?: unknown, opts?: RequestOptions) => request<T>('PATCH', url, { ...opts, body }),
-  del: <T>(url: string, opts?: RequestOptions) => request<T>('DELETE', url, opts),
-};
+/** Client requests go through route contracts only (shared/contract/): `api.call`. */
+export const api = { call };
