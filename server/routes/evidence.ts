@@ -11,7 +11,7 @@ const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: con
 
 export const evidenceRoutes = [
   implement(c.list)({
-    handler: async ({ ds, user, params, query }) => ({ items: await listEvidence(ds, user, params.id, query.kind) }),
+    handler: ({ ds, user, params, query }) => listEvidence(ds, user, params.id, query.kind),
   }),
   implement(c.create)({ handler: async ({ ds, user, params, body }) => createEvidence(ds, user, params.id, body) }),
   implement(c.get)({ handler: async ({ ds, user, params }) => getEvidence(ds, user, params.id) }),

@@ -16,7 +16,7 @@ import { inspectionContract as c } from '../../shared/contract/inspections.js';
 /** Turnaround inspections (issue 6); photos are in ./photos.ts. */
 export const inspectionRoutes = [
   implement(c.tolerances)({ handler: () => PUBLISHED_TOLERANCES }),
-  implement(c.list)({ handler: async ({ ds, user, query }) => ({ items: await listInspections(ds, user, query.columnId) }) }),
+  implement(c.list)({ handler: ({ ds, user, query }) => listInspections(ds, user, query.columnId) }),
   implement(c.create)({ handler: ({ ds, user, body }) => createInspection(ds, user, body) }),
   implement(c.get)({ handler: ({ ds, user, params }) => getInspection(ds, user, params.id) }),
   implement(c.update)({ handler: ({ ds, user, params, body }) => updateInspection(ds, user, params.id, body) }),

@@ -76,7 +76,13 @@ const summaryFields = {
 export const ColumnSummarySchema = Obj(summaryFields);
 export type ColumnSummary = Static<typeof ColumnSummarySchema>;
 
-/** GET /columns/:id: the column with its sections, pump-arounds, load cases and run summaries. */
+/** How many run summaries GET /columns/:id carries at most (the newest; runsTotal counts all). */
+export const COLUMN_RUNS_CUT = 200;
+
+/**
+ * GET /columns/:id: the column with its sections, pump-arounds, load cases and the newest COLUMN_RUNS_CUT
+ * run summaries (ratings); runsTotal is the number of its ratings in all (GET /runs pages through them).
+ */
 export const ColumnDetailSchema = Obj({
   ...summaryFields,
   trayMarks: Type.Array(TrayMarkSchema),
@@ -84,6 +90,7 @@ export const ColumnDetailSchema = Obj({
   pumpArounds: Type.Array(PumpAroundRecordSchema),
   loadCases: Type.Array(LoadCaseSummarySchema),
   runs: Type.Array(RunSummarySchema),
+  runsTotal: Type.Integer({ minimum: 0 }),
 });
 export type ColumnDetail = Static<typeof ColumnDetailSchema>;
 

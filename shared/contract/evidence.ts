@@ -28,7 +28,10 @@ import {
 import { ImportFileForm, previewFields } from './imports.js';
 import { ImportRowsErrorBodySchema } from './importRows.js';
 import { fileAnswer, route } from './route.js';
-import { ErrorDetail, IdParams, ItemsOf, Nullable, Obj, StringEnum, Timestamp, Uuid } from './schema.js';
+import { ErrorDetail, IdParams, NewestOf, Nullable, Obj, StringEnum, Timestamp, Uuid } from './schema.js';
+
+/** How many records GET /columns/:id/evidence lists at most (the newest by date taken; total counts all). */
+export const EVIDENCE_LIST_CUT = 500;
 
 const Kind = StringEnum(EVIDENCE_KINDS);
 const Numbering = StringEnum(['top-down', 'bottom-up'] as const);
@@ -110,10 +113,10 @@ export const evidenceContract = {
     method: 'get',
     path: '/columns/:id/evidence',
     access: 'read',
-    summary: 'Field evidence of a column (gamma scans, ΔP surveys, temperature surveys), newest first',
+    summary: `Field evidence of a column (gamma scans, ΔP surveys, temperature surveys): the newest ${EVIDENCE_LIST_CUT} and the total`,
     params: IdParams,
     query: evidenceListQuery,
-    response: ItemsOf(EvidenceSummarySchema),
+    response: NewestOf(EvidenceSummarySchema),
   }),
   create: route({
     method: 'post',

@@ -17,7 +17,10 @@ import {
   VoidPunchBodySchema,
 } from './inspectionPayloads.js';
 import { fileAnswer, route } from './route.js';
-import { Defaulted, FilePart, IdParams, ItemsOf, Obj, StringEnum, Uuid } from './schema.js';
+import { Defaulted, FilePart, IdParams, NewestOf, Obj, StringEnum, Uuid } from './schema.js';
+
+/** How many inspections GET /inspections lists at most (the newest by start date; total counts all). */
+export const INSPECTION_LIST_CUT = 500;
 
 export const TrayParams = Obj({
   id: Uuid(),
@@ -41,9 +44,9 @@ export const inspectionContract = {
     method: 'get',
     path: '/inspections',
     access: 'read',
-    summary: 'Inspections of the columns the user may see (optionally of one column)',
+    summary: `Inspections of the columns the user may see (optionally of one column): the newest ${INSPECTION_LIST_CUT} and the total`,
     query: Obj({ columnId: Type.Optional(Uuid()) }),
-    response: ItemsOf(InspectionSummarySchema),
+    response: NewestOf(InspectionSummarySchema),
   }),
   create: route({
     method: 'post',

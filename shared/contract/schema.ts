@@ -79,6 +79,9 @@ export const PageOf = <T extends TSchema>(item: T) =>
 /** `{ items }`: a whole (short) list. */
 export const ItemsOf = <T extends TSchema>(item: T) => Obj({ items: Type.Array(item) });
 
+/** `{ items, total }`: the newest items of a list cut at a fixed length, and how many there are in all. */
+export const NewestOf = <T extends TSchema>(item: T) => Obj({ items: Type.Array(item), total: Type.Integer({ minimum: 0 }) });
+
 /** `{ id }` path parameters. */
 export const IdParams = Obj({ id: Uuid() });
 

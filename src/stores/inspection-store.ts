@@ -26,7 +26,8 @@ export const useInspectionStore = defineStore('inspection', () => {
   const rec = shallowRef<InspectionRecord | null>(null);
   const id = () => ({ id: rec.value!.id });
 
-  const list = async (columnId?: string) => (await api.call(c.list, { query: { columnId } })).items;
+  /** the newest inspections (the server's cut) and how many there are in all */
+  const list = (columnId?: string) => api.call(c.list, { query: { columnId } });
   const create = (body: CreateInspectionBody) => api.call(c.create, { body });
   async function load(inspectionId: string, opts?: RequestOptions): Promise<void> {
     if (rec.value?.id !== inspectionId) rec.value = null; // never show another inspection under this address

@@ -27,6 +27,7 @@ describe('columns, sections and pump-arounds', () => {
       sections: [],
       loadCases: [],
       runs: [],
+      runsTotal: 0,
     });
     expect(await auditCount(res.body.id)).toBe(1);
     const dup = await agent

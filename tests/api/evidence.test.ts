@@ -97,8 +97,10 @@ describe('field evidence', () => {
       'gamma-scan',
       'temperature-survey',
     ]);
+    expect(list.body.total).toBe(3);
     const only = await viewer.get(`${url()}?kind=dp-survey`);
     expect(only.body.items).toHaveLength(1);
+    expect(only.body.total).toBe(1);
     const one = await viewer.get(`/api/evidence/${a.body.id}`);
     expect(one.body).toEqual(a.body);
   });

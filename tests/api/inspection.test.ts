@@ -212,6 +212,7 @@ describe('rating as found', () => {
     expect(design && asFound).toBeTruthy();
     expect(ids(col.body.runs)).not.toContain(design!.id);
     expect(ids(col.body.runs)).not.toContain(asFound!.id);
+    expect(col.body.runsTotal).toBe(col.body.runs.length); // ratings only
     expect((await kinds('')).every((x) => x.kind === 'rating')).toBe(true);
   });
 });

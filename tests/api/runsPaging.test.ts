@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { setupApp, signedIn, type TestContext } from '../helpers/app.js';
 import { makeInspectionColumn, type InspectionFixture } from './inspection-fixture.js';
 import type { RunSummary } from '../../shared/types/runs.js';
+import { COLUMN_RUNS_CUT, type ColumnDetail } from '../../shared/contract/columns.js';
 
 const N = 205;
 let ctx: TestContext;
@@ -79,6 +80,16 @@ describe('GET /runs pages on the server', () => {
     expect(worst.map((r) => r.maxPercentOfLimit)).toEqual([214, 213, 212]);
     const oldest = await list({ pageSize: 5, page: 41, sortBy: 'createdAt', descending: false });
     expect(oldest.items.map((r) => r.label)).toEqual(['Run 004', 'Run 003', 'Run 002', 'Run 001', 'Run 000']);
+  });
+
+  it('the column answer carries the newest 200 ratings and says how many there are in all', async () => {
+    const res = await agent.get(`/api/columns/${fx.columnId}`);
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const body = res.body as ColumnDetail;
+    expect(body.runs).toHaveLength(COLUMN_RUNS_CUT);
+    expect(body.runsTotal).toBe(N);
+    expect(body.runs[0]!.label).toBe('Run 000');
+    expect(body.runs.at(-1)!.label).toBe('Run 199');
   });
 
   it('a page size over 200 or an unknown order is refused, naming the field', async () => {

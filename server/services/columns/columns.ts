@@ -194,6 +194,6 @@ export async function getColumnDetail(ds: DataSource | EntityManager, user: Sess
     sections: await listSections(em, id),
     pumpArounds: await listPumpArounds(em, id),
     loadCases: await listLoadCaseSummaries(em, id),
-    runs: await listRunSummaries(em, id),
+    ...(await listRunSummaries(em, id)),
   };
 }

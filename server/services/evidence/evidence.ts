@@ -10,6 +10,7 @@ import { audit } from '../audit/audit.js';
 import { assertVersion, visibleChild, visibleColumn } from '../columns/columnsCommon.js';
 import { toEvidenceRecord, toEvidenceSummary } from './evidenceRead.js';
 import { EVIDENCE_DATA_SCHEMAS } from '../../../shared/schemas/evidence.js';
+import { EVIDENCE_LIST_CUT } from '../../../shared/contract/evidence.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type {
   CreateEvidenceEnvelope,
@@ -171,19 +172,20 @@ export async function createEvidence(
   return ds.transaction(async (em) => toEvidenceRecord(em, await insertEvidence(em, user, columnId, body)));
 }
 
+/** The newest EVIDENCE_LIST_CUT records of a column (of one kind if given) and how many there are in all. */
 export async function listEvidence(
   ds: DataSource,
   user: SessionUser,
   columnId: string,
   kind?: EvidenceKind,
-): Promise<EvidenceSummary[]> {
+): Promise<{ items: EvidenceSummary[]; total: number }> {
   await visibleColumn(ds.manager, user, columnId);
-  const rows = await ds.getRepository(FieldEvidence).find({
+  const [rows, total] = await ds.getRepository(FieldEvidence).findAndCount({
     where: { columnId, ...(kind ? { kind } : {}) },
     order: { takenOn: 'DESC', createdAt: 'DESC' },
-    take: 500,
+    take: EVIDENCE_LIST_CUT,
   });
-  return toEvidenceSummary(ds.manager, rows);
+  return { items: await toEvidenceSummary(ds.manager, rows), total };
 }
 
 export async function getEvidence(ds: DataSource, user: SessionUser, id: string): Promise<EvidenceRecord> {

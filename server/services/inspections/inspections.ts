@@ -9,6 +9,7 @@ import { assertVersion, iso, trayOutOfRange, visibleChild, visibleColumn } from 
 import { columnSections, sectionPasses, toInspectionRecord } from './inspectionRead.js';
 import { passFault } from '../../../shared/passes.js';
 import { measurementErrors } from '../../../shared/inspectionTolerance.js';
+import { INSPECTION_LIST_CUT } from '../../../shared/contract/inspections.js';
 import type { SessionUser } from '../../../shared/types/api.js';
 import type {
   CreateInspectionBody,
@@ -75,21 +76,27 @@ export async function getInspection(ds: DataSource, user: SessionUser, id: strin
   return toInspectionRecord(ds.manager, await visibleInspection(ds.manager, user, id));
 }
 
-export async function listInspections(ds: DataSource, user: SessionUser, columnId?: string): Promise<InspectionSummary[]> {
+/** The newest INSPECTION_LIST_CUT inspections the user may see (of one column if given) and how many there are in all. */
+export async function listInspections(
+  ds: DataSource,
+  user: SessionUser,
+  columnId?: string,
+): Promise<{ items: InspectionSummary[]; total: number }> {
   const f = siteFilterSql(user, 'u.site_id', columnId ? 2 : 1);
   const rows = await ds.query<Record<string, unknown>[]>(
     `SELECT i.id, i.column_id, c.tag, i.turnaround, to_char(i.start_date, 'YYYY-MM-DD') AS start_date,
             to_char(i.end_date, 'YYYY-MM-DD') AS end_date, i.inspector_id, us.name AS inspector_name, i.status,
             i.version, i.updated_at,
             (SELECT count(*)::int FROM inspection_trays t WHERE t.inspection_id = i.id) AS tray_count,
-            (SELECT count(*)::int FROM punch_items p WHERE p.inspection_id = i.id AND p.status = 'open') AS open_punch
+            (SELECT count(*)::int FROM punch_items p WHERE p.inspection_id = i.id AND p.status = 'open') AS open_punch,
+            count(*) OVER ()::int AS total
        FROM inspections i JOIN columns c ON c.id = i.column_id JOIN process_units u ON u.id = c.unit_id
        LEFT JOIN users us ON us.id = i.inspector_id
       WHERE ${columnId ? 'i.column_id = $1 AND ' : ''}${f.sql}
-      ORDER BY i.start_date DESC, i.created_at DESC LIMIT 500`,
+      ORDER BY i.start_date DESC, i.created_at DESC LIMIT ${INSPECTION_LIST_CUT}`,
     [...(columnId ? [columnId] : []), ...f.params],
   );
-  return rows.map((r) => ({
+  const items = rows.map((r) => ({
     id: r.id as string,
     columnId: r.column_id as string,
     columnTag: r.tag as string,
@@ -105,6 +112,7 @@ export async function listInspections(ds: DataSource, user: SessionUser, columnI
     version: r.version as number,
     updatedAt: iso(r.updated_at as Date),
   }));
+  return { items, total: (rows[0]?.total as number | undefined) ?? 0 };
 }
 
 export async function updateInspection(

@@ -9,6 +9,7 @@ import { iso, visibleChild } from '../columns/columnsCommon.js';
 import type { Page, SessionUser } from '../../../shared/types/api.js';
 import type { ReviewStatus, RunRecord, RunSummary, RunWindow } from '../../../shared/types/runs.js';
 import type { RunListQuerySchema, RunSortKey } from '../../../shared/contract/runs.js';
+import { COLUMN_RUNS_CUT } from '../../../shared/contract/columns.js';
 import type { Validated } from '../../../shared/contract/schema.js';
 
 export function toRunSummary(r: Omit<RatingRun, 'results'>, authorName: string | null): RunSummary {
@@ -78,13 +79,21 @@ const fromRow = (r: SummaryRow): RunSummary => ({
   version: r.version,
 });
 
-/** The column page's runs: ratings only (runs of ratings as found are listed from their inspection). */
-export async function listRunSummaries(em: EntityManager, columnId: string): Promise<RunSummary[]> {
+/**
+ * The column page's runs: the newest COLUMN_RUNS_CUT ratings (runs of ratings as found are listed from their
+ * inspection) and how many ratings the column has in all.
+ */
+export async function listRunSummaries(em: EntityManager, columnId: string): Promise<{ runs: RunSummary[]; runsTotal: number }> {
   const rows = await em.query<SummaryRow[]>(
-    `${SUMMARY_SQL} WHERE r.column_id = $1 AND r.kind = 'rating' ORDER BY r.created_at DESC LIMIT 200`,
+    `${SUMMARY_SQL} WHERE r.column_id = $1 AND r.kind = 'rating' ORDER BY r.created_at DESC LIMIT ${COLUMN_RUNS_CUT}`,
     [columnId],
   );
-  return rows.map(fromRow);
+  if (rows.length < COLUMN_RUNS_CUT) return { runs: rows.map(fromRow), runsTotal: rows.length };
+  const [count] = await em.query<{ n: number }[]>(
+    `SELECT count(*)::int AS n FROM rating_runs r WHERE r.column_id = $1 AND r.kind = 'rating'`,
+    [columnId],
+  );
+  return { runs: rows.map(fromRow), runsTotal: count?.n ?? rows.length };
 }
 
 const ORDER_OF: Record<RunSortKey, string> = {
