@@ -2,10 +2,37 @@
  * Rating request and result payloads, shared by the engine, the API, the CLI and the client.
  * SI units throughout; the unit is part of each field name.
  */
+import type { FromSchema, JSONSchema } from 'json-schema-to-ts';
+import type {
+  methodOptionsSchema,
+  passLayoutSchema,
+  ratingRequestSchema,
+  sectionGeometrySchema,
+  trayLoadSchema,
+  valveDataSchema,
+} from '../schemas/ratingRequest.js';
 
-export type TrayType = 'sieve' | 'fixed-valve' | 'moving-valve';
-export type FoamingClass = 'low' | 'moderate' | 'high' | 'very-high';
-export type JetFloodMethod = 'fair' | 'kister-haas';
+/**
+ * Request types are derived from their JSON schemas (shared/schemas/ratingRequest.ts), where each field is
+ * declared once with its bounds and description. Fields with a schema default (systemFactor, foaming,
+ * methods, jetFlood, nearFraction) stay optional: ajv fills them in on the API, but the engine is also called
+ * with requests built in code and applies the same defaults itself (server/engine/prepare.ts, limits.ts).
+ */
+type Request<S extends JSONSchema> = FromSchema<S, { keepDefaultedPropertiesOptional: true }>;
+
+export type ValveData = Request<typeof valveDataSchema>;
+/** Layout of a two- or four-pass tray (passLayoutSchema). */
+export type PassLayout = Request<typeof passLayoutSchema>;
+export type SectionGeometry = Request<typeof sectionGeometrySchema>;
+export type TrayLoad = Request<typeof trayLoadSchema>;
+export type MethodOptions = Request<typeof methodOptionsSchema>;
+export type RatingRequest = Request<typeof ratingRequestSchema>;
+
+export type TrayType = SectionGeometry['trayType'];
+export type FoamingClass = NonNullable<SectionGeometry['foaming']>;
+export type JetFloodMethod = NonNullable<MethodOptions['jetFlood']>;
+/** Where a multipass tray's odd-numbered trays drain (passLayoutSchema oddTrayOutlets). */
+export type PassOutlets = PassLayout['oddTrayOutlets'];
 /**
  * 'ok' within the limit, 'near' close to it, 'over' beyond it; 'na' the check does not apply to this tray
  * (the liquid-side checks of a dry tray, entrainment past flood, a seal the geometry already provides).
@@ -16,99 +43,6 @@ export type CheckStatus = 'ok' | 'near' | 'over' | 'na';
  * (100 % of flood by the chosen method); otherwise the worst status of its checks.
  */
 export type TrayState = 'ok' | 'near' | 'over' | 'flooded' | 'dry';
-
-export interface ValveData {
-  count: number;
-  orificeDiameter_mm: number;
-  valveThickness_mm: number;
-  materialDensity_kg_m3: number;
-  /** weight with legs / weight without legs (Klein 1982, R_vw) */
-  legFactor: number;
-  orificeShape: 'flat' | 'venturi';
-}
-
-/**
- * Where a multipass tray's passes drain. Two-pass: 'side' = to the two side downcomers, 'inner' = to the
- * centre downcomer. Four-pass: 'side' = to the side downcomers and the centre downcomer, 'inner' = to the
- * two off-centre downcomers. Trays alternate, so the other kind is the even-numbered trays.
- */
-export type PassOutlets = 'side' | 'inner';
-
-/**
- * Layout of a two- or four-pass tray, symmetric about the column axis, with vertical downcomers (the
- * top widths bound the pass panels). Widths are measured across the flow direction at the tray deck.
- */
-export interface PassLayout {
-  /** width of each side downcomer, shell to weir [mm] */
-  sideDowncomerWidth_mm: number;
-  /** full width of the centre downcomer [mm] */
-  centreDowncomerWidth_mm: number;
-  /** four-pass: full width of each off-centre downcomer [mm] */
-  offCentreDowncomerWidth_mm?: number;
-  /** four-pass: distance from the column axis to each off-centre downcomer's centre line [mm] */
-  offCentreDowncomerOffset_mm?: number;
-  /** where the odd-numbered trays drain (the even-numbered ones drain to the other downcomers) */
-  oddTrayOutlets: PassOutlets;
-  /**
-   * Fraction of the tray's liquid in each pass, across the tray from one shell wall to the other
-   * (one entry per pass, summing to 1). Absent: equal split.
-   */
-  liquidSplit?: number[];
-}
-
-export interface SectionGeometry {
-  trayType: TrayType;
-  passes: 1 | 2 | 4;
-  /** two- and four-pass trays: the pass layout; absent, passes are rated as equal shares of the totals */
-  passLayout?: PassLayout;
-  columnDiameter_m: number;
-  traySpacing_mm: number;
-  activeArea_m2: number;
-  downcomerTopArea_m2: number;
-  downcomerBottomArea_m2: number;
-  outletWeirLength_m: number;
-  weirHeight_mm: number;
-  downcomerClearance_mm: number;
-  holeArea_m2: number;
-  holeDiameter_mm: number;
-  deckThickness_mm: number;
-  systemFactor?: number;
-  foaming?: FoamingClass;
-  valves?: ValveData;
-  /**
-   * valve trays: open slot (curtain) area of all valves fully open [m²], the vertical opening through which
-   * vapour leaves the valves; gives the fractional open area A_f of the flood correlations (Perry's 8th ed.)
-   */
-  slotArea_m2?: number;
-  /** optional measured or vendor dry-tray orifice coefficient C_v (sieve trays); overrides the Hughmark & O'Connell fit */
-  orificeCoefficient?: number;
-}
-
-export interface TrayLoad {
-  tray: number;
-  vapourMassFlow_kg_h: number;
-  liquidMassFlow_kg_h: number;
-  vapourDensity_kg_m3: number;
-  liquidDensity_kg_m3: number;
-  surfaceTension_mN_m: number;
-  liquidViscosity_mPa_s?: number;
-  temperature_C?: number;
-  pressure_kPa?: number;
-}
-
-export interface MethodOptions {
-  jetFlood?: JetFloodMethod;
-  /** limit overrides, keyed by check name */
-  limits?: Partial<Record<CheckName, number>>;
-  /** fraction of a limit at which status becomes 'near' (default 0.9) */
-  nearFraction?: number;
-}
-
-export interface RatingRequest {
-  section: SectionGeometry;
-  trays: TrayLoad[];
-  methods?: MethodOptions;
-}
 
 export const CHECK_NAMES = [
   'jetFlood',
