@@ -3,37 +3,24 @@
  * the engine (server/engine/heatPlan/), the CLI, the API and the client. SI units; the unit is part of
  * each field name. Duties are always listed in the input's pump-around order.
  */
-import type { CheckName, MethodOptions, TrayLoad, TrayResult } from './rating.js';
-import type { DutySweep, PumpAroundSpec, StudySection, TrayNumbering } from './pumpAround.js';
+import type { FromSchema, JSONSchema } from 'json-schema-to-ts';
+import type { heatPlanSchema, planPumpAroundSchema, simulationCaseSchema, trayPropertyDriftSchema } from '../schemas/heatPlan.js';
+import type { CheckName, TrayLoad, TrayResult } from './rating.js';
+
+/**
+ * Plan input types are derived from their JSON schemas (shared/schemas/heatPlan.ts), where each field is
+ * declared once with its bounds and description. Defaulted fields (numbering, margin, methods,
+ * fractionationThreshold) stay optional: the engine applies the same defaults to inputs built in code.
+ */
+type Input<S extends JSONSchema> = FromSchema<S, { keepDefaultedPropertiesOptional: true }>;
 
 /** A pump-around of the plan: the study's pump-around plus its draw temperature and its duty sweep. */
-export interface PlanPumpAround extends PumpAroundSpec {
-  /** temperature of the liquid drawn (the draw tray's liquid, from the load case) [°C] */
-  drawTemperature_C: number;
-  sweep: DutySweep;
-  /** latent heat of the vapour condensed in this zone [kJ/kg]; the plan's latentHeat_kJ_kg when absent */
-  latentHeat_kJ_kg?: number;
-}
-
-export interface HeatPlanInput {
-  sections: StudySection[];
-  /** base load case at the base duties (vapour entering each tray, net liquid leaving it) */
-  trays: TrayLoad[];
-  numbering?: TrayNumbering;
-  /** latent heat of the condensed vapour [kJ/kg], for every zone without its own value */
-  latentHeat_kJ_kg: number;
-  /** fraction of the dry-out duties kept at most (default 0.7, common practice); see the engine README */
-  margin?: number;
-  methods?: MethodOptions;
-  /** one to three pump-arounds, zones not overlapping */
-  pumpArounds: PlanPumpAround[];
-  /** heat released above this temperature counts as useful (what the preheat train can take) [°C] */
-  usefulAboveTemperature_C: number;
-  /** a section's L/V below this fraction of its base-case L/V is flagged (default 0.8, our choice) */
-  fractionationThreshold?: number;
-  /** property drift per tray with the duties (from calibration); properties held at base without it */
-  propertyDrift?: TrayPropertyDrift[];
-}
+export type PlanPumpAround = Input<typeof planPumpAroundSchema>;
+export type HeatPlanInput = Input<typeof heatPlanSchema>;
+/** Property drift of one tray per kW of each pump-around's duty change (trayPropertyDriftSchema). */
+export type TrayPropertyDrift = Input<typeof trayPropertyDriftSchema>;
+/** A simulation case tagged with its pump-around duties (input order), every tray of the base case. */
+export type SimulationCase = Input<typeof simulationCaseSchema>;
 
 /** The constraint a boundary point is named by: a rating check, or 'dry-out' (no liquid or vapour left). */
 export type PlanCheck = CheckName | 'dry-out';
@@ -139,26 +126,6 @@ export interface HeatPlanResult {
 }
 
 export type HeatPlanValidation = { ok: true; value: HeatPlanInput } | { ok: false; errors: { path: string; message: string }[] };
-
-/**
- * Property drift of one tray: change of each property per kW of each pump-around's duty change from base
- * (input order), p = p0 + Σ_i perDuty[i]·(Q_i − Q0_i). Fitted by calibration; absent means held at base.
- */
-export interface TrayPropertyDrift {
-  tray: number;
-  vapourDensity_kg_m3_per_kW: number[];
-  liquidDensity_kg_m3_per_kW: number[];
-  surfaceTension_mN_m_per_kW: number[];
-  /** only when the base tray has a viscosity */
-  liquidViscosity_mPa_s_per_kW?: number[];
-}
-
-/** A simulation case tagged with its pump-around duties (input order), every tray of the base case. */
-export interface SimulationCase {
-  name?: string;
-  duties_kW: number[];
-  trays: TrayLoad[];
-}
 
 export interface ZoneFit {
   pumpAround: string;

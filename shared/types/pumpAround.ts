@@ -3,58 +3,29 @@
  * SI units throughout; the unit is part of each field name. Trays are numbered as the input says
  * (`numbering`, top-down by default); every tray number in the result uses the input's numbering.
  */
-import type { CheckName, MethodOptions, SectionGeometry, TrayLoad, TrayResult } from './rating.js';
-
-export type TrayNumbering = 'top-down' | 'bottom-up';
-
-/** A column section: the rating geometry plus its name and tray range (inclusive, either order). */
-export interface StudySection extends SectionGeometry {
-  name: string;
-  fromTray: number;
-  toTray: number;
-}
+import type { FromSchema, JSONSchema } from 'json-schema-to-ts';
+import type {
+  dutySweepSchema,
+  pumpAroundSpecSchema,
+  pumpAroundStudySchema,
+  studySectionSchema,
+} from '../schemas/pumpAroundStudy.js';
+import type { CheckName, TrayResult } from './rating.js';
 
 /**
- * The pump-around varied by the study. Give exactly one of `returnTemperatureDrop_K` (circulation then
- * follows the duty, m = Q/(c_p ΔT)) or `circulation_kg_h` (ΔT then follows the duty).
+ * Study input types are derived from their JSON schemas (shared/schemas/pumpAroundStudy.ts), where each field
+ * is declared once with its bounds and description. Defaulted fields (margin, methods, numbering) stay
+ * optional: the engine applies the same defaults to inputs built in code.
  */
-export interface PumpAroundSpec {
-  name: string;
-  /** tray the pump-around liquid is drawn from (the bottom of the zone) */
-  drawTray: number;
-  /** tray the cooled liquid is returned to (the top of the zone, above the draw) */
-  returnTray: number;
-  /** duty of the base load case [kW] */
-  baseDuty_kW: number;
-  liquidHeatCapacity_kJ_kgK: number;
-  returnTemperatureDrop_K?: number;
-  circulation_kg_h?: number;
-}
+type Input<S extends JSONSchema> = FromSchema<S, { keepDefaultedPropertiesOptional: true }>;
 
-export interface DutySweep {
-  fromDuty_kW: number;
-  toDuty_kW: number;
-  /** number of intervals; the sweep has steps + 1 points */
-  steps: number;
-}
-
-export interface StudyInput {
-  sections: StudySection[];
-  /**
-   * Base load case at the base duty: vapour entering each tray from below, liquid leaving it. In the
-   * pump-around zone the liquid is the net internal liquid, without the pump-around circulation (the
-   * pump-around modelled as a side cooler, as a simulator's per-stage export gives it).
-   */
-  trays: TrayLoad[];
-  pumpAround: PumpAroundSpec;
-  /** latent heat of the vapour condensed by the extra duty [kJ/kg]; see estimateLatentHeat */
-  latentHeat_kJ_kg: number;
-  /** fraction of the dry-out duty recommended at most (default 0.7, common practice) */
-  margin?: number;
-  sweep: DutySweep;
-  methods?: MethodOptions;
-  numbering?: TrayNumbering;
-}
+/** A column section: the rating geometry plus its name and tray range (inclusive, either order). */
+export type StudySection = Input<typeof studySectionSchema>;
+/** The pump-around varied by the study: exactly one of returnTemperatureDrop_K or circulation_kg_h. */
+export type PumpAroundSpec = Input<typeof pumpAroundSpecSchema>;
+export type DutySweep = Input<typeof dutySweepSchema>;
+export type StudyInput = Input<typeof pumpAroundStudySchema>;
+export type TrayNumbering = NonNullable<StudyInput['numbering']>;
 
 /** One tray at one duty: the shifted traffic and its full rating. */
 export interface StudyTrayPoint {
