@@ -7,31 +7,29 @@ import { Type, type Static } from '@sinclair/typebox';
 import { heatPlanSchema } from '../schemas/heatPlan.js';
 import { dutySweepSchema, pumpAroundSpecSchema, pumpAroundStudySchema } from '../schemas/pumpAroundStudy.js';
 import { methodOptionsSchema } from '../schemas/ratingRequest.js';
-import { CHECK_NAMES, type MethodOptions } from '../types/rating.js';
+import { CHECK_NAMES } from '../types/rating.js';
 import { REVIEW_STATUSES } from '../types/runs.js';
 import type {
   BoundaryPoint,
-  HeatPlanInput,
   PlanSuggestion,
   PlanViolation,
   PointLoadsSource,
   PumpAroundHeat,
   SectionFractionation,
 } from '../types/heatPlan.js';
-import type { DutySweep } from '../types/pumpAround.js';
 import { fileAnswer, route } from './route.js';
-import { Defaulted, IdParams, Nullable, Obj, StringEnum, Timestamp, Uuid } from './schema.js';
+import { Defaulted, FromJson, IdParams, Nullable, Obj, StringEnum, Timestamp, Uuid } from './schema.js';
 
-/** A plain JSON schema (shared/schemas) as a contract part typed by its payload type. */
+/** A contract part typed by its payload type (the engine's result types, shared/types/heatPlan.ts). */
 const json = <T>(schema: object) => Type.Unsafe<T>(schema);
 const Num = () => Type.Number();
 const Duties = () => Type.Array(Type.Number());
 const CheckName = StringEnum(CHECK_NAMES);
 const PlanCheck = StringEnum([...CHECK_NAMES, 'dry-out'] as const);
-const Sweep = json<DutySweep>({
+const Sweep = FromJson({
   ...dutySweepSchema,
   properties: { ...dutySweepSchema.properties, steps: { type: 'integer', minimum: 1, maximum: 40 } },
-});
+} as const);
 const pa = pumpAroundSpecSchema.properties;
 const temperature = { type: 'number', minimum: -100, maximum: 800 } as const;
 const duty = Type.Number({ minimum: 0, maximum: 1e6 });
@@ -57,14 +55,14 @@ export type LoadCaseDutyTags = Static<typeof LoadCaseDutyTagsSchema>;
 export const HeatPlanPumpAroundChoiceSchema = Obj({
   pumpAroundId: Uuid(),
   sweep: Sweep,
-  liquidHeatCapacity_kJ_kgK: json<number>(pa.liquidHeatCapacity_kJ_kgK),
+  liquidHeatCapacity_kJ_kgK: FromJson(pa.liquidHeatCapacity_kJ_kgK),
   /** give one of returnTemperatureDrop_K or circulation_kg_h */
-  returnTemperatureDrop_K: Type.Optional(json<number>(pa.returnTemperatureDrop_K)),
-  circulation_kg_h: Type.Optional(json<number>(pa.circulation_kg_h)),
+  returnTemperatureDrop_K: Type.Optional(FromJson(pa.returnTemperatureDrop_K)),
+  circulation_kg_h: Type.Optional(FromJson(pa.circulation_kg_h)),
   /** draw temperature [°C]; when absent, the base load case's temperature on the draw tray */
-  drawTemperature_C: Type.Optional(json<number>(temperature)),
+  drawTemperature_C: Type.Optional(FromJson(temperature)),
   /** duty in the base load case; defaults to the pump-around's stored duty */
-  baseDuty_kW: Type.Optional(json<number>(pa.baseDuty_kW)),
+  baseDuty_kW: Type.Optional(FromJson(pa.baseDuty_kW)),
 });
 export type HeatPlanPumpAroundChoice = Static<typeof HeatPlanPumpAroundChoiceSchema>;
 
@@ -74,9 +72,9 @@ export const CreateHeatPlanBodySchema = Obj({
   loadCaseId: Uuid(),
   /** two or three of the column's pump-arounds, in the order of the map's axes */
   pumpArounds: Type.Array(HeatPlanPumpAroundChoiceSchema, { minItems: 2, maxItems: 3 }),
-  latentHeat_kJ_kg: json<number>(pumpAroundStudySchema.properties.latentHeat_kJ_kg),
+  latentHeat_kJ_kg: FromJson(pumpAroundStudySchema.properties.latentHeat_kJ_kg),
   /** heat counts as useful above this temperature [°C] (what the preheat train can take) */
-  usefulAboveTemperature_C: json<number>(temperature),
+  usefulAboveTemperature_C: FromJson(temperature),
   /** fraction of the dry-out duty kept as margin; default 0.7 (common practice) */
   margin: Type.Optional(Type.Number({ exclusiveMinimum: 0, maximum: 1 })),
   /** a section's liquid-to-vapour ratio is flagged below this fraction of the base case's; default 0.8 */
@@ -87,7 +85,7 @@ export const CreateHeatPlanBodySchema = Obj({
   simulationCaseIds: Type.Optional(Type.Array(Uuid(), { minItems: 2, maxItems: 12 })),
   /** true when the base case's zone liquid carries the circulation (as a rating case does) */
   zoneLiquidIncludesCirculation: Defaulted(Type.Boolean(), false),
-  methods: Type.Optional(json<MethodOptions>(methodOptionsSchema)),
+  methods: Type.Optional(FromJson(methodOptionsSchema)),
 });
 export type CreateHeatPlanBody = Static<typeof CreateHeatPlanBodySchema>;
 
@@ -239,7 +237,7 @@ export const HeatPlanSourceSchema = Obj({
 export type HeatPlanSource = Static<typeof HeatPlanSourceSchema>;
 
 /** What is stored as the inputs snapshot: the exact engine input and its source. */
-export const HeatPlanInputsSnapshotSchema = Obj({ source: HeatPlanSourceSchema, input: json<HeatPlanInput>(heatPlanSchema) });
+export const HeatPlanInputsSnapshotSchema = Obj({ source: HeatPlanSourceSchema, input: FromJson(heatPlanSchema) });
 export type HeatPlanInputsSnapshot = Static<typeof HeatPlanInputsSnapshotSchema>;
 
 const summaryFields = {

@@ -11,6 +11,8 @@ import {
   type TSchema,
   type TString,
 } from '@sinclair/typebox';
+import type { JSONSchema } from 'json-schema-to-ts';
+import type { JsonPayload } from '../types/jsonPayload.js';
 
 /** The bare uuid form (validation.ts refuses `urn:uuid:`). */
 export const Uuid = (o: SchemaOptions = {}) => Type.String({ format: 'uuid', ...o });
@@ -30,6 +32,13 @@ export function Nullable<T extends TSchema>(s: T) {
 /** An object that refuses unknown fields: every body and every answer of the API. */
 export const Obj = <P extends Record<string, TSchema>>(props: P, o: SchemaOptions = {}) =>
   Type.Object(props, { additionalProperties: false, ...o });
+
+/**
+ * A plain JSON schema (shared/schemas, `as const`) as a contract part, typed from the schema itself
+ * (JsonPayload). `S extends object` with the JSONSchema test inside: constraining S to JSONSchema directly
+ * makes TypeScript give up ("excessively deep") when the call sits in an Obj({...}) literal.
+ */
+export const FromJson = <S extends object>(schema: S) => Type.Unsafe<S extends JSONSchema ? JsonPayload<S> : never>(schema);
 
 /** ISO 8601 timestamp as the API sends it. */
 export const Timestamp = () => Type.String({ format: 'date-time' });

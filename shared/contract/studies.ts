@@ -6,14 +6,11 @@
 import { Type, type Static } from '@sinclair/typebox';
 import { dutySweepSchema, pumpAroundSpecSchema, pumpAroundStudySchema } from '../schemas/pumpAroundStudy.js';
 import { CHECK_NAMES } from '../types/rating.js';
-import type { DutySweep, StudyInput } from '../types/pumpAround.js';
 import { MethodOptionsSchema, ResultNumber } from './rating.js';
 import { ExportQuerySchema, EXPORT_TYPES, REVIEW_STATUSES, ReviewEntrySchema } from './runs.js';
 import { fileAnswer, route } from './route.js';
-import { IdParams, Nullable, Obj, StringEnum, Timestamp, Uuid } from './schema.js';
+import { FromJson, IdParams, Nullable, Obj, StringEnum, Timestamp, Uuid } from './schema.js';
 
-/** A plain JSON schema (shared/schemas) as a contract part typed by its payload type. */
-const json = <T>(schema: object) => Type.Unsafe<T>(schema);
 const pa = pumpAroundSpecSchema.properties;
 const CheckName = StringEnum(CHECK_NAMES);
 const Tray = () => Type.Integer();
@@ -27,14 +24,14 @@ export const CreateStudyBodySchema = Obj({
   label: Type.Optional(Type.String({ maxLength: 120 })),
   loadCaseId: Uuid(),
   pumpAroundId: Uuid(),
-  latentHeat_kJ_kg: json<number>(pumpAroundStudySchema.properties.latentHeat_kJ_kg),
+  latentHeat_kJ_kg: FromJson(pumpAroundStudySchema.properties.latentHeat_kJ_kg),
   /** defaults to the pump-around's stored value when it has one */
-  liquidHeatCapacity_kJ_kgK: Type.Optional(json<number>(pa.liquidHeatCapacity_kJ_kgK)),
+  liquidHeatCapacity_kJ_kgK: Type.Optional(FromJson(pa.liquidHeatCapacity_kJ_kgK)),
   /** give one of returnTemperatureDrop_K or circulation_kg_h (else the pump-around's stored one is used) */
-  returnTemperatureDrop_K: Type.Optional(json<number>(pa.returnTemperatureDrop_K)),
-  circulation_kg_h: Type.Optional(json<number>(pa.circulation_kg_h)),
+  returnTemperatureDrop_K: Type.Optional(FromJson(pa.returnTemperatureDrop_K)),
+  circulation_kg_h: Type.Optional(FromJson(pa.circulation_kg_h)),
   /** duty of the pump-around in the base load case; defaults to the pump-around's stored duty */
-  baseDuty_kW: Type.Optional(json<number>(pa.baseDuty_kW)),
+  baseDuty_kW: Type.Optional(FromJson(pa.baseDuty_kW)),
   /**
    * true when the load case's liquid on the zone trays already carries the pump-around circulation (as a
    * rating case does); the base circulation is then taken off before the study. false: the zone liquid is
@@ -42,10 +39,10 @@ export const CreateStudyBodySchema = Obj({
    * circulation or leaves it out, so the caller must say which.
    */
   zoneLiquidIncludesCirculation: Type.Boolean(),
-  sweep: json<DutySweep>({
+  sweep: FromJson({
     ...dutySweepSchema,
     properties: { ...dutySweepSchema.properties, steps: { type: 'integer', minimum: 1, maximum: STORED_STUDY_MAX_STEPS } },
-  }),
+  } as const),
   /** fraction of the dry-out duty recommended at most; default 0.7 (common practice) */
   margin: Type.Optional(Type.Number({ exclusiveMinimum: 0, maximum: 1, default: 0.7 })),
   methods: Type.Optional(MethodOptionsSchema),
@@ -83,7 +80,7 @@ export const StudySourceSchema = Obj({
 export type StudySource = Static<typeof StudySourceSchema>;
 
 /** What is stored as the inputs snapshot: the exact engine input and its source. */
-export const StudyInputsSnapshotSchema = Obj({ source: StudySourceSchema, input: json<StudyInput>(pumpAroundStudySchema) });
+export const StudyInputsSnapshotSchema = Obj({ source: StudySourceSchema, input: FromJson(pumpAroundStudySchema) });
 export type StudyInputsSnapshot = Static<typeof StudyInputsSnapshotSchema>;
 
 /** One tray at one duty, slimmed: traffic and, per check (in `checkNames` order), percent of limit and status. */

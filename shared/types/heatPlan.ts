@@ -3,16 +3,15 @@
  * the engine (server/engine/heatPlan/), the CLI, the API and the client. SI units; the unit is part of
  * each field name. Duties are always listed in the input's pump-around order.
  */
-import type { FromSchema, JSONSchema } from 'json-schema-to-ts';
 import type { heatPlanSchema, planPumpAroundSchema, simulationCaseSchema, trayPropertyDriftSchema } from '../schemas/heatPlan.js';
+import type { JsonPayload as Input } from './jsonPayload.js';
 import type { CheckName, TrayLoad, TrayResult } from './rating.js';
 
-/**
+/*
  * Plan input types are derived from their JSON schemas (shared/schemas/heatPlan.ts), where each field is
  * declared once with its bounds and description. Defaulted fields (numbering, margin, methods,
  * fractionationThreshold) stay optional: the engine applies the same defaults to inputs built in code.
  */
-type Input<S extends JSONSchema> = FromSchema<S, { keepDefaultedPropertiesOptional: true }>;
 
 /** A pump-around of the plan: the study's pump-around plus its draw temperature and its duty sweep. */
 export type PlanPumpAround = Input<typeof planPumpAroundSchema>;

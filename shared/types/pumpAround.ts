@@ -3,21 +3,20 @@
  * SI units throughout; the unit is part of each field name. Trays are numbered as the input says
  * (`numbering`, top-down by default); every tray number in the result uses the input's numbering.
  */
-import type { FromSchema, JSONSchema } from 'json-schema-to-ts';
 import type {
   dutySweepSchema,
   pumpAroundSpecSchema,
   pumpAroundStudySchema,
   studySectionSchema,
 } from '../schemas/pumpAroundStudy.js';
+import type { JsonPayload as Input } from './jsonPayload.js';
 import type { CheckName, TrayResult } from './rating.js';
 
-/**
+/*
  * Study input types are derived from their JSON schemas (shared/schemas/pumpAroundStudy.ts), where each field
  * is declared once with its bounds and description. Defaulted fields (margin, methods, numbering) stay
  * optional: the engine applies the same defaults to inputs built in code.
  */
-type Input<S extends JSONSchema> = FromSchema<S, { keepDefaultedPropertiesOptional: true }>;
 
 /** A column section: the rating geometry plus its name and tray range (inclusive, either order). */
 export type StudySection = Input<typeof studySectionSchema>;

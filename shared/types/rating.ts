@@ -2,7 +2,7 @@
  * Rating request and result payloads, shared by the engine, the API, the CLI and the client.
  * SI units throughout; the unit is part of each field name.
  */
-import type { FromSchema, JSONSchema } from 'json-schema-to-ts';
+import type { JsonPayload as Request } from './jsonPayload.js';
 import type {
   methodOptionsSchema,
   passLayoutSchema,
@@ -12,14 +12,12 @@ import type {
   valveDataSchema,
 } from '../schemas/ratingRequest.js';
 
-/**
+/*
  * Request types are derived from their JSON schemas (shared/schemas/ratingRequest.ts), where each field is
  * declared once with its bounds and description. Fields with a schema default (systemFactor, foaming,
- * methods, jetFlood, nearFraction) stay optional: ajv fills them in on the API, but the engine is also called
- * with requests built in code and applies the same defaults itself (server/engine/prepare.ts, limits.ts).
+ * methods, jetFlood, nearFraction) stay optional: the engine applies the same defaults itself
+ * (server/engine/prepare.ts, limits.ts).
  */
-type Request<S extends JSONSchema> = FromSchema<S, { keepDefaultedPropertiesOptional: true }>;
-
 export type ValveData = Request<typeof valveDataSchema>;
 /** Layout of a two- or four-pass tray (passLayoutSchema). */
 export type PassLayout = Request<typeof passLayoutSchema>;
