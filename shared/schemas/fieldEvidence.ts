@@ -5,8 +5,7 @@
  * Section geometry, tray loads and method options are the rating request's own sub-schemas.
  */
 import { Type } from '@sinclair/typebox';
-import type { MethodOptions, TrayLoad } from '../types/rating.js';
-import type { StudySection } from '../types/pumpAround.js';
+import { FromJson } from '../contract/schema.js';
 import { methodOptionsSchema, trayLoadSchema } from './ratingRequest.js';
 import { studySectionSchema } from './pumpAroundStudy.js';
 
@@ -18,9 +17,9 @@ export const SCAN_FINDINGS = ['normal', 'flooded', 'missing-tray', 'low-liquid',
 
 export const scanFindingSchema = Type.Union(SCAN_FINDINGS.map((f) => Type.Literal(f)));
 export const trayNumberingSchema = Type.Union([Type.Literal('top-down'), Type.Literal('bottom-up')]);
-export const elevationSectionSchema = Type.Unsafe<StudySection>(studySectionSchema);
-export const trayLoadTSchema = Type.Unsafe<TrayLoad>(trayLoadSchema);
-export const methodOptionsTSchema = Type.Unsafe<MethodOptions>(methodOptionsSchema);
+export const elevationSectionSchema = FromJson(studySectionSchema);
+export const trayLoadTSchema = FromJson(trayLoadSchema);
+export const methodOptionsTSchema = FromJson(methodOptionsSchema);
 
 /** The datum: the elevation of one tray's deck (m, on the scan's elevation scale), nudged by offset_m. */
 export const scanDatumSchema = Type.Object(
