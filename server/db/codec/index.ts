@@ -17,7 +17,7 @@ function unknownLayout(what: string, b: Buffer): Error {
 
 /** Results as stored bytes (FRB4). decodeResults(encodeResults(r)) deep-equals r. */
 export function encodeResults(r: RunResults): Buffer {
-  return encodeFrb4(r as unknown as Record<string, unknown>);
+  return encodeFrb4(r);
 }
 
 /**
