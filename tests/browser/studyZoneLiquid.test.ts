@@ -38,12 +38,8 @@ describe('zone liquid question on a new study', () => {
     await p.getByLabel('Latent heat λ (kJ/kg)').fill('265');
     await p.getByLabel('Liquid heat capacity c_p (kJ/(kg·K))').fill('2.6');
     await p.getByLabel('Return temperature drop ΔT, held fixed (K)').fill('110');
-    await p.waitForFunction(
-      () =>
-        /most likely includes the circulation/.test(document.querySelector('[data-test=zone-liquid-hint]')?.textContent ?? ''),
-      undefined,
-      { timeout: 60000 },
-    );
+    // a locator wait (polled by Playwright) rather than waitForFunction, whose animation-frame polling can stall
+    await hint.filter({ hasText: 'most likely includes the circulation' }).waitFor({ timeout: 60000 });
     expect(await hint.innerText()).toMatch(/% of the base circulation/);
     await shot(p, 'study-zone-liquid-question');
   });
